@@ -1,0 +1,35 @@
+import type { Action } from "./permissions";
+
+/**
+ * Which action a page address needs. The request proxy answers 403 from this table before a page renders;
+ * pages check again with fresh user data. Longest prefix wins; addresses not listed need only a session.
+ */
+const ROUTE_ACTIONS: ReadonlyArray<readonly [prefix: string, action: Action]> = [
+  ["/admin/users", "user.manage"],
+  ["/admin/audit", "audit.view"],
+  ["/intake", "shipment.view"],
+  ["/samples", "sample.view"],
+  ["/runs", "run.view"],
+  ["/equipment", "equipment.view"],
+  ["/review", "run.review"],
+  ["/certificates", "certificate.view"],
+  ["/portal", "portal.view"],
+  ["/account", "account.self"],
+];
+
+/** Addresses anyone may open, signed in or not. */
+const PUBLIC_PREFIXES = ["/sign-in", "/verify", "/api/health", "/api/auth", "/forbidden"];
+
+export function isPublicPath(pathname: string): boolean {
+  return PUBLIC_PREFIXES.some((prefix) => pathname === prefix || pathname.startsWith(`${prefix}/`));
+}
+
+/** The action a path needs, or null when a session is enough. */
+export function actionForPath(pathname: string): Action | null {
+  let best: readonly [string, Action] | null = null;
+  for (const entry of ROUTE_ACTIONS) {
+    const [prefix] = entry;
+    if ((pathname === prefix || pathname.startsWith(`${prefix}/`)) && (!best || prefix.length > best[0].length)) best = entry;
+  }
+  return best ? best[1] : null;
+}

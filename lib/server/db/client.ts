@@ -1,0 +1,24 @@
+import "server-only";
+import { PrismaPg } from "@prisma/adapter-pg";
+import { PrismaClient } from "@/lib/generated/prisma/client";
+import { getEnv } from "../env";
+
+function createClient(connectionString: string) {
+  const adapter = new PrismaPg({ connectionString, max: 10 });
+  // Password hashes never leave the database unless an operation asks for them by name.
+  return new PrismaClient({ adapter, omit: { user: { passwordHash: true } } });
+}
+export type Db = ReturnType<typeof createClient>;
+
+const globalForDb = globalThis as unknown as { seeplineDb?: Db };
+
+/** The process's one database client (kept on globalThis so development reloads do not open new pools). */
+export function getDb(): Db {
+  if (!globalForDb.seeplineDb) globalForDb.seeplineDb = createClient(getEnv().DATABASE_URL);
+  return globalForDb.seeplineDb;
+}
+
+/** For tests and scripts that manage their own database address. */
+export function createDb(connectionString: string): Db {
+  return createClient(connectionString);
+}

@@ -1,0 +1,56 @@
+import { z } from "zod";
+import { ROLES } from "../policy/permissions";
+
+// Shared by the forms (react-hook-form + zodResolver) and the server operations.
+
+export const emailSchema = z.string().trim().toLowerCase().email("Enter an e-mail address such as name@example.org.");
+
+/** Lab rule: long rather than complex. */
+export const newPasswordSchema = z
+  .string()
+  .min(12, "Use at least 12 characters.")
+  .max(200, "Use at most 200 characters.");
+
+export const signInSchema = z.object({
+  email: emailSchema,
+  password: z.string().min(1, "Enter your password.").max(200),
+});
+export type SignInInput = z.infer<typeof signInSchema>;
+
+export const createUserSchema = z
+  .object({
+    name: z.string().trim().min(2, "Enter the person's full name.").max(120),
+    email: emailSchema,
+    role: z.enum(ROLES, { message: "Choose a role." }),
+    clientOrganizationId: z.string().trim().optional().transform((v) => (v ? v : undefined)),
+    password: newPasswordSchema,
+  })
+  .superRefine((value, ctx) => {
+    if (value.role === "CLIENT_USER" && !value.clientOrganizationId)
+      ctx.addIssue({ code: "custom", path: ["clientOrganizationId"], message: "A client user needs their organisation." });
+    if (value.role !== "CLIENT_USER" && value.clientOrganizationId)
+      ctx.addIssue({ code: "custom", path: ["clientOrganizationId"], message: "Only client users belong to an organisation." });
+  });
+export type CreateUserInput = z.input<typeof createUserSchema>;
+
+export const resetPasswordSchema = z.object({
+  userId: z.string().min(1),
+  password: newPasswordSchema,
+});
+export type ResetPasswordInput = z.infer<typeof resetPasswordSchema>;
+
+export const setUserActiveSchema = z.object({
+  userId: z.string().min(1),
+  active: z.boolean(),
+  version: z.number().int().positive(),
+});
+
+export const changeOwnPasswordSchema = z
+  .object({
+    currentPassword: z.string().min(1, "Enter your present password."),
+    newPassword: newPasswordSchema,
+    confirmPassword: z.string(),
+  })
+  .refine((v) => v.newPassword === v.confirmPassword, { path: ["confirmPassword"], message: "The two new passwords differ." })
+  .refine((v) => v.newPassword !== v.currentPassword, { path: ["newPassword"], message: "Choose a password you have not been using." });
+export type ChangeOwnPasswordInput = z.infer<typeof changeOwnPasswordSchema>;

@@ -1,0 +1,180 @@
+// Builds the invented demo scenario: rolls at every stage of the chain so that every screen shows something.
+import type { ItemState, Prisma } from "@/lib/generated/prisma/client";
+import type { Tx } from "@/lib/server/db/transaction";
+import { allocateLabNumber } from "@/lib/server/db/allocate-lab-number";
+import { hashPassword } from "@/lib/server/auth/password";
+import { DEMO_CLIENTS, DEMO_LAB, DEMO_PASSWORD, DEMO_STAFF } from "./demo-people";
+import { DEMO_METHODS, DEMO_SPEC_LIMITS } from "./demo-method-defaults";
+import { makeDemoReadings } from "./demo-readings";
+
+const DAY = 86_400_000;
+const SPECIMEN_AREA_M2 = (Math.PI * 0.1 ** 2) / 4; // 100 mm die, common practice
+
+type Ids = Record<string, string>;
+
+export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void> {
+  const ago = (days: number) => new Date(now.getTime() - days * DAY);
+  await tx.laboratory.create({ data: { id: "lab", ...DEMO_LAB } });
+  for (const method of DEMO_METHODS) await tx.testMethod.create({ data: { code: method.code, title: method.title, defaults: method.defaults } });
+
+  // People. One hash per distinct password is enough for the demo; each user still gets their own row.
+  const passwordHash = await hashPassword(DEMO_PASSWORD);
+  const users: Ids = {};
+  for (const u of DEMO_STAFF) users[u.key] = (await tx.user.create({ data: { name: u.name, email: u.email, role: u.role, passwordHash } })).id;
+
+  const orgs: Ids = {};
+  const projects: Ids = {};
+  for (const c of DEMO_CLIENTS) {
+    const org = await tx.clientOrganization.create({ data: { code: c.code, name: c.name, contactEmail: c.contactEmail } });
+    orgs[c.code] = org.id;
+    users[c.user.key] = (await tx.user.create({
+      data: { name: c.user.name, email: c.user.email, role: "CLIENT_USER", clientOrganizationId: org.id, passwordHash },
+    })).id;
+    for (const p of c.projects) {
+      const project = await tx.project.create({ data: { ...p, clientOrganizationId: org.id } });
+      projects[p.code] = project.id;
+      await tx.specification.create({
+        data: { name: `${p.code} liner specification`, projectId: project.id, limits: { create: DEMO_SPEC_LIMITS.map((l) => ({ ...l })) } },
+      });
+    }
+  }
+  await tx.specification.create({ data: { name: "Lab template: commonly cited GCL limits", isTemplate: true, limits: { create: DEMO_SPEC_LIMITS.map((l) => ({ ...l })) } } });
+
+  const locations: Ids = {};
+  for (const [code, name] of [["RACK-A1", "Sample store, rack A shelf 1"], ["RACK-A2", "Sample store, rack A shelf 2"], ["HUMID-1", "Humid room bench 1"], ["RETAIN-1", "Retention shelf"]] as const)
+    locations[code] = (await tx.storageLocation.create({ data: { code, name } })).id;
+
+  const equipment = await createEquipment(tx, users.admin!, now);
+
+  // Shipments and rolls.
+  const ship = async (projectCode: string, orgCode: string, daysAgo: number, acknowledged: boolean, deliveredBy: string, notes: string) => {
+    const receivedAt = ago(daysAgo);
+    return tx.shipment.create({
+      data: {
+        labNumber: await allocateLabNumber(tx, "shipment", receivedAt),
+        clientOrganizationId: orgs[orgCode]!, projectId: projects[projectCode]!, deliveredBy, receivedAt,
+        receivedById: users.clerk!, conditionNotes: notes,
+        ...(acknowledged ? { acknowledgedAt: new Date(receivedAt.getTime() + 3_600_000), acknowledgedById: users.clerk! } : {}),
+      },
+    });
+  };
+  const roll = async (shipment: { id: string; projectId: string; receivedAt: Date }, n: number, state: ItemState, location: string) => {
+    const created = await tx.roll.create({
+      data: {
+        labNumber: await allocateLabNumber(tx, "roll", shipment.receivedAt),
+        shipmentId: shipment.id, projectId: shipment.projectId, rollNumber: `R-${4100 + n}`, lotNumber: `L${2260 + Math.floor(n / 3)}`,
+        product: "Needle-punched GCL, powdered sodium bentonite, nominal 4.8 kg/m²", manufacturer: "Orrin Textile Works (invented)",
+        sampleLengthMm: 1000, sampleWidthMm: 1200, machineDirectionMarked: n % 2 === 0, state, storageLocationId: locations[location]!,
+      },
+    });
+    await tx.custodyEvent.create({ data: { action: "RECEIVED", rollId: created.id, toState: "RECEIVED", actorId: users.clerk!, occurredAt: shipment.receivedAt } });
+    await tx.custodyEvent.create({ data: { action: "STORED", rollId: created.id, fromState: "RECEIVED", toState: "STORED", toLocationId: locations[location]!, actorId: users.clerk!, occurredAt: shipment.receivedAt } });
+    return created;
+  };
+
+  const s1 = await ship("MWA-C4", "MWA", 21, true, "Carrier: Dunmore Haulage (invented), driver signed", "Three rolls, wrapped, one corner of the outer film torn; liner undamaged.");
+  const certifiedRoll = await roll(s1, 1, "TESTED", "RETAIN-1");
+  const reviewRoll = await roll(s1, 2, "UNDER_TEST", "HUMID-1");
+  const testingRoll = await roll(s1, 3, "UNDER_TEST", "HUMID-1");
+  const s2 = await ship("MWA-LL", "MWA", 1, false, "Client's site engineer, by van", "Two rolls, dry, wrapping intact.");
+  await roll(s2, 4, "RECEIVED", "RACK-A1");
+  await roll(s2, 5, "RECEIVED", "RACK-A1");
+  const s3 = await ship("OMC-TPB", "OMC", 9, true, "Courier parcel 58-221 (invented)", "Samples cut on site, rolled on cores, labelled.");
+  const cutRoll = await roll(s3, 6, "CUT", "RACK-A2");
+  const preparedRoll = await roll(s3, 7, "CUT", "RACK-A2");
+  await roll(s3, 8, "STORED", "RACK-A2");
+  const s4 = await ship("FVE-SP", "FVE", 0, false, "Fennick & Vane site crew", "One roll sample, damp on one edge; noted to client.");
+  await roll(s4, 9, "RECEIVED", "RACK-A1");
+
+  // Coupons and specimens along the chain.
+  const cutCoupon = async (rollId: string, daysAgo: number, tech: string) => {
+    const coupon = await tx.coupon.create({
+      data: { labNumber: await allocateLabNumber(tx, "coupon", ago(daysAgo)), rollId, positionInSample: "Centre, 300 mm from leading edge", lengthMm: 300, widthMm: 300, cutById: tech, cutAt: ago(daysAgo), storageLocationId: locations["HUMID-1"]! },
+    });
+    await tx.custodyEvent.create({ data: { action: "CUT", couponId: coupon.id, toState: "CUT", actorId: tech, occurredAt: ago(daysAgo) } });
+    return coupon;
+  };
+  const prepare = async (couponId: string, daysAgo: number, tech: string, method: string, state: ItemState) => {
+    const specimen = await tx.specimen.create({
+      data: {
+        labNumber: await allocateLabNumber(tx, "specimen", ago(daysAgo)), couponId, dieDiameterMm: 100, initialThicknessMm: 6.8, initialMassG: 46.2,
+        moistureContentPct: 11.4, intendedMethodCode: method, preparedById: tech, preparedAt: ago(daysAgo), state, storageLocationId: locations["HUMID-1"]!,
+        checklist: { create: [
+          { itemKey: "edges-sealed", question: "Specimen edges sealed with bentonite paste against side-wall leakage", answer: true },
+          { itemKey: "no-bridging-fibres", question: "No fibres bridging the two geotextiles at the cut edge", answer: true },
+          { itemKey: "surfaces-saturated", question: "Specimen surfaces wetted before mounting", answer: true },
+        ] },
+      },
+    });
+    await tx.custodyEvent.create({ data: { action: "PREPARED", specimenId: specimen.id, toState: "PREPARED", actorId: tech, occurredAt: ago(daysAgo) } });
+    return specimen;
+  };
+
+  await cutCoupon(cutRoll.id, 5, users.technician!);
+  const waitingCoupon = await cutCoupon(preparedRoll.id, 4, users.technician2!);
+  await prepare(waitingCoupon.id, 3, users.technician2!, "D5887", "PREPARED");
+
+  const certifiedSpecimen = await prepare((await cutCoupon(certifiedRoll.id, 19, users.technician!)).id, 19, users.technician!, "D5887", "RETAINED");
+  const reviewSpecimen = await prepare((await cutCoupon(reviewRoll.id, 12, users.technician2!)).id, 12, users.technician2!, "D5887", "TESTED");
+  const testingSpecimen = await prepare((await cutCoupon(testingRoll.id, 6, users.technician!)).id, 6, users.technician!, "D5887", "UNDER_TEST");
+
+  // Runs: one approved and certified, one awaiting review, one permeating now.
+  const makeRun = async (specimenId: string, cell: string, tech: string, daysAgo: number, state: Prisma.RunCreateInput["state"], readingCount: number) => {
+    const run = await tx.run.create({
+      data: {
+        labNumber: await allocateLabNumber(tx, "run", ago(daysAgo)), specimenId, cellId: equipment[cell]!, methodCode: "D5887", state,
+        performedById: tech, assignedAt: ago(daysAgo), effectiveStressPa: 34_500,
+        equipment: { create: [
+          { equipmentId: equipment["BP-01"]!, calibrationId: equipment["BP-01:cal"]!, role: "burette panel" },
+          { equipmentId: equipment["PT-01"]!, calibrationId: equipment["PT-01:cal"]!, role: "pressure transducer" },
+        ] },
+      },
+    });
+    await tx.custodyEvent.create({ data: { action: "ASSIGNED", specimenId, fromState: "PREPARED", toState: "ASSIGNED", actorId: tech, occurredAt: ago(daysAgo), note: `Mounted in ${cell}` } });
+    const stages = [
+      { kind: "SATURATION" as const, cell: 345_000, inf: 310_000, eff: 310_000, start: 0, end: 1 },
+      { kind: "EQUILIBRATION" as const, cell: 552_000, inf: 517_000, eff: 517_000, start: 1, end: 3 },
+      { kind: "PERMEATION" as const, cell: 552_000, inf: 531_000, eff: 517_000, start: 3, end: null },
+    ];
+    for (const [i, st] of stages.entries())
+      await tx.runStage.create({ data: { runId: run.id, sequence: i + 1, kind: st.kind, cellPressurePa: st.cell, influentPressurePa: st.inf, effluentPressurePa: st.eff, startedAt: ago(daysAgo - st.start), endedAt: st.end === null ? null : ago(daysAgo - st.end), recordedById: tech } });
+    const start = ago(daysAgo - 3);
+    const readings = makeDemoReadings({ fluxM3PerM2PerS: 2.4e-9, areaM2: SPECIMEN_AREA_M2, count: readingCount, stepH: 6, headPa: 14_000 });
+    await tx.reading.createMany({
+      data: readings.map((r, i) => ({ runId: run.id, sequence: i + 1, takenAt: new Date(start.getTime() + r.elapsedS * 1000), ...r, recordedById: tech })),
+    });
+    return run;
+  };
+
+  const approvedRun = await makeRun(certifiedSpecimen.id, "CELL-01", users.technician!, 18, "APPROVED", 12);
+  await tx.run.update({ where: { id: approvedRun.id }, data: { terminatedAt: ago(12), terminationKind: "CRITERIA_MET", postTestThicknessMm: 5.9, postTestMassG: 71.3, postTestObservations: "Uniform hydration; no channels seen on the cut section.", submittedAt: ago(12) } });
+  await tx.review.create({ data: { runId: approvedRun.id, reviewerId: users.qa!, decision: "APPROVED", comments: "Criteria met; checklist complete.", createdAt: ago(11) } });
+  const result = await tx.result.create({ data: { runId: approvedRun.id, property: "INDEX_FLUX", value: 2.4e-9, unit: "m3/m2/s", expandedUncertainty: 0.2e-9, temperatureC: 20.6, unitWeightBasis: "conventional 9.81 kN/m3", approvedById: users.qa!, approvedAt: ago(11) } });
+  const certificate = await tx.certificate.create({ data: { number: await allocateLabNumber(tx, "certificate", ago(10)), projectId: projects["MWA-C4"]!, clientOrganizationId: orgs.MWA! } });
+  const revision = await tx.certificateRevision.create({ data: { certificateId: certificate.id, revision: 1, status: "ISSUED", verificationCode: "DEMO-7Q4K-2M9X", issuedAt: ago(10), results: { create: [{ resultId: result.id }] } } });
+  await tx.signature.create({ data: { revisionId: revision.id, signerId: users.qa!, signerRole: "QA_MANAGER", meaning: "Reviewed and approved for issue", signedAt: ago(10) } });
+
+  const submittedRun = await makeRun(reviewSpecimen.id, "CELL-02", users.technician2!, 11, "SUBMITTED", 12);
+  await tx.run.update({ where: { id: submittedRun.id }, data: { terminatedAt: ago(5), terminationKind: "CRITERIA_MET", postTestThicknessMm: 6.1, postTestMassG: 70.8, postTestObservations: "Even swelling.", submittedAt: ago(4) } });
+
+  await makeRun(testingSpecimen.id, "CELL-03", users.technician!, 5, "PERMEATING", 7);
+}
+
+async function createEquipment(tx: Tx, adminId: string, now: Date): Promise<Ids> {
+  const ids: Ids = {};
+  const add = async (assetTag: string, kind: Prisma.EquipmentCreateInput["kind"], name: string, ratedMaxPressurePa: number | null, calibratedDaysAgo: number, values: Record<string, number> = {}) => {
+    const eq = await tx.equipment.create({ data: { assetTag, kind, name, serialNumber: `SN-${assetTag}`, ratedMaxPressurePa } });
+    const calibratedAt = new Date(now.getTime() - calibratedDaysAgo * DAY);
+    const cal = await tx.calibration.create({
+      data: { equipmentId: eq.id, calibratedAt, dueAt: new Date(calibratedAt.getTime() + 365 * DAY), reference: `CAL-${assetTag}-${calibratedAt.getUTCFullYear()}`, performedBy: "Brightwell Metrology (invented)", values, recordedById: adminId },
+    });
+    ids[assetTag] = eq.id;
+    ids[`${assetTag}:cal`] = cal.id;
+  };
+  for (let n = 1; n <= 6; n++) await add(`CELL-0${n}`, "PERMEAMETER_CELL", `Flexible-wall permeameter cell ${n}`, 1_000_000, n === 6 ? 400 : 60 + n * 20);
+  for (let n = 1; n <= 3; n++) await add(`BP-0${n}`, "BURETTE_PANEL", `Burette panel ${n}`, 1_000_000, 90, { inflowBuretteAreaM2: 3.14e-5, outflowBuretteAreaM2: 3.12e-5 });
+  await add("PT-01", "PRESSURE_TRANSDUCER", "Differential pressure transducer 0-100 kPa", 700_000, 120);
+  await add("PT-02", "PRESSURE_TRANSDUCER", "Cell pressure transducer 0-1000 kPa", 1_000_000, 350);
+  await add("TH-01", "THERMOMETER", "Laboratory thermometer", null, 200);
+  return ids;
+}
