@@ -1,0 +1,30 @@
+import { redirect } from "next/navigation";
+import { SignInForm } from "@/components/auth/sign-in-form";
+import { Wordmark } from "@/components/shell/wordmark";
+import { getCurrentUser } from "@/lib/server/auth/current-user";
+import { getLabName } from "@/lib/server/lab/get-lab-name";
+
+export const metadata = { title: "Sign in" };
+export const dynamic = "force-dynamic";
+
+function safeCallback(value: string | string[] | undefined): string {
+  const url = Array.isArray(value) ? value[0] : value;
+  // Only paths on this site, so a crafted link cannot send people elsewhere after signing in.
+  return url && url.startsWith("/") && !url.startsWith("//") ? url : "/";
+}
+
+export default async function SignInPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+  const params = await searchParams;
+  const callbackUrl = safeCallback(params.callbackUrl);
+  if (await getCurrentUser()) redirect(callbackUrl);
+  return (
+    <div className="plain">
+      <div className="plain-card">
+        <Wordmark />
+        <h1>Sign in</h1>
+        <p className="muted">{await getLabName()} · sample custody and hydraulic test records</p>
+        <SignInForm callbackUrl={callbackUrl} />
+      </div>
+    </div>
+  );
+}

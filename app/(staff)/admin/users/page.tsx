@@ -1,0 +1,44 @@
+import { CreateUserForm } from "@/components/users/create-user-form";
+import { UserRowActions } from "@/components/users/user-row-actions";
+import { formatDate } from "@/lib/format/dates";
+import { ROLE_LABELS } from "@/lib/policy/permissions";
+import { requirePageUser } from "@/lib/server/auth/require-permission";
+import { listClientOrganizationsForSelect, listUsers } from "@/lib/server/users/list-users";
+
+export const metadata = { title: "People" };
+
+export default async function UsersPage() {
+  const actor = await requirePageUser("user.manage");
+  const [users, organizations] = await Promise.all([listUsers({ actor }), listClientOrganizationsForSelect({ actor })]);
+  return (
+    <>
+      <h1>People</h1>
+      <p className="muted">Accounts of lab staff and client contacts. Accounts are deactivated, never deleted, so the records they signed keep their names.</p>
+      <div className="grid" style={{ gridTemplateColumns: "minmax(0, 2fr) minmax(300px, 1fr)" }}>
+        <section className="card">
+          <h2>Accounts <span className="count">{users.length}</span></h2>
+          <div className="table-wrap">
+            <table className="list" data-testid="user-list">
+              <thead><tr><th>Name</th><th>Role</th><th>Since</th><th>Status</th><th /></tr></thead>
+              <tbody>
+                {users.map((u) => (
+                  <tr key={u.id} data-email={u.email}>
+                    <td>{u.name}<div className="muted">{u.email}</div></td>
+                    <td>{ROLE_LABELS[u.role]}{u.clientOrganization && <div className="muted">{u.clientOrganization.name}</div>}</td>
+                    <td>{formatDate(u.createdAt)}</td>
+                    <td>{u.active ? <span className="state state-ok">active</span> : <span className="state state-bad">deactivated</span>}</td>
+                    <td>{u.id !== actor.id && <UserRowActions userId={u.id} active={u.active} version={u.version} name={u.name} />}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        </section>
+        <section className="card">
+          <h2>New account</h2>
+          <CreateUserForm organizations={organizations} />
+        </section>
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,33 @@
+import { QueueCard } from "@/components/ui/queue-card";
+import { formatDate } from "@/lib/format/dates";
+import { requirePageUser } from "@/lib/server/auth/require-permission";
+import { listCertificates } from "@/lib/server/certificates/list-certificates";
+
+export const metadata = { title: "Certificates" };
+
+export default async function CertificatesPage() {
+  const actor = await requirePageUser("certificate.view");
+  const certificates = await listCertificates({ actor });
+  return (
+    <>
+      <h1>Certificates</h1>
+      <p className="muted">Signed test certificates and their revisions.</p>
+      <QueueCard title="Certificates" count={certificates.length} empty="No certificate has been issued yet." testId="certificate-list">
+        <table className="list">
+          <thead><tr><th>Number</th><th>Client / project</th><th>Revision</th><th>Issued</th><th>Status</th></tr></thead>
+          <tbody>
+            {certificates.map((c) => {
+              const latest = c.revisions[0];
+              return (
+                <tr key={c.id}>
+                  <td className="mono">{c.number}</td><td>{c.clientOrganization.name}<div className="muted">{c.project.name}</div></td>
+                  <td>{latest?.revision ?? "—"}</td><td>{formatDate(latest?.issuedAt)}</td><td>{latest ? <span className="state">{latest.status.toLowerCase()}</span> : "—"}</td>
+                </tr>
+              );
+            })}
+          </tbody>
+        </table>
+      </QueueCard>
+    </>
+  );
+}

@@ -1,0 +1,14 @@
+import { redirect } from "next/navigation";
+import { AppShell } from "@/components/shell/app-shell";
+import { getCurrentUser } from "@/lib/server/auth/current-user";
+import { getLabName } from "@/lib/server/lab/get-lab-name";
+
+export const dynamic = "force-dynamic";
+
+// The lab's side of the app. Client users have their own portal; each page checks its own action too.
+export default async function StaffLayout({ children }: { children: React.ReactNode }) {
+  const user = await getCurrentUser();
+  if (!user) redirect("/sign-in");
+  if (user.role === "CLIENT_USER") redirect("/portal");
+  return <AppShell user={user} labName={await getLabName()}>{children}</AppShell>;
+}

@@ -1,0 +1,18 @@
+import { StaffQueues } from "@/components/home/staff-queues";
+import { ROLE_LABELS } from "@/lib/policy/permissions";
+import { requirePageUser } from "@/lib/server/auth/require-permission";
+import { getHomeQueues } from "@/lib/server/queues/get-home-queues";
+
+export const metadata = { title: "Today" };
+
+export default async function StaffHomePage() {
+  const user = await requirePageUser("workspace.view");
+  const queues = await getHomeQueues(user);
+  return (
+    <>
+      <h1>Today</h1>
+      <p className="muted">Work waiting for you as {ROLE_LABELS[user.role].toLowerCase()}, oldest first.</p>
+      <StaffQueues queues={queues} now={new Date()} />
+    </>
+  );
+}

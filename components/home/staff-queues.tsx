@@ -1,0 +1,85 @@
+import { formatAge, formatDate } from "@/lib/format/dates";
+import { EQUIPMENT_KIND_LABELS } from "@/lib/format/states";
+import type { HomeQueues } from "@/lib/server/queues/get-home-queues";
+import { QueueCard } from "@/components/ui/queue-card";
+import { StateTag } from "@/components/ui/state-tag";
+
+/** The home page's work queues; each role is given only the queues its policy allows. */
+export function StaffQueues({ queues, now }: { queues: HomeQueues; now: Date }) {
+  return (
+    <div className="grid">
+      {queues.shipments && (
+        <QueueCard title="Shipments to acknowledge" count={queues.shipments.length} empty="Every shipment logged has been acknowledged." testId="queue-shipments">
+          <table className="list">
+            <thead><tr><th>Shipment</th><th>Client / project</th><th>Rolls</th><th>Waiting</th></tr></thead>
+            <tbody>
+              {queues.shipments.map((s) => (
+                <tr key={s.id}><td className="mono">{s.labNumber}</td><td>{s.clientOrganization.name}<div className="muted">{s.project.name}</div></td><td>{s._count.rolls}</td><td>{formatAge(s.receivedAt, now)}</td></tr>
+              ))}
+            </tbody>
+          </table>
+        </QueueCard>
+      )}
+      {queues.rollsToCut && (
+        <QueueCard title="Rolls waiting to be cut" count={queues.rollsToCut.length} empty="No roll is waiting for coupons." testId="queue-rolls">
+          <table className="list">
+            <thead><tr><th>Roll</th><th>Project</th><th>State</th></tr></thead>
+            <tbody>
+              {queues.rollsToCut.map((r) => (
+                <tr key={r.id}><td className="mono">{r.labNumber}<div className="muted">{r.rollNumber}</div></td><td>{r.project.name}</td><td><StateTag state={r.state} /></td></tr>
+              ))}
+            </tbody>
+          </table>
+        </QueueCard>
+      )}
+      {queues.specimens && (
+        <QueueCard title="Specimens waiting for a cell" count={queues.specimens.length} empty="No prepared specimen is waiting." testId="queue-specimens">
+          <table className="list">
+            <thead><tr><th>Specimen</th><th>From roll</th><th>Method</th><th>Prepared</th></tr></thead>
+            <tbody>
+              {queues.specimens.map((s) => (
+                <tr key={s.id}><td className="mono">{s.labNumber}</td><td className="mono">{s.coupon.roll.labNumber}<div className="muted">{s.coupon.roll.project.name}</div></td><td>ASTM {s.intendedMethodCode}</td><td>{formatDate(s.preparedAt)}</td></tr>
+              ))}
+            </tbody>
+          </table>
+        </QueueCard>
+      )}
+      {queues.runs && (
+        <QueueCard title="Runs in progress" count={queues.runs.length} empty="No run is in progress." testId="queue-runs">
+          <table className="list">
+            <thead><tr><th>Run</th><th>Cell</th><th>Specimen</th><th>State</th><th>By</th></tr></thead>
+            <tbody>
+              {queues.runs.map((r) => (
+                <tr key={r.id}><td className="mono">{r.labNumber}<div className="muted">ASTM {r.methodCode}</div></td><td className="mono">{r.cell.assetTag}</td><td className="mono">{r.specimen.labNumber}</td><td><StateTag state={r.state} kind="run" /></td><td>{r.performedBy.name}</td></tr>
+              ))}
+            </tbody>
+          </table>
+        </QueueCard>
+      )}
+      {queues.reviews && (
+        <QueueCard title="Results to review" count={queues.reviews.length} empty="Nothing is waiting for review." testId="queue-reviews">
+          <table className="list">
+            <thead><tr><th>Run</th><th>Specimen</th><th>Technician</th><th>Waiting</th></tr></thead>
+            <tbody>
+              {queues.reviews.map((r) => (
+                <tr key={r.id}><td className="mono">{r.labNumber}<div className="muted">ASTM {r.methodCode}</div></td><td className="mono">{r.specimen.labNumber}</td><td>{r.performedBy.name}</td><td>{r.submittedAt ? formatAge(r.submittedAt, now) : "—"}</td></tr>
+              ))}
+            </tbody>
+          </table>
+        </QueueCard>
+      )}
+      {queues.calibrations && (
+        <QueueCard title="Calibrations due within 30 days" count={queues.calibrations.length} empty="No calibration falls due in the next 30 days." testId="queue-calibrations">
+          <table className="list">
+            <thead><tr><th>Asset</th><th>Kind</th><th>Due</th></tr></thead>
+            <tbody>
+              {queues.calibrations.map((e) => (
+                <tr key={e.id}><td className="mono">{e.assetTag}</td><td>{EQUIPMENT_KIND_LABELS[e.kind]}</td><td>{e.dueAt && e.dueAt < now ? <span className="state state-bad">overdue {formatDate(e.dueAt)}</span> : formatDate(e.dueAt)}</td></tr>
+              ))}
+            </tbody>
+          </table>
+        </QueueCard>
+      )}
+    </div>
+  );
+}

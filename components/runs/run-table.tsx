@@ -1,0 +1,24 @@
+import { formatDate } from "@/lib/format/dates";
+import { StateTag } from "@/components/ui/state-tag";
+
+type RunRow = {
+  id: string; labNumber: string; methodCode: string; state: string; assignedAt: Date; submittedAt: Date | null;
+  cell: { assetTag: string }; specimen: { labNumber: string }; performedBy: { name: string }; _count: { readings: number };
+};
+
+export function RunTable({ runs }: { runs: RunRow[] }) {
+  return (
+    <table className="list">
+      <thead><tr><th>Run</th><th>Method</th><th>Specimen</th><th>Cell</th><th>Readings</th><th>Assigned</th><th>Technician</th><th>State</th></tr></thead>
+      <tbody>
+        {runs.map((r) => (
+          <tr key={r.id}>
+            <td className="mono">{r.labNumber}</td><td>ASTM {r.methodCode}</td><td className="mono">{r.specimen.labNumber}</td>
+            <td className="mono">{r.cell.assetTag}</td><td>{r._count.readings}</td><td>{formatDate(r.assignedAt)}</td>
+            <td>{r.performedBy.name}</td><td><StateTag state={r.state} kind="run" /></td>
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  );
+}
