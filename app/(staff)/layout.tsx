@@ -1,4 +1,5 @@
-import { redirect } from "next/navigation";
+import { headers } from "next/headers";
+import { forbidden, redirect } from "next/navigation";
 import { AppShell } from "@/components/shell/app-shell";
 import { getCurrentUser } from "@/lib/server/auth/current-user";
 import { getLabName } from "@/lib/server/lab/get-lab-name";
@@ -9,6 +10,10 @@ export const dynamic = "force-dynamic";
 export default async function StaffLayout({ children }: { children: React.ReactNode }) {
   const user = await getCurrentUser();
   if (!user) redirect("/sign-in");
-  if (user.role === "CLIENT_USER") redirect("/portal");
+  if (user.role === "CLIENT_USER") {
+    // A client's start page is the portal; any other lab page is refused with the 403 page.
+    if (((await headers()).get("x-seepline-path") ?? "/") === "/") redirect("/portal");
+    forbidden();
+  }
   return <AppShell user={user} labName={await getLabName()}>{children}</AppShell>;
 }

@@ -2,7 +2,7 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
 import { createUserAction } from "@/app/(staff)/admin/users/actions";
 import { ROLE_LABELS, ROLES } from "@/lib/policy/permissions";
 import { createUserSchema, type CreateUserInput } from "@/lib/validation/account";
@@ -12,8 +12,8 @@ import { applyServerErrors } from "@/components/ui/apply-server-errors";
 export function CreateUserForm({ organizations }: { organizations: Array<{ id: string; name: string }> }) {
   const [notice, setNotice] = useState<{ ok: boolean; text: string } | null>(null);
   const form = useForm<CreateUserInput>({ resolver: zodResolver(createUserSchema), defaultValues: { role: "TECHNICIAN", clientOrganizationId: "" } });
-  const { register, handleSubmit, formState, watch, reset } = form;
-  const role = watch("role");
+  const { register, handleSubmit, formState, reset, control } = form;
+  const role = useWatch({ control, name: "role" });
 
   const onSubmit = handleSubmit(async (values) => {
     const result = await createUserAction(values);

@@ -27,13 +27,18 @@ export function UserRowActions({ userId, active, version, name }: { userId: stri
   };
 
   return (
-    <div className="inline-form">
+    <div>
       <button type="button" className={`button ${active ? "button-danger" : "button-quiet"}`} disabled={pending} onClick={toggle} aria-label={`${active ? "Deactivate" : "Reactivate"} ${name}`}>
         {active ? "Deactivate" : "Reactivate"}
       </button>
-      <input type="password" placeholder="New password" value={password} onChange={(e) => setPassword(e.target.value)} aria-label={`New password for ${name}`} autoComplete="new-password" />
-      <button type="button" className="button button-quiet" disabled={pending} onClick={reset}>Reset</button>
-      {message && <span className={message.ok ? "muted" : "field-error"} role="status">{message.text}</span>}
+      <details className="row-more">
+        <summary>Reset password</summary>
+        <div className="inline-form">
+          <input type="password" placeholder="New password" value={password} onChange={(e) => setPassword(e.target.value)} aria-label={`New password for ${name}`} autoComplete="new-password" />
+          <button type="button" className="button button-quiet" disabled={pending} onClick={reset}>Set</button>
+        </div>
+      </details>
+      {message && <div className={message.ok ? "muted" : "field-error"} role="status">{message.text}</div>}
     </div>
   );
 }

@@ -28,7 +28,7 @@ export function evaluateRun(input: RunInput, options: EvaluateRunOptions = {}): 
   if (burettes) {
     for (let i = 0; i < readings.length; i++) {
       const r = readings[i] as RunInput["readings"][number];
-      const h = readingHeadM(r, unitWeightOfWaterKNPerM3(r.temperatureC, unitWeightBasis), burettes);
+      const h = readingHeadM(r, unitWeightOfWaterKNPerM3(r.temperatureC, unitWeightBasis), burettes, readings[0] as RunInput["readings"][number]);
       if (!(h > 0)) {
         throw new Error(`readings[${i}]: total head from headKPa and burettes.initialLevelDifferenceMm is not positive (${h.toFixed(4)} m)`);
       }
@@ -68,13 +68,22 @@ export function evaluateRun(input: RunInput, options: EvaluateRunOptions = {}): 
     const window = intervals.slice(-n);
     const mean = (f: (iv: Interval) => number) => window.reduce((a, iv) => a + f(iv), 0) / window.length;
     reported = { flux: mean((iv) => iv.flux), k20: mean((iv) => iv.k20) };
-    if (options.uncertainty) {
+    const volumeMl = window.reduce((a, iv) => a + (iv.inflowVolumeMl + iv.outflowVolumeMl) / 2, 0);
+    if (!Number.isFinite(reported.flux) || !Number.isFinite(reported.k20)) {
+      // Only reachable with extreme inputs (overflow) or criteria sets that do not check the flow:
+      // a non-number must never reach a certificate, and reported is null unless the criteria are met.
+      reported = { flux: null, k20: null };
+      termination.met = false;
+      warnings.push("The reported values could not be computed as finite numbers from these readings; check the entered volumes, times and specimen size.");
+    } else if (options.uncertainty && !(volumeMl > 0)) {
+      warnings.push("No uncertainty is given because no flow passed over the reported intervals.");
+    } else if (options.uncertainty) {
       uncertainty = expandedUncertainty({
         fluxM3PerM2PerS: reported.flux as number,
         k20MPerS: reported.k20 as number,
         diameterMm: specimen.diameterMm,
         thicknessMm: specimen.thicknessMm,
-        volumeMl: window.reduce((a, iv) => a + (iv.inflowVolumeMl + iv.outflowVolumeMl) / 2, 0),
+        volumeMl,
         durationS: window.reduce((a, iv) => a + iv.durationS, 0),
         headM: mean((iv) => iv.headM),
         unitWeightKNPerM3: mean((iv) => iv.unitWeightKNPerM3),

@@ -16,19 +16,22 @@ export interface IntervalOptions {
 
 /**
  * Total head across the specimen at one reading, m of water: headKPa / gamma_w, plus the burette
- * level difference when burettes are given.
+ * level difference when burettes are given. burettes.initialLevelDifferenceMm is the level
+ * difference at the first reading, so the levels move by the volumes since that reading: pass the
+ * first reading as `first` (cumulative volumes need not be zero there).
  */
 export function readingHeadM(
   reading: Reading,
   unitWeightKNPerM3: number,
   burettes?: BuretteInput,
+  first: { inflowMl: number; outflowMl: number } = { inflowMl: 0, outflowMl: 0 },
 ): number {
   const pressureHeadM = reading.headKPa / unitWeightKNPerM3;
   if (!burettes) return pressureHeadM;
   const dzMm = levelDifferenceAfterFlowMm({
     initialLevelDifferenceMm: burettes.initialLevelDifferenceMm,
-    inflowMl: reading.inflowMl,
-    outflowMl: reading.outflowMl,
+    inflowMl: reading.inflowMl - first.inflowMl,
+    outflowMl: reading.outflowMl - first.outflowMl,
     inflowAreaMm2: burettes.inflowAreaMm2,
     outflowAreaMm2: burettes.outflowAreaMm2,
   });
@@ -55,6 +58,7 @@ export function computeIntervals(
   let lastT = Number.NaN;
   let gammaW = 0;
   let rt: ReturnType<typeof viscosityRatio> = { ratio: 1, source: "IAPWS-2008" };
+  const first = readings[0] as Reading;
   for (let i = 1; i < readings.length; i++) {
     const a = readings[i - 1] as Reading;
     const b = readings[i] as Reading;
@@ -72,8 +76,8 @@ export function computeIntervals(
     const outflowFlux = (outflowVolumeMl * ML_M3) / (areaM2 * durationS);
     const flux = (inflowFlux + outflowFlux) / 2;
     const ratio = inflowVolumeMl !== 0 ? outflowVolumeMl / inflowVolumeMl : Number.NaN;
-    const h1 = readingHeadM(a, gammaW, burettes);
-    const h2 = readingHeadM(b, gammaW, burettes);
+    const h1 = readingHeadM(a, gammaW, burettes, first);
+    const h2 = readingHeadM(b, gammaW, burettes, first);
     const headM = (h1 + h2) / 2;
     const gradient = headM / thicknessM;
     const k = burettes

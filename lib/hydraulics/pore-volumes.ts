@@ -57,7 +57,7 @@ export function resolvePorosity(specimen: {
     return {
       porosity: null,
       reason:
-        "pore volumes need specimen.porosity or specimen.bentoniteMassPerAreaKgPerM2 (dry bentonite mass per area)",
+        "enter the specimen's measured porosity or its dry bentonite mass per unit area",
     };
   }
   const n = estimatePorosity({
@@ -68,7 +68,7 @@ export function resolvePorosity(specimen: {
   if (!(n > 0 && n < 1)) {
     return {
       porosity: null,
-      reason: `estimated porosity ${n.toFixed(3)} is not between 0 and 1; check bentonite mass per area, thickness and specific gravity`,
+      reason: `the porosity estimated from them, ${n.toFixed(3)}, is not between 0 and 1; check the bentonite mass per unit area, thickness and specific gravity`,
     };
   }
   const gs = specimen.specificGravity ?? DEFAULT_BENTONITE_SPECIFIC_GRAVITY;

@@ -41,6 +41,8 @@ export const TERMINATION_DEFAULTS: Readonly<Record<TestMethod, Readonly<Terminat
   },
 };
 
+const CRITERION_KEYS: readonly CriterionKey[] = ["ratio-band", "trend", "k-band", "ec-equilibrium", "ph-equilibrium", "pore-volumes"];
+
 function fail(field: string, why: string): never {
   throw new Error(`options.termination.${field} ${why}`);
 }
@@ -51,6 +53,8 @@ export function resolveTerminationSettings(
   overrides: Partial<TerminationSettings> = {},
 ): TerminationSettings {
   const s: TerminationSettings = { ...TERMINATION_DEFAULTS[method], ...stripUndefined(overrides) };
+  if (!Array.isArray(s.criteria) || s.criteria.some((c) => !CRITERION_KEYS.includes(c)))
+    fail("criteria", `must list only ${CRITERION_KEYS.join(", ")}, got ${String(s.criteria)}`);
   const minN = s.criteria.includes("trend") ? 3 : 2;
   if (!Number.isInteger(s.consecutiveIntervals) || s.consecutiveIntervals < minN)
     fail("consecutiveIntervals", `must be an integer ≥ ${minN} (the slope test needs 3 points), got ${s.consecutiveIntervals}`);
@@ -111,6 +115,12 @@ export function evaluateCriterion(key: CriterionKey, ctx: TerminationContext): C
       if (noInflow) {
         return { key, name, met: false, value: null, limit, message: `No inflow was recorded between ${noInflow.fromS} s and ${noInflow.toS} s, so the ratio cannot be judged; check the inflow burette.` };
       }
+      // A cumulative volume that went down (a burette refill entered without correction) gives a
+      // negative volume; two of them make a positive ratio that would pass the band unnoticed.
+      const decreased = last.find((iv) => iv.inflowVolumeMl < 0 || iv.outflowVolumeMl < 0);
+      if (decreased) {
+        return { key, name, met: false, value: null, limit, message: `The cumulative ${decreased.inflowVolumeMl < 0 ? "inflow" : "outflow"} went down between ${decreased.fromS} s and ${decreased.toS} s; correct the readings for the burette refill before the ratio can be judged.` };
+      }
       let worst = 1;
       for (const iv of last) if (Math.abs(iv.ratio - 1) > Math.abs(worst - 1)) worst = iv.ratio;
       const met = last.every((iv) => iv.ratio >= s.ratioMin && iv.ratio <= s.ratioMax);
@@ -152,8 +162,8 @@ export function evaluateCriterion(key: CriterionKey, ctx: TerminationContext): C
       const limit = `each of the last ${n} k20 within ±${pct(s.kBandFraction)} of their mean (±${pct(s.kBandFractionBelowThreshold)} when the mean is below ${s.kBandThresholdMPerS} m/s)`;
       if (last.length < n) return tooFew(key, name, limit, last.length, n);
       const mean = last.reduce((acc, iv) => acc + iv.k20, 0) / n;
-      if (!(mean > 0)) {
-        return { key, name, met: false, value: null, limit, message: `The mean k20 of the last ${n} intervals is not positive; check the readings.` };
+      if (!(mean > 0 && Number.isFinite(mean))) {
+        return { key, name, met: false, value: null, limit, message: `The mean k20 of the last ${n} intervals is not a positive number; check the readings.` };
       }
       const band = mean >= s.kBandThresholdMPerS ? s.kBandFraction : s.kBandFractionBelowThreshold;
       let worst = 0;
@@ -194,8 +204,8 @@ export function evaluateCriterion(key: CriterionKey, ctx: TerminationContext): C
       return {
         key, name, met, value: diff, limit,
         message: met
-          ? `Effluent pH is within ${s.phToleranceUnits} of the influent's (difference ${fmt(diff, 2)}).`
-          : `Effluent pH differs from the influent's by ${fmt(diff, 2)}, more than ${s.phToleranceUnits}; keep permeating.`,
+          ? `Effluent pH is within ${s.phToleranceUnits} of the influent's (difference ${fmt(Math.abs(diff), 2)}).`
+          : `Effluent pH is ${fmt(Math.abs(diff), 2)} ${diff > 0 ? "above" : "below"} the influent's, more than the ${s.phToleranceUnits} allowed; keep permeating.`,
       };
     }
     case "pore-volumes": {

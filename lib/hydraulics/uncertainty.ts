@@ -56,14 +56,24 @@ export function expandedUncertainty(args: {
   viscosityRatioBasis?: ViscosityRatioBasis;
 }): ExpandedUncertainty {
   const d = args.declared;
-  const dT = 0.05; // °C step for the numerical derivative of ln R_T; R_T is smooth there.
-  const lo = viscosityRatio(args.temperatureC - dT, args.viscosityRatioBasis).ratio;
-  const hi = viscosityRatio(args.temperatureC + dT, args.viscosityRatioBasis).ratio;
-  const dLnRdT = (Math.log(hi) - Math.log(lo)) / (2 * dT);
+  for (const f of ["diameterMm", "thicknessMm", "volumeMl", "durationS", "headM", "unitWeightKNPerM3"] as const) {
+    const v = args[f];
+    if (!(Number.isFinite(v) && v > 0)) throw new Error(`${f} must be a positive finite number for the uncertainty, got ${String(v)}`);
+  }
+  // Numerical derivative of ln R_T with the formula that produced R_T at this temperature: under
+  // the default basis the two sides of 15 °C or 30 °C would otherwise come from different formulas,
+  // whose 0.15 % offset over a 0.1 °C step would distort the slope by about half.
+  const dT = 0.05; // °C
+  const source = viscosityRatio(args.temperatureC, args.viscosityRatioBasis).source;
+  const r = (t: number) => viscosityRatio(t, source).ratio;
+  // The D5084 equation has no value at 0 °C, so use a forward difference close to it.
+  const lower = source === "D5084-equation" && args.temperatureC - dT <= 0 ? args.temperatureC : args.temperatureC - dT;
+  const upper = args.temperatureC + dT;
+  const dLnRdT = (Math.log(r(upper)) - Math.log(r(lower))) / (upper - lower);
   const budget = {
     diameterMm: (2 * d.diameterMm) / args.diameterMm,
     thicknessMm: d.thicknessMm / args.thicknessMm,
-    volumeMl: d.volumeMl / Math.abs(args.volumeMl),
+    volumeMl: d.volumeMl / args.volumeMl,
     timeS: (Math.SQRT2 * d.timeS) / args.durationS,
     pressureKPa: d.pressureKPa / args.unitWeightKNPerM3 / args.headM,
     temperatureC: Math.abs(dLnRdT) * d.temperatureC,

@@ -173,7 +173,10 @@ describe("D6766", () => {
 
   it("clearly not met: effluent pH 1.2 units off", () => {
     const ev = evaluateRun(run(base(1.0, -1.2)));
-    expect(byKey(ev.termination.criteria, "ph-equilibrium").met).toBe(false);
+    const ph = byKey(ev.termination.criteria, "ph-equilibrium");
+    expect(ph.met).toBe(false);
+    expect(ph.value).toBeCloseTo(-1.2, 12);
+    expect(ph.message).toBe("Effluent pH is 1.2 below the influent's, more than the 0.5 allowed; keep permeating.");
     expect(ev.termination.met).toBe(false);
   });
 
@@ -186,7 +189,7 @@ describe("D6766", () => {
     const pv = byKey(ev.termination.criteria, "pore-volumes");
     expect(pv.met).toBe(false);
     expect(pv.value).toBeNull();
-    expect(pv.message).toMatch(/specimen\.porosity or specimen\.bentoniteMassPerAreaKgPerM2/);
+    expect(pv.message).toBe("Pore volumes cannot be counted: enter the specimen's measured porosity or its dry bentonite mass per unit area.");
     expect(ev.termination.met).toBe(false);
   });
 

@@ -57,6 +57,30 @@ describe("expanded uncertainty (k = 2)", () => {
     expect(evaluateRun({ ...input, readings: readings.slice(0, 3) }, { uncertainty: declared }).uncertainty).toBeNull();
   });
 
+  it("the temperature slope is taken with one formula at the 15 °C and 30 °C switch-overs", () => {
+    // At 15 °C the default basis uses the D5084 equation: |d ln R_T / dT| = |ln 0.9842 - 0.1702 / 15|
+    // = 0.0159262 + 0.0113467 = 0.0272729 per °C. Mixing IAPWS below 15 °C with the equation above
+    // (0.15 % apart) would give about 0.0115 per °C instead.
+    const at = (temperatureC: number) =>
+      expandedUncertainty({
+        fluxM3PerM2PerS: 1e-8, k20MPerS: 1e-11, diameterMm: 100, thicknessMm: 5, volumeMl: 4, durationS: 14400,
+        headM: 1.4, unitWeightKNPerM3: 9.81, temperatureC,
+        declared: { diameterMm: 0, thicknessMm: 0, volumeMl: 0, timeS: 0, pressureKPa: 0, temperatureC: 1 },
+      }).budget.temperatureC;
+    expect(at(15)).toBeCloseTo(Math.abs(Math.log(0.9842) - 0.1702 / 15), 6);
+    // 30 °C: |ln 0.9842 - 0.1702 / 30| = 0.0159262 + 0.0056733 = 0.0215995
+    expect(at(30)).toBeCloseTo(Math.abs(Math.log(0.9842) - 0.1702 / 30), 6);
+  });
+
+  it("refuses a window with no flow instead of returning NaN", () => {
+    expect(() =>
+      expandedUncertainty({
+        fluxM3PerM2PerS: 0, k20MPerS: 0, diameterMm: 100, thicknessMm: 5, volumeMl: 0, durationS: 14400,
+        headM: 1.4, unitWeightKNPerM3: 9.81, temperatureC: 20, declared,
+      }),
+    ).toThrowError(/volumeMl/);
+  });
+
   it("conversions from certificates and tolerances", () => {
     // A caliper with ±0.05 mm rectangular tolerance: 0.05 / sqrt(3) = 0.028868 mm. A certificate U = 0.2 kPa (k = 2): 0.1 kPa.
     expect(standardUncertaintyFromRectangular(0.05)).toBeCloseTo(0.0288675, 7);

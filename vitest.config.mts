@@ -2,7 +2,11 @@ import path from "node:path";
 import { defineConfig } from "vitest/config";
 
 // One runner, three projects: `npm test` runs them all; `vitest --project unit` runs one.
-const alias = { "@": path.resolve(__dirname) };
+const alias = {
+  "@": path.resolve(import.meta.dirname),
+  // lib/server modules carry the "server-only" marker; outside Next.js it has nothing to guard.
+  "server-only": path.resolve(import.meta.dirname, "tests/support/server-only-stub.ts"),
+};
 
 export default defineConfig({
   resolve: { alias },
@@ -23,7 +27,7 @@ export default defineConfig({
           include: ["tests/integration/**/*.test.ts"],
           environment: "node",
           globalSetup: ["tests/integration/global-setup.ts"],
-          setupFiles: ["tests/integration/setup-server-only.ts"],
+          setupFiles: ["tests/integration/setup-env.ts"],
           testTimeout: 30_000,
           hookTimeout: 60_000,
           fileParallelism: false,
