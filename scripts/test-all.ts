@@ -27,7 +27,7 @@ async function main() {
   ).catch((error) => (failed = error));
 
   const summary = JSON.parse(readFileSync(RESULTS, "utf8")) as { numPassedTests: number; numFailedTests: number; numPendingTests: number; numTodoTests: number };
-  console.log(`\nSeepline tests: ${summary.numPassedTests} passed, ${summary.numFailedTests} failed, ${summary.numPendingTests + summary.numTodoTests} skipped`);
+  console.log(`\nTests: ${summary.numPassedTests} passed, ${summary.numFailedTests} failed, ${summary.numPendingTests + summary.numTodoTests} skipped`);
   if (failed || summary.numFailedTests > 0) process.exit(1);
 }
 
