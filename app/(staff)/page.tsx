@@ -11,7 +11,7 @@ export default async function StaffHomePage() {
   return (
     <>
       <h1>Today</h1>
-      <p className="muted">Work waiting for you as {ROLE_LABELS[user.role].toLowerCase()}, oldest first.</p>
+      <p className="muted">Work waiting for you ({ROLE_LABELS[user.role]}), oldest first.</p>
       <StaffQueues queues={queues} now={new Date()} />
     </>
   );

@@ -7,7 +7,7 @@ import { runCommand } from "./run-command";
 export async function buildIfNeeded(log: (line: string) => void = console.log): Promise<void> {
   const hash = sourceHash();
   if (buildIsCurrent(hash)) return;
-  log("Seepline: building the app (next build); this happens once per change of the sources...");
+  log("building the app (next build); this happens once per change of the sources...");
   await runCommand(BIN("next"), ["build"], { cwd: ROOT, env: { ...process.env, NEXT_TELEMETRY_DISABLED: "1" } });
   recordBuild(hash);
 }

@@ -15,5 +15,12 @@ export async function listAuditEntries(options: { actor: CurrentUser; table?: st
   const actorIds = [...new Set(rows.map((r) => r.actorId).filter((id): id is string => !!id))];
   const users = await db.user.findMany({ where: { id: { in: actorIds } }, select: { id: true, name: true } });
   const names = new Map(users.map((u) => [u.id, u.name]));
-  return rows.map((r) => ({ ...r, id: r.id.toString(), txId: r.txId.toString(), actorName: r.actorId ? (names.get(r.actorId) ?? r.actorId) : "—" }));
+  return rows.map((r) => ({ ...r, id: r.id.toString(), txId: r.txId.toString(), actorName: describeActor(r.actorId, names) }));
+}
+
+// Users are named; system actors ("system:demo-seed") are shown as what they are.
+function describeActor(actorId: string | null, names: Map<string, string>): string {
+  if (!actorId) return "database (no actor set)";
+  if (actorId.startsWith("system:")) return `system (${actorId.slice("system:".length).replace(/-/g, " ")})`;
+  return names.get(actorId) ?? actorId;
 }
