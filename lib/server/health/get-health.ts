@@ -35,7 +35,14 @@ export async function getHealth(): Promise<Health> {
       checkedAt,
     };
   } catch (error) {
-    const message = error instanceof Error ? error.message.split("\n")[0] : String(error);
-    return { status: "unavailable", database: { mode, reachable: false, error: message }, migrations: null, checkedAt };
+    return { status: "unavailable", database: { mode, reachable: false, error: describeDbError(error) }, migrations: null, checkedAt };
   }
+}
+
+// Driver errors often carry their meaning in a `cause.kind` rather than the message.
+function describeDbError(error: unknown): string {
+  if (!(error instanceof Error)) return String(error);
+  const cause = (error as { cause?: { kind?: string; message?: string } }).cause;
+  const text = error.message.split("\n")[0] || cause?.message || cause?.kind || error.name;
+  return text || "the database did not answer";
 }
