@@ -1,6 +1,7 @@
 import { navigationFor } from "@/lib/policy/navigation";
 import { ROLE_LABELS } from "@/lib/policy/permissions";
 import type { CurrentUser } from "@/lib/server/auth/current-user";
+import { LabNumberSearch } from "./lab-number-search";
 import { NavLinks } from "./nav-links";
 import { SignOutButton } from "./sign-out-button";
 import { Wordmark } from "./wordmark";
@@ -18,7 +19,7 @@ export function AppShell({ user, labName, children }: { user: CurrentUser; labNa
       </aside>
       <main className="shell-main">
         <div className="topline">
-          <div />
+          {user.role !== "CLIENT_USER" ? <LabNumberSearch /> : <div />}
           <div className="who">
             <span data-testid="signed-in-as">{user.name}</span>
             <span className="role-tag">{ROLE_LABELS[user.role]}</span>

@@ -14,11 +14,16 @@ function splitLine(line: string, separator: string): string[] {
   for (let i = 0; i < line.length; i++) {
     const ch = line[i]!;
     if (quoted) {
-      if (ch === '"' && line[i + 1] === '"') (cell += '"'), i++;
-      else if (ch === '"') quoted = false;
+      if (ch === '"' && line[i + 1] === '"') {
+        cell += '"';
+        i++;
+      } else if (ch === '"') quoted = false;
       else cell += ch;
     } else if (ch === '"') quoted = true;
-    else if (ch === ",") (cells.push(cell.trim()), (cell = ""));
+    else if (ch === ",") {
+      cells.push(cell.trim());
+      cell = "";
+    }
     else cell += ch;
   }
   cells.push(cell.trim());

@@ -22,6 +22,7 @@ export const ACTIONS = [
   "sample.view", // rolls, coupons, specimens and their ledger
   "sample.cut", // coupons from rolls, specimens from coupons
   "sample.move", // storage moves, retention and disposal
+  "location.manage", // the list of storage places
   "equipment.view",
   "equipment.manage", // register equipment and record calibrations
   "calibration.override", // let a run use equipment that is due, with a recorded reason
@@ -42,13 +43,13 @@ const STAFF_READ: Action[] = ["workspace.view", "shipment.view", "sample.view", 
 
 const MATRIX: Record<RoleName, readonly Action[]> = {
   // The clerk owns the door: receipts and storage, never test data.
-  INTAKE_CLERK: [...STAFF_READ, "shipment.create", "shipment.acknowledge", "shipment.correct", "sample.move", "account.self"],
+  INTAKE_CLERK: [...STAFF_READ, "shipment.create", "shipment.acknowledge", "shipment.correct", "sample.move", "location.manage", "account.self"],
   // The technician turns rolls into test data; receipts are not theirs to change.
   TECHNICIAN: [...STAFF_READ, "sample.cut", "sample.move", "run.operate", "account.self"],
   // QA judges and signs; the rule that they never approve their own work is enforced per record, not here.
   QA_MANAGER: [...STAFF_READ, "run.review", "certificate.issue", "calibration.override", "specification.manage", "audit.view", "account.self"],
   // The administrator keeps people, equipment and reference data, and produces no test results.
-  LAB_ADMIN: [...STAFF_READ, "user.manage", "equipment.manage", "specification.manage", "audit.view", "account.self"],
+  LAB_ADMIN: [...STAFF_READ, "user.manage", "equipment.manage", "specification.manage", "location.manage", "audit.view", "account.self"],
   // A client sees only the portal; record-level scoping to their organisation happens in each query.
   CLIENT_USER: ["portal.view", "account.self"],
 };

@@ -39,3 +39,8 @@ export async function makeUser(role: Role, options: { password?: string; clientO
 export function db() {
   return getDb();
 }
+
+export async function makeStorageLocation() {
+  const code = unique("LOC").toUpperCase().slice(0, 20);
+  return withActor(SYSTEM, (tx) => tx.storageLocation.create({ data: { code, name: `Shelf ${code}` } }));
+}

@@ -4,7 +4,7 @@ import { isAppError, type FieldErrors } from "@/lib/errors/app-error";
 
 export type ActionResult<T = null> =
   | { ok: true; data: T; message: string }
-  | { ok: false; message: string; fieldErrors: FieldErrors; code: string };
+  | { ok: false; message: string; fieldErrors: FieldErrors; code: string; details?: Record<string, unknown> };
 
 /**
  * Runs a server action's work and turns the outcome into something a form can show: a known AppError
@@ -15,7 +15,7 @@ export async function toActionResult<T>(work: () => Promise<T>, successMessage =
     return { ok: true, data: await work(), message: successMessage };
   } catch (error) {
     unstable_rethrow(error);
-    if (isAppError(error)) return { ok: false, message: error.message, fieldErrors: error.fieldErrors, code: error.code };
+    if (isAppError(error)) return { ok: false, message: error.message, fieldErrors: error.fieldErrors, code: error.code, details: error.details };
     console.error("server action failed", error);
     return { ok: false, message: "The change could not be saved because of a fault on the server; nothing was changed. Try again.", fieldErrors: {}, code: "INTERNAL" };
   }

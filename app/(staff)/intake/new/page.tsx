@@ -1,0 +1,17 @@
+import { ShipmentForm } from "@/components/intake/shipment-form";
+import { requirePageUser } from "@/lib/server/auth/require-permission";
+import { getIntakeOptions } from "@/lib/server/intake/get-intake-options";
+
+export const metadata = { title: "Log a shipment" };
+
+export default async function NewShipmentPage() {
+  const actor = await requirePageUser("shipment.create");
+  const options = await getIntakeOptions({ actor });
+  return (
+    <>
+      <h1>Log a shipment</h1>
+      <p className="muted">Record what arrived at the door. Each roll gets a lab number and a label; custody starts now.</p>
+      <ShipmentForm options={options} />
+    </>
+  );
+}

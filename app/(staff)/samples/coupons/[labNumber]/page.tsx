@@ -1,0 +1,68 @@
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { CustodyLedger } from "@/components/custody/custody-ledger";
+import { ItemCustodyActions } from "@/components/custody/item-custody-actions";
+import { PrepareSpecimenForm } from "@/components/samples/prepare-specimen-form";
+import { RecordFacts } from "@/components/samples/record-facts";
+import { StateTag } from "@/components/ui/state-tag";
+import { isAppError } from "@/lib/errors/app-error";
+import { formatDate, formatDateTime } from "@/lib/format/dates";
+import { can } from "@/lib/policy/permissions";
+import { requirePageUser } from "@/lib/server/auth/require-permission";
+import { getItemHistory } from "@/lib/server/samples/get-item-history";
+import { getCoupon } from "@/lib/server/samples/get-sample-item";
+import { listStorageLocations } from "@/lib/server/samples/list-storage-locations";
+
+type Props = { params: Promise<{ labNumber: string }> };
+
+export async function generateMetadata({ params }: Props) {
+  return { title: `Coupon ${(await params).labNumber}` };
+}
+
+export default async function CouponPage({ params }: Props) {
+  const actor = await requirePageUser("sample.view");
+  const { labNumber } = await params;
+  const coupon = await getCoupon({ actor, labNumber }).catch((error) => {
+    if (isAppError(error) && error.code === "NOT_FOUND") notFound();
+    throw error;
+  });
+  const [history, locations] = await Promise.all([getItemHistory({ actor, kind: "coupon", id: coupon.id }), listStorageLocations({ actor, activeOnly: true })]);
+  return (
+    <>
+      <div className="page-head">
+        <div>
+          <h1>Coupon <span className="mono">{coupon.labNumber}</span> <StateTag state={coupon.state} /></h1>
+          <p className="muted">From roll <Link className="mono" href={`/samples/rolls/${coupon.roll.labNumber}`}>{coupon.roll.labNumber}</Link> ({coupon.roll.rollNumber}) · {coupon.roll.project.name}</p>
+        </div>
+        <div className="links"><Link className="button button-quiet" href={`/labels?numbers=${[coupon.labNumber, ...coupon.specimens.map((s) => s.labNumber)].join(",")}`}>Labels</Link></div>
+      </div>
+      <div className="stack-gap">
+        <section className="card">
+          <RecordFacts facts={[
+            ["Position in the roll sample", coupon.positionInSample], ["Size (mm)", `${coupon.lengthMm} × ${coupon.widthMm}`],
+            ["Cut by", coupon.cutBy.name], ["Cut at", formatDateTime(coupon.cutAt)],
+            ["Kept at", coupon.storageLocation ? `${coupon.storageLocation.code} · ${coupon.storageLocation.name}` : "—"], ["Retained until", formatDate(coupon.retainUntil)],
+          ]} />
+          {can(actor.role, "sample.move") && <ItemCustodyActions kind="coupon" id={coupon.id} version={coupon.version} labNumber={coupon.labNumber} currentLocationId={coupon.storageLocationId} locations={locations} />}
+        </section>
+        <div className="grid">
+          <section className="card">
+            <h2>Specimens <span className="count">{coupon.specimens.length}</span></h2>
+            {coupon.specimens.length === 0 ? <p className="empty">No specimen prepared yet.</p> : (
+              <table className="list" data-testid="coupon-specimens">
+                <thead><tr><th>Specimen</th><th>Method</th><th>Prepared</th><th>State</th></tr></thead>
+                <tbody>{coupon.specimens.map((s) => (
+                  <tr key={s.id}><td><Link className="mono" href={`/samples/specimens/${s.labNumber}`}>{s.labNumber}</Link></td><td>ASTM {s.intendedMethodCode}</td><td>{formatDate(s.preparedAt)}</td><td><StateTag state={s.state} /></td></tr>
+                ))}</tbody>
+              </table>
+            )}
+          </section>
+          {can(actor.role, "sample.cut") && coupon.state === "CUT" && (
+            <section className="card"><h2>Prepare a specimen</h2><PrepareSpecimenForm couponId={coupon.id} locations={locations} /></section>
+          )}
+        </div>
+        <section className="card"><h2>Custody ledger</h2><CustodyLedger events={history.events} /></section>
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,72 @@
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { CorrectionHistory } from "@/components/custody/correction-history";
+import { CustodyLedger } from "@/components/custody/custody-ledger";
+import { ItemCustodyActions } from "@/components/custody/item-custody-actions";
+import { CutCouponForm } from "@/components/samples/cut-coupon-form";
+import { RecordFacts } from "@/components/samples/record-facts";
+import { StateTag } from "@/components/ui/state-tag";
+import { isAppError } from "@/lib/errors/app-error";
+import { formatDate, formatDateTime } from "@/lib/format/dates";
+import { can } from "@/lib/policy/permissions";
+import { requirePageUser } from "@/lib/server/auth/require-permission";
+import { getItemHistory } from "@/lib/server/samples/get-item-history";
+import { getRoll } from "@/lib/server/samples/get-sample-item";
+import { listStorageLocations } from "@/lib/server/samples/list-storage-locations";
+
+type Props = { params: Promise<{ labNumber: string }> };
+
+export async function generateMetadata({ params }: Props) {
+  return { title: `Roll ${(await params).labNumber}` };
+}
+
+export default async function RollPage({ params }: Props) {
+  const actor = await requirePageUser("sample.view");
+  const { labNumber } = await params;
+  const roll = await getRoll({ actor, labNumber }).catch((error) => {
+    if (isAppError(error) && error.code === "NOT_FOUND") notFound();
+    throw error;
+  });
+  const [history, locations] = await Promise.all([getItemHistory({ actor, kind: "roll", id: roll.id }), listStorageLocations({ actor, activeOnly: true })]);
+  return (
+    <>
+      <div className="page-head">
+        <div>
+          <h1>Roll <span className="mono">{roll.labNumber}</span> <StateTag state={roll.state} /></h1>
+          <p className="muted">{roll.project.clientOrganization.name} · {roll.project.name} · shipment <Link className="mono" href={`/intake/shipments/${roll.shipment.labNumber}`}>{roll.shipment.labNumber}</Link></p>
+        </div>
+        <div className="links"><Link className="button button-quiet" href={`/labels?numbers=${roll.labNumber}`}>Label</Link></div>
+      </div>
+      <div className="stack-gap">
+        <section className="card">
+          <RecordFacts facts={[
+            ["Roll number", roll.rollNumber], ["Lot number", roll.lotNumber], ["Product", roll.product], ["Manufacturer", roll.manufacturer],
+            ["Sample size (mm)", roll.sampleLengthMm && roll.sampleWidthMm ? `${roll.sampleLengthMm} × ${roll.sampleWidthMm}` : "—"],
+            ["Machine direction marked", roll.machineDirectionMarked ? "yes" : "no"], ["Received", formatDateTime(roll.shipment.receivedAt)],
+            ["Kept at", roll.storageLocation ? `${roll.storageLocation.code} · ${roll.storageLocation.name}` : "—"],
+            ["Retained until", formatDate(roll.retainUntil)],
+          ]} />
+          {can(actor.role, "sample.move") && <ItemCustodyActions kind="roll" id={roll.id} version={roll.version} labNumber={roll.labNumber} currentLocationId={roll.storageLocationId} locations={locations} />}
+        </section>
+        <div className="grid">
+          <section className="card">
+            <h2>Coupons <span className="count">{roll.coupons.length}</span></h2>
+            {roll.coupons.length === 0 ? <p className="empty">No coupon cut yet.</p> : (
+              <table className="list" data-testid="roll-coupons">
+                <thead><tr><th>Coupon</th><th>Position</th><th>Cut</th><th>Specimens</th><th>State</th></tr></thead>
+                <tbody>{roll.coupons.map((c) => (
+                  <tr key={c.id}><td><Link className="mono" href={`/samples/coupons/${c.labNumber}`}>{c.labNumber}</Link></td><td>{c.positionInSample}</td><td>{formatDate(c.cutAt)}</td><td>{c._count.specimens}</td><td><StateTag state={c.state} /></td></tr>
+                ))}</tbody>
+              </table>
+            )}
+          </section>
+          {can(actor.role, "sample.cut") && (
+            <section className="card"><h2>Cut a coupon</h2><CutCouponForm rollId={roll.id} rollVersion={roll.version} locations={locations} /></section>
+          )}
+        </div>
+        <section className="card"><h2>Custody ledger</h2><CustodyLedger events={history.events} /></section>
+        <section className="card"><h2>Corrections</h2><CorrectionHistory corrections={history.corrections} /></section>
+      </div>
+    </>
+  );
+}

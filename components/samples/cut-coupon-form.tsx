@@ -1,0 +1,44 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { useForm } from "react-hook-form";
+import type { z } from "zod";
+import { cutCouponAction } from "@/app/(staff)/samples/actions";
+import { cutCouponSchema } from "@/lib/validation/samples";
+import { applyServerErrors } from "@/components/ui/apply-server-errors";
+import { Field } from "@/components/ui/field";
+import { LabNumberLinks } from "@/components/intake/lab-number-links";
+import { nowForDateTimeInput } from "@/components/ui/now-for-input";
+
+type Locations = Array<{ id: string; code: string; name: string }>;
+
+export function CutCouponForm({ rollId, rollVersion, locations }: { rollId: string; rollVersion: number; locations: Locations }) {
+  const router = useRouter();
+  const [notice, setNotice] = useState<{ ok: boolean; text: string } | null>(null);
+  const form = useForm<z.input<typeof cutCouponSchema>, unknown, z.output<typeof cutCouponSchema>>({
+    resolver: zodResolver(cutCouponSchema),
+    defaultValues: { rollId, rollVersion, positionInSample: "", lengthMm: "", widthMm: "", cutAt: nowForDateTimeInput(), storageLocationId: locations[0]?.id ?? "" },
+  });
+  const { register, handleSubmit, formState } = form;
+  const onSubmit = handleSubmit(async (values) => {
+    const result = await cutCouponAction(values);
+    setNotice({ ok: result.ok, text: result.ok ? `Coupon ${result.data.labNumber} recorded.` : result.message });
+    if (result.ok) router.refresh();
+    else applyServerErrors(form, result.fieldErrors);
+  });
+  return (
+    <form className="stack" onSubmit={onSubmit} noValidate aria-label="Cut a coupon">
+      {notice && <div className={`notice ${notice.ok ? "notice-ok" : "notice-error"}`} role="status"><LabNumberLinks text={notice.text} /></div>}
+      <Field label="Position in the roll sample" hint="e.g. centre, 300 mm from the leading edge" error={formState.errors.positionInSample?.message}><input {...register("positionInSample")} /></Field>
+      <Field label="Length (mm)" error={formState.errors.lengthMm?.message}><input inputMode="decimal" {...register("lengthMm")} /></Field>
+      <Field label="Width (mm)" error={formState.errors.widthMm?.message}><input inputMode="decimal" {...register("widthMm")} /></Field>
+      <Field label="Cut at" error={formState.errors.cutAt?.message}><input type="datetime-local" {...register("cutAt")} /></Field>
+      <Field label="Kept at" error={formState.errors.storageLocationId?.message}>
+        <select {...register("storageLocationId")}>{locations.map((l) => <option key={l.id} value={l.id}>{l.code} · {l.name}</option>)}</select>
+      </Field>
+      <button className="button" type="submit" disabled={formState.isSubmitting}>Record coupon</button>
+    </form>
+  );
+}

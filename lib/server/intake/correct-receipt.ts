@@ -1,0 +1,55 @@
+import "server-only";
+import { AppError } from "@/lib/errors/app-error";
+import { correctReceiptSchema, rollEntrySchema, ROLL_CORRECTABLE_FIELDS, SHIPMENT_CORRECTABLE_FIELDS, shipmentDetailsSchema } from "@/lib/validation/intake";
+import type { CurrentUser } from "../auth/current-user";
+import { requirePermission } from "../auth/require-permission";
+import { withActor } from "../db/transaction";
+import { parseOrThrow } from "../validation/parse";
+
+function asText(value: unknown): string {
+  if (value instanceof Date) return value.toISOString();
+  return value === null || value === undefined ? "" : String(value);
+}
+
+/**
+ * Changes one field of a receipt (the shipment or one of its rolls), keeping the old value, the new
+ * value and the reason as a Correction row beside the audit trail. Only the intake side may do this:
+ * technicians cannot change receipts. The new value is checked by the same schema as at intake.
+ */
+export async function correctReceipt(options: { actor: CurrentUser; input: unknown }) {
+  requirePermission(options.actor, "shipment.correct");
+  const input = parseOrThrow(correctReceiptSchema, options.input);
+  const fields: readonly string[] = input.target === "shipment" ? SHIPMENT_CORRECTABLE_FIELDS : ROLL_CORRECTABLE_FIELDS;
+  if (!fields.includes(input.field)) throw new AppError("INVALID_INPUT", `${input.field} cannot be corrected here.`, { fieldErrors: { field: "Choose a field that can be corrected." } });
+
+  const fieldSchema = input.target === "shipment" ? shipmentDetailsSchema.shape[input.field as (typeof SHIPMENT_CORRECTABLE_FIELDS)[number]] : rollEntrySchema.shape[input.field as (typeof ROLL_CORRECTABLE_FIELDS)[number]];
+  const checked = fieldSchema.safeParse(input.value);
+  if (!checked.success) throw new AppError("INVALID_INPUT", undefined, { fieldErrors: { value: checked.error.issues[0]?.message ?? "Not a valid value." } });
+  const newValue = checked.data as unknown;
+
+  return withActor(options.actor, async (tx) => {
+    const current =
+      input.target === "shipment"
+        ? await tx.shipment.findUnique({ where: { id: input.id } })
+        : await tx.roll.findUnique({ where: { id: input.id } });
+    if (!current) throw new AppError("NOT_FOUND");
+    if (current.version !== input.version) throw new AppError("CONFLICT", `${current.labNumber} was changed by someone else since you opened it; reload and try again.`);
+    const oldValue = (current as Record<string, unknown>)[input.field];
+    if (asText(oldValue) === asText(newValue)) throw new AppError("INVALID_INPUT", "The new value is the same as the present one.", { fieldErrors: { value: "Unchanged." } });
+
+    const data = { [input.field]: newValue, version: { increment: 1 } };
+    const updated =
+      input.target === "shipment"
+        ? await tx.shipment.updateMany({ where: { id: input.id, version: input.version }, data })
+        : await tx.roll.updateMany({ where: { id: input.id, version: input.version }, data });
+    if (updated.count !== 1) throw new AppError("CONFLICT");
+    await tx.correction.create({
+      data: { entity: input.target === "shipment" ? "Shipment" : "Roll", entityId: input.id, field: input.field, oldValue: asText(oldValue), newValue: asText(newValue), reason: input.reason, actorId: options.actor.id },
+    });
+    if (input.target === "roll") {
+      const roll = current as { id: string; state: "RECEIVED" };
+      await tx.custodyEvent.create({ data: { action: "CORRECTED", rollId: roll.id, fromState: roll.state, toState: roll.state, actorId: options.actor.id, note: `${input.field}: ${asText(oldValue)} → ${asText(newValue)} (${input.reason})` } });
+    }
+    return { labNumber: current.labNumber };
+  });
+}

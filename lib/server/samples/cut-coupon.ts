@@ -1,0 +1,31 @@
+import "server-only";
+import { AppError } from "@/lib/errors/app-error";
+import { cutCouponSchema } from "@/lib/validation/samples";
+import type { CurrentUser } from "../auth/current-user";
+import { requirePermission } from "../auth/require-permission";
+import { allocateLabNumber } from "../db/allocate-lab-number";
+import { withActor } from "../db/transaction";
+import { applyCustodyAction } from "../custody/apply-custody-action";
+import { recordNewItemEvent } from "../custody/record-new-item-event";
+import { parseOrThrow } from "../validation/parse";
+
+/** The technician cuts a coupon from a roll: the roll's custody records the cut, the coupon gets its number. */
+export async function cutCoupon(options: { actor: CurrentUser; input: unknown }) {
+  requirePermission(options.actor, "sample.cut");
+  const input = parseOrThrow(cutCouponSchema, options.input);
+  return withActor(options.actor, async (tx) => {
+    const location = await tx.storageLocation.findUnique({ where: { id: input.storageLocationId }, select: { active: true } });
+    if (!location?.active) throw new AppError("INVALID_INPUT", undefined, { fieldErrors: { storageLocationId: "Choose a storage location in use." } });
+    const labNumber = await allocateLabNumber(tx, "coupon", input.cutAt);
+    const roll = await applyCustodyAction(tx, { actor: options.actor, kind: "roll", id: input.rollId, action: "CUT", expectedVersion: input.rollVersion, at: input.cutAt, note: `Coupon ${labNumber}` });
+    const coupon = await tx.coupon.create({
+      data: {
+        labNumber, rollId: input.rollId, positionInSample: input.positionInSample, lengthMm: input.lengthMm, widthMm: input.widthMm,
+        cutById: options.actor.id, cutAt: input.cutAt, storageLocationId: input.storageLocationId,
+      },
+      select: { id: true, labNumber: true },
+    });
+    await recordNewItemEvent(tx, { actor: options.actor, kind: "coupon", id: coupon.id, action: "CUT", state: "CUT", locationId: input.storageLocationId, at: input.cutAt, note: `From roll ${roll.labNumber}` });
+    return coupon;
+  });
+}
