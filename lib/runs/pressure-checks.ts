@@ -1,3 +1,4 @@
+import { kPaToPa, psiToKPa } from "../hydraulics/units";
 /**
  * Checks of entered pressures before they are saved (common practice, see shared/DOMAIN.md): the cell
  * (confining) pressure must exceed both line pressures by the confining margin, or the membrane can
@@ -31,4 +32,9 @@ export function checkStagePressures(p: StagePressuresPa, requiredMarginPa: numbe
   for (const o of overRated)
     warnings.push(`${o.assetTag} is rated to ${(o.ratedMaxPressurePa / 1000).toFixed(0)} kPa; ${(o.pressurePa / 1000).toFixed(0)} kPa would exceed it.`);
   return { marginPa, requiredMarginPa, marginKept, overRated, warnings };
+}
+
+/** A pressure typed in kPa or psi, in pascals (psi factor exact, NIST SP 811, from lib/hydraulics). */
+export function pressureToPa(value: number, unit: "KPA" | "PSI"): number {
+  return unit === "PSI" ? kPaToPa(psiToKPa(value)) : kPaToPa(value);
 }

@@ -4,7 +4,7 @@ import type { Tx } from "@/lib/server/db/transaction";
 import { allocateLabNumber } from "@/lib/server/db/allocate-lab-number";
 import { hashPassword } from "@/lib/server/auth/password";
 import { DEMO_CLIENTS, DEMO_LAB, DEMO_PASSWORD, DEMO_STAFF } from "./demo-people";
-import { DEMO_METHODS, DEMO_SPEC_LIMITS } from "./demo-method-defaults";
+import { DEMO_SPEC_LIMITS } from "./demo-method-defaults";
 import { makeDemoReadings } from "./demo-readings";
 
 const DAY = 86_400_000;
@@ -15,7 +15,6 @@ type Ids = Record<string, string>;
 export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void> {
   const ago = (days: number) => new Date(now.getTime() - days * DAY);
   await tx.laboratory.create({ data: { id: "lab", ...DEMO_LAB } });
-  for (const method of DEMO_METHODS) await tx.testMethod.create({ data: { code: method.code, title: method.title, defaults: method.defaults } });
 
   // People. One hash per distinct password is enough for the demo; each user still gets their own row.
   const passwordHash = await hashPassword(DEMO_PASSWORD);
