@@ -1,6 +1,6 @@
 import { StaffQueues } from "@/components/home/staff-queues";
 import { ROLE_LABELS } from "@/lib/policy/permissions";
-import { requirePageUser } from "@/lib/server/auth/require-permission";
+import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getHomeQueues } from "@/lib/server/queues/get-home-queues";
 
 export const metadata = { title: "Today" };

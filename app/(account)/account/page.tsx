@@ -1,6 +1,6 @@
 import { ChangePasswordForm } from "@/components/account/change-password-form";
 import { ROLE_LABELS } from "@/lib/policy/permissions";
-import { requirePageUser } from "@/lib/server/auth/require-permission";
+import { requirePageUser } from "@/lib/server/auth/require-page-user";
 
 export const metadata = { title: "My account" };
 

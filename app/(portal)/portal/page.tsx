@@ -1,5 +1,5 @@
 import { QueueCard } from "@/components/ui/queue-card";
-import { requirePageUser } from "@/lib/server/auth/require-permission";
+import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getHomeQueues } from "@/lib/server/queues/get-home-queues";
 
 export const metadata = { title: "Our projects" };

@@ -1,6 +1,6 @@
 import { QueueCard } from "@/components/ui/queue-card";
 import { formatDate } from "@/lib/format/dates";
-import { requirePageUser } from "@/lib/server/auth/require-permission";
+import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { listCertificates } from "@/lib/server/certificates/list-certificates";
 
 export const metadata = { title: "Certificates" };

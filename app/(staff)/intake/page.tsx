@@ -1,34 +1,58 @@
-import { QueueCard } from "@/components/ui/queue-card";
+import Link from "next/link";
+import { IgnoredValues } from "@/components/lists/ignored-values";
+import { ListCard } from "@/components/lists/list-card";
+import { ListFilterBar } from "@/components/lists/list-filter-bar";
+import { Pager } from "@/components/lists/pager";
+import { SortHeader } from "@/components/lists/sort-header";
 import { formatDateTime } from "@/lib/format/dates";
-import { requirePageUser } from "@/lib/server/auth/require-permission";
-import { listShipments } from "@/lib/server/intake/list-shipments";
+import { requirePageUser } from "@/lib/server/auth/require-page-user";
+import { listFilterOptions } from "@/lib/server/lists/list-filter-options";
+import { listShipments } from "@/lib/server/lists/list-shipments";
+import { can } from "@/lib/policy/permissions";
+import { listQueryToFilterParts, parseListQuery, type RawSearchParams } from "@/lib/validation/list-query";
 
 export const metadata = { title: "Intake" };
 
-export default async function IntakePage() {
+const BASE = "/intake";
+
+export default async function IntakePage({ searchParams }: { searchParams: Promise<RawSearchParams> }) {
   const actor = await requirePageUser("shipment.view");
-  const shipments = await listShipments({ actor });
+  const { query, ignored } = parseListQuery("shipments", await searchParams);
+  const [list, options] = await Promise.all([listShipments({ actor, query }), listFilterOptions({ actor })]);
+  const sort = { kind: "shipments" as const, query, basePath: BASE };
   return (
     <>
       <h1>Intake</h1>
       <p className="muted">Shipments as they arrived at the door, newest first.</p>
-      <QueueCard title="Shipments" count={shipments.length} empty="No shipment has been logged yet." testId="shipment-list">
+      <ListFilterBar {...listQueryToFilterParts("shipments", query)} clients={options.clients} projects={options.projects} show="acknowledged" dateLabel="Received" searchHint="S26-00012 or a roll number" />
+      <IgnoredValues ignored={ignored} />
+      <ListCard
+        title="Shipments" total={list.total} testId="shipment-list"
+        empty="No shipment matches these filters."
+        actions={can(actor.role, "shipment.create") && <Link className="button" href="/intake/new">Log a shipment</Link>}
+        pager={<Pager kind="shipments" query={query} total={list.total} pageCount={list.pageCount} basePath={BASE} noun="shipments" />}
+      >
         <table className="list">
-          <thead><tr><th>Shipment</th><th>Client / project</th><th>Received</th><th>Delivered by</th><th>Rolls</th><th>Receipt</th></tr></thead>
+          <thead>
+            <tr>
+              <SortHeader label="Shipment" column="labNumber" {...sort} /><th>Client / project</th><SortHeader label="Received" column="received" {...sort} />
+              <th>Delivered by</th><th>Rolls</th><th>Receipt</th>
+            </tr>
+          </thead>
           <tbody>
-            {shipments.map((s) => (
+            {list.rows.map((s) => (
               <tr key={s.id}>
-                <td className="mono">{s.labNumber}</td>
-                <td>{s.clientOrganization.name}<div className="muted">{s.project.name}</div></td>
+                <td className="mono"><Link href={`/intake/shipments/${s.labNumber}`}>{s.labNumber}</Link></td>
+                <td>{s.clientName}<div className="muted">{s.projectName}</div></td>
                 <td>{formatDateTime(s.receivedAt)}</td>
                 <td>{s.deliveredBy}<div className="muted">{s.conditionNotes}</div></td>
-                <td>{s._count.rolls}</td>
+                <td>{s.rollCount}</td>
                 <td>{s.acknowledgedAt ? <span className="state state-ok">acknowledged</span> : <span className="state state-warn">to acknowledge</span>}</td>
               </tr>
             ))}
           </tbody>
         </table>
-      </QueueCard>
+      </ListCard>
     </>
   );
 }

@@ -1,6 +1,6 @@
 import { RunTable } from "@/components/runs/run-table";
 import { QueueCard } from "@/components/ui/queue-card";
-import { requirePageUser } from "@/lib/server/auth/require-permission";
+import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { listRuns } from "@/lib/server/runs/list-runs";
 
 export const metadata = { title: "Runs" };

@@ -1,35 +1,59 @@
-import { QueueCard } from "@/components/ui/queue-card";
+import Link from "next/link";
+import { IgnoredValues } from "@/components/lists/ignored-values";
+import { ListCard } from "@/components/lists/list-card";
+import { ListFilterBar } from "@/components/lists/list-filter-bar";
+import { Pager } from "@/components/lists/pager";
+import { SampleTabs } from "@/components/lists/sample-tabs";
+import { SortHeader } from "@/components/lists/sort-header";
 import { StateTag } from "@/components/ui/state-tag";
-import { requirePageUser } from "@/lib/server/auth/require-permission";
-import { listRolls } from "@/lib/server/samples/list-rolls";
+import { formatDate } from "@/lib/format/dates";
+import { requirePageUser } from "@/lib/server/auth/require-page-user";
+import { listFilterOptions } from "@/lib/server/lists/list-filter-options";
+import { listRolls } from "@/lib/server/lists/list-rolls";
+import { listQueryToFilterParts, parseListQuery, type RawSearchParams } from "@/lib/validation/list-query";
 
-export const metadata = { title: "Samples" };
+export const metadata = { title: "Samples: rolls" };
 
-export default async function SamplesPage() {
+const BASE = "/samples";
+
+export default async function SamplesPage({ searchParams }: { searchParams: Promise<RawSearchParams> }) {
   const actor = await requirePageUser("sample.view");
-  const rolls = await listRolls({ actor });
+  const { query, ignored } = parseListQuery("rolls", await searchParams);
+  const [list, options] = await Promise.all([listRolls({ actor, query }), listFilterOptions({ actor })]);
+  const sort = { kind: "rolls" as const, query, basePath: BASE };
   return (
     <>
       <h1>Samples</h1>
-      <p className="muted">Rolls in the laboratory's custody, newest first.</p>
-      <QueueCard title="Rolls" count={rolls.length} empty="No roll has been received yet." testId="roll-list">
+      <SampleTabs current="rolls" />
+      <ListFilterBar {...listQueryToFilterParts("rolls", query)} clients={options.clients} projects={options.projects} show="state" dateLabel="Received" searchHint="R26-00042 or a roll number" />
+      <IgnoredValues ignored={ignored} />
+      <ListCard
+        title="Rolls" total={list.total} testId="roll-list" empty="No roll matches these filters."
+        pager={<Pager kind="rolls" query={query} total={list.total} pageCount={list.pageCount} basePath={BASE} noun="rolls" />}
+      >
         <table className="list">
-          <thead><tr><th>Lab number</th><th>Roll / lot</th><th>Client / project</th><th>Product</th><th>Coupons</th><th>Where</th><th>State</th></tr></thead>
+          <thead>
+            <tr>
+              <SortHeader label="Lab number" column="labNumber" {...sort} /><SortHeader label="Roll / lot" column="rollNumber" {...sort} /><th>Client / project</th>
+              <th>Product</th><SortHeader label="Received" column="received" {...sort} /><th>Coupons</th><th>Where</th><SortHeader label="State" column="state" {...sort} />
+            </tr>
+          </thead>
           <tbody>
-            {rolls.map((r) => (
+            {list.rows.map((r) => (
               <tr key={r.id}>
-                <td className="mono">{r.labNumber}</td>
+                <td className="mono"><Link href={`/samples/rolls/${r.labNumber}`}>{r.labNumber}</Link></td>
                 <td>{r.rollNumber}<div className="muted">lot {r.lotNumber}</div></td>
-                <td>{r.project.clientOrganization.name}<div className="muted">{r.project.name}</div></td>
+                <td>{r.clientName}<div className="muted">{r.projectName}</div></td>
                 <td>{r.product}</td>
-                <td>{r._count.coupons}</td>
-                <td className="mono">{r.storageLocation?.code ?? "—"}</td>
+                <td className="mono">{formatDate(r.receivedAt)}<div className="muted">{r.shipmentLabNumber}</div></td>
+                <td>{r.couponCount}</td>
+                <td className="mono">{r.locationCode ?? "—"}</td>
                 <td><StateTag state={r.state} /></td>
               </tr>
             ))}
           </tbody>
         </table>
-      </QueueCard>
+      </ListCard>
     </>
   );
 }

@@ -1,6 +1,6 @@
 import { redirect } from "next/navigation";
 import { LabNumberSearch } from "@/components/shell/lab-number-search";
-import { requirePageUser } from "@/lib/server/auth/require-permission";
+import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { findItemAddress } from "@/lib/server/samples/find-item-by-lab-number";
 
 export const metadata = { title: "Find" };

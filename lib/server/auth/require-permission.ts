@@ -1,5 +1,4 @@
 import "server-only";
-import { forbidden, redirect } from "next/navigation";
 import { can, describeRolesAllowedTo, type Action } from "@/lib/policy/permissions";
 import { AppError } from "@/lib/errors/app-error";
 import { getCurrentUser, type CurrentUser } from "./current-user";
@@ -15,13 +14,5 @@ export async function requireUser(action: Action): Promise<CurrentUser> {
   const user = await getCurrentUser();
   if (!user) throw new AppError("UNAUTHENTICATED");
   requirePermission(user, action);
-  return user;
-}
-
-/** For pages: the signed-in user allowed to take `action`; otherwise the sign-in page or the 403 page. */
-export async function requirePageUser(action: Action): Promise<CurrentUser> {
-  const user = await getCurrentUser();
-  if (!user) redirect("/sign-in");
-  if (!can(user.role, action)) forbidden();
   return user;
 }

@@ -1,6 +1,6 @@
 import { QueueCard } from "@/components/ui/queue-card";
 import { formatDateTime } from "@/lib/format/dates";
-import { requirePageUser } from "@/lib/server/auth/require-permission";
+import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { listAuditEntries } from "@/lib/server/audit/list-audit-entries";
 
 export const metadata = { title: "Audit trail" };

@@ -2,7 +2,7 @@ import { CreateUserForm } from "@/components/users/create-user-form";
 import { UserRowActions } from "@/components/users/user-row-actions";
 import { formatDate } from "@/lib/format/dates";
 import { ROLE_LABELS } from "@/lib/policy/permissions";
-import { requirePageUser } from "@/lib/server/auth/require-permission";
+import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { listClientOrganizationsForSelect, listUsers } from "@/lib/server/users/list-users";
 
 export const metadata = { title: "People" };

@@ -1,5 +1,5 @@
 import { ShipmentForm } from "@/components/intake/shipment-form";
-import { requirePageUser } from "@/lib/server/auth/require-permission";
+import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getIntakeOptions } from "@/lib/server/intake/get-intake-options";
 
 export const metadata = { title: "Log a shipment" };

@@ -1,6 +1,6 @@
 import { LocationForm } from "@/components/samples/location-form";
 import { can } from "@/lib/policy/permissions";
-import { requirePageUser } from "@/lib/server/auth/require-permission";
+import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { listStorageLocations } from "@/lib/server/samples/list-storage-locations";
 
 export const metadata = { title: "Storage locations" };

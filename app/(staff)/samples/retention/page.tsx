@@ -1,6 +1,6 @@
 import { DisposeForm } from "@/components/samples/dispose-form";
 import { can } from "@/lib/policy/permissions";
-import { requirePageUser } from "@/lib/server/auth/require-permission";
+import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { listRetentionDue } from "@/lib/server/samples/list-retention-due";
 
 export const metadata = { title: "Retention" };

@@ -9,7 +9,7 @@ import { StateTag } from "@/components/ui/state-tag";
 import { isAppError } from "@/lib/errors/app-error";
 import { formatDateTime } from "@/lib/format/dates";
 import { can } from "@/lib/policy/permissions";
-import { requirePageUser } from "@/lib/server/auth/require-permission";
+import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getGenealogy } from "@/lib/server/samples/get-genealogy";
 import { getShipment } from "@/lib/server/samples/get-sample-item";
 

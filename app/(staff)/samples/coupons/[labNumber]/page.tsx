@@ -8,7 +8,7 @@ import { StateTag } from "@/components/ui/state-tag";
 import { isAppError } from "@/lib/errors/app-error";
 import { formatDate, formatDateTime } from "@/lib/format/dates";
 import { can } from "@/lib/policy/permissions";
-import { requirePageUser } from "@/lib/server/auth/require-permission";
+import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getItemHistory } from "@/lib/server/samples/get-item-history";
 import { getCoupon } from "@/lib/server/samples/get-sample-item";
 import { listStorageLocations } from "@/lib/server/samples/list-storage-locations";

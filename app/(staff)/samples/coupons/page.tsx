@@ -1,0 +1,60 @@
+import Link from "next/link";
+import { IgnoredValues } from "@/components/lists/ignored-values";
+import { ListCard } from "@/components/lists/list-card";
+import { ListFilterBar } from "@/components/lists/list-filter-bar";
+import { Pager } from "@/components/lists/pager";
+import { SampleTabs } from "@/components/lists/sample-tabs";
+import { SortHeader } from "@/components/lists/sort-header";
+import { StateTag } from "@/components/ui/state-tag";
+import { formatDateTime } from "@/lib/format/dates";
+import { requirePageUser } from "@/lib/server/auth/require-page-user";
+import { listCoupons } from "@/lib/server/lists/list-coupons";
+import { listFilterOptions } from "@/lib/server/lists/list-filter-options";
+import { listQueryToFilterParts, parseListQuery, type RawSearchParams } from "@/lib/validation/list-query";
+
+export const metadata = { title: "Samples: coupons" };
+
+const BASE = "/samples/coupons";
+
+export default async function CouponsPage({ searchParams }: { searchParams: Promise<RawSearchParams> }) {
+  const actor = await requirePageUser("sample.view");
+  const { query, ignored } = parseListQuery("coupons", await searchParams);
+  const [list, options] = await Promise.all([listCoupons({ actor, query }), listFilterOptions({ actor })]);
+  const sort = { kind: "coupons" as const, query, basePath: BASE };
+  return (
+    <>
+      <h1>Samples</h1>
+      <SampleTabs current="coupons" />
+      <ListFilterBar {...listQueryToFilterParts("coupons", query)} clients={options.clients} projects={options.projects} show="state" dateLabel="Cut" searchHint="C26-00007, R26-00042 or a roll number" />
+      <IgnoredValues ignored={ignored} />
+      <ListCard
+        title="Coupons" total={list.total} testId="coupon-list" empty="No coupon matches these filters."
+        pager={<Pager kind="coupons" query={query} total={list.total} pageCount={list.pageCount} basePath={BASE} noun="coupons" />}
+      >
+        <table className="list">
+          <thead>
+            <tr>
+              <SortHeader label="Lab number" column="labNumber" {...sort} /><th>Roll</th><th>Position</th><th>Size (mm)</th>
+              <th>Cut by</th><SortHeader label="Cut" column="cut" {...sort} /><th>Specimens</th><th>Where</th><SortHeader label="State" column="state" {...sort} />
+            </tr>
+          </thead>
+          <tbody>
+            {list.rows.map((c) => (
+              <tr key={c.id}>
+                <td className="mono"><Link href={`/samples/coupons/${c.labNumber}`}>{c.labNumber}</Link></td>
+                <td className="mono"><Link href={`/samples/rolls/${c.rollLabNumber}`}>{c.rollLabNumber}</Link></td>
+                <td>{c.positionInSample}</td>
+                <td>{c.lengthMm} × {c.widthMm}</td>
+                <td>{c.cutByName}</td>
+                <td>{formatDateTime(c.cutAt)}</td>
+                <td>{c.specimenCount}</td>
+                <td className="mono">{c.locationCode ?? "—"}</td>
+                <td><StateTag state={c.state} /></td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </ListCard>
+    </>
+  );
+}

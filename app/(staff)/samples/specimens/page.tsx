@@ -1,0 +1,63 @@
+import Link from "next/link";
+import { IgnoredValues } from "@/components/lists/ignored-values";
+import { ListCard } from "@/components/lists/list-card";
+import { ListFilterBar } from "@/components/lists/list-filter-bar";
+import { Pager } from "@/components/lists/pager";
+import { SampleTabs } from "@/components/lists/sample-tabs";
+import { SortHeader } from "@/components/lists/sort-header";
+import { StateTag } from "@/components/ui/state-tag";
+import { formatDateTime } from "@/lib/format/dates";
+import { requirePageUser } from "@/lib/server/auth/require-page-user";
+import { listFilterOptions } from "@/lib/server/lists/list-filter-options";
+import { listSpecimens } from "@/lib/server/lists/list-specimens";
+import { listQueryToFilterParts, parseListQuery, type RawSearchParams } from "@/lib/validation/list-query";
+
+export const metadata = { title: "Samples: specimens" };
+
+const BASE = "/samples/specimens";
+
+export default async function SpecimensPage({ searchParams }: { searchParams: Promise<RawSearchParams> }) {
+  const actor = await requirePageUser("sample.view");
+  const { query, ignored } = parseListQuery("specimens", await searchParams);
+  const [list, options] = await Promise.all([listSpecimens({ actor, query }), listFilterOptions({ actor })]);
+  const sort = { kind: "specimens" as const, query, basePath: BASE };
+  return (
+    <>
+      <h1>Samples</h1>
+      <SampleTabs current="specimens" />
+      <ListFilterBar {...listQueryToFilterParts("specimens", query)} clients={options.clients} projects={options.projects} show="state" dateLabel="Prepared" searchHint="P26-00003, C26-…, R26-… or a roll number" />
+      <IgnoredValues ignored={ignored} />
+      <ListCard
+        title="Specimens" total={list.total} testId="specimen-list" empty="No specimen matches these filters."
+        pager={<Pager kind="specimens" query={query} total={list.total} pageCount={list.pageCount} basePath={BASE} noun="specimens" />}
+      >
+        <table className="list">
+          <thead>
+            <tr>
+              <SortHeader label="Lab number" column="labNumber" {...sort} /><th>Coupon / roll</th><th>Method</th><th>Die ⌀ (mm)</th><th>Thickness (mm)</th>
+              <th>Prepared by</th><SortHeader label="Prepared" column="prepared" {...sort} /><th>Where</th><SortHeader label="State" column="state" {...sort} />
+            </tr>
+          </thead>
+          <tbody>
+            {list.rows.map((s) => (
+              <tr key={s.id}>
+                <td className="mono"><Link href={`/samples/specimens/${s.labNumber}`}>{s.labNumber}</Link></td>
+                <td className="mono">
+                  <Link href={`/samples/coupons/${s.couponLabNumber}`}>{s.couponLabNumber}</Link>
+                  <div className="muted"><Link href={`/samples/rolls/${s.rollLabNumber}`}>{s.rollLabNumber}</Link></div>
+                </td>
+                <td>{s.intendedMethodCode}</td>
+                <td>{s.dieDiameterMm}</td>
+                <td>{s.initialThicknessMm}</td>
+                <td>{s.preparedByName}</td>
+                <td>{formatDateTime(s.preparedAt)}</td>
+                <td className="mono">{s.locationCode ?? "—"}</td>
+                <td><StateTag state={s.state} /></td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </ListCard>
+    </>
+  );
+}

@@ -1,0 +1,181 @@
+/**
+ * Benchmark of the four list queries (lib/server/lists) at 100,000 rolls: a throw-away database on the
+ * DATABASE_URL server, bulk-filled with SQL, then each typical query timed a few times. Target on the
+ * 2-core machines: every list under ~100 ms. Prints figures and the plan of the slowest query; asserts nothing.
+ * Run: DATABASE_URL=postgresql://postgres@127.0.0.1:5432/postgres npx tsx --conditions=react-server scripts/bench-lists.ts
+ * SEEPLINE_BENCH_KEEP_DB=1 keeps the database afterwards (its address is printed) to look at plans by hand.
+ */
+import pg from "pg";
+import type { CurrentUser } from "../lib/server/auth/current-user";
+import { parseListQuery, type ListKind } from "../lib/validation/list-query";
+import { createTestDatabase } from "../tests/support/test-database";
+
+const ROLLS = 100_000;
+const SHIPMENTS = 5_000;
+const PROJECTS = 300;
+const CLIENTS = 30;
+const REPEAT = 7;
+
+// Deterministic pseudo-random spreads come from hashing the row number, so every run builds the same data.
+const SEED_SQL = `
+SELECT set_config('seepline.actor_id', 'system:bench', false);
+INSERT INTO "User" (id, email, name, "passwordHash", role, "updatedAt")
+  SELECT 'bench-user-' || g, 'bench' || g || '@example.test', 'Bench technician ' || g, 'x', 'TECHNICIAN', now() FROM generate_series(1, 6) g;
+INSERT INTO "StorageLocation" (id, code, name)
+  SELECT 'bench-loc-' || g, 'RACK-' || lpad(g::text, 2, '0'), 'Rack ' || g FROM generate_series(1, 20) g;
+INSERT INTO "ClientOrganization" (id, code, name, "updatedAt")
+  SELECT 'bench-org-' || g, 'ORG' || lpad(g::text, 3, '0'), 'Client ' || lpad(g::text, 2, '0'), now() FROM generate_series(1, ${CLIENTS}) g;
+INSERT INTO "Project" (id, code, name, "siteName", "clientOrganizationId", "updatedAt")
+  SELECT 'bench-prj-' || g, 'PRJ' || lpad(g::text, 4, '0'), 'Project ' || lpad(g::text, 3, '0'), 'Site ' || g,
+         'bench-org-' || (1 + (g - 1) % ${CLIENTS}), now() FROM generate_series(1, ${PROJECTS}) g;
+-- One shipment every 5 hours from 2024-01-01, lab numbers counted per year as allocateLabNumber does.
+INSERT INTO "Shipment" (id, "labNumber", "clientOrganizationId", "projectId", "deliveredBy", "receivedAt", "receivedById", "acknowledgedAt", "updatedAt")
+  SELECT 'bench-shp-' || g,
+         'S' || to_char(ts, 'YY') || '-' || lpad((row_number() OVER (PARTITION BY date_part('year', ts) ORDER BY g))::text, 5, '0'),
+         'bench-org-' || (1 + ((g - 1) % ${PROJECTS}) % ${CLIENTS}), 'bench-prj-' || (1 + (g - 1) % ${PROJECTS}),
+         'Carrier ' || (g % 7), ts, 'bench-user-1', CASE WHEN g % 5 <> 0 THEN ts + interval '1 day' END, now()
+  FROM (SELECT g, timestamp '2024-01-01' + g * interval '5 hours' AS ts FROM generate_series(1, ${SHIPMENTS}) g) s;
+-- ${ROLLS / SHIPMENTS} rolls per shipment, logged a few minutes after receipt, in a spread of states.
+INSERT INTO "Roll" (id, "labNumber", "shipmentId", "projectId", "rollNumber", "lotNumber", product, manufacturer, state, "storageLocationId", "createdAt", "updatedAt")
+  SELECT 'bench-roll-' || r,
+         'R' || to_char(ts, 'YY') || '-' || lpad((row_number() OVER (PARTITION BY date_part('year', ts) ORDER BY r))::text, 5, '0'),
+         'bench-shp-' || shp, 'bench-prj-' || (1 + (shp - 1) % ${PROJECTS}), 'RN-' || lpad(r::text, 6, '0'), 'LOT-' || (r / 40),
+         (ARRAY['Bentomat ST', 'Bentofix NSP', 'GCL 4000', 'Claymax 200R'])[1 + r % 4], 'Maker ' || (r % 3),
+         (CASE WHEN h < 5 THEN 'RECEIVED' WHEN h < 50 THEN 'STORED' WHEN h < 65 THEN 'CUT' WHEN h < 70 THEN 'TESTED'
+               WHEN h < 90 THEN 'RETAINED' ELSE 'DISPOSED' END)::"ItemState",
+         CASE WHEN h >= 90 THEN NULL ELSE 'bench-loc-' || (1 + r % 20) END, ts + (r % 20) * interval '1 minute', now()
+  FROM (SELECT r, shp, s."receivedAt" AS ts, abs(hashint4(r)) % 100 AS h
+        FROM (SELECT r, 1 + (r - 1) / ${ROLLS / SHIPMENTS} AS shp FROM generate_series(1, ${ROLLS}) r) x
+        JOIN "Shipment" s ON s.id = 'bench-shp-' || x.shp) y;
+-- A coupon from two rolls in five, cut a week after receipt.
+INSERT INTO "Coupon" (id, "labNumber", "rollId", "positionInSample", "lengthMm", "widthMm", "cutById", "cutAt", state, "storageLocationId", "updatedAt")
+  SELECT 'bench-cpn-' || r,
+         'C' || to_char(ts, 'YY') || '-' || lpad((row_number() OVER (PARTITION BY date_part('year', ts) ORDER BY r))::text, 5, '0'),
+         'bench-roll-' || r, 'Centre', 300, 300, 'bench-user-' || (1 + r % 6), ts,
+         (CASE WHEN r % 10 < 6 THEN 'PREPARED' WHEN r % 10 < 8 THEN 'RETAINED' ELSE 'CUT' END)::"ItemState", 'bench-loc-' || (1 + r % 20), now()
+  FROM (SELECT r, "createdAt" + interval '7 days' AS ts FROM "Roll" JOIN generate_series(1, ${ROLLS}) r ON "Roll".id = 'bench-roll-' || r WHERE r % 5 < 2) c;
+-- Two specimens from most coupons, prepared the day after cutting.
+INSERT INTO "Specimen" (id, "labNumber", "couponId", "dieDiameterMm", "initialThicknessMm", "initialMassG", "intendedMethodCode", "preparedById", "preparedAt", state, "storageLocationId", "updatedAt")
+  SELECT 'bench-spc-' || c.id || '-' || k,
+         'P' || to_char(ts, 'YY') || '-' || lpad((row_number() OVER (PARTITION BY date_part('year', ts) ORDER BY c.id, k))::text, 5, '0'),
+         c.id, 100, 6.5, 95, (ARRAY['D5887', 'D5084', 'D6766'])[1 + k], c."cutById", ts,
+         (CASE WHEN k = 1 THEN 'TESTED' ELSE 'PREPARED' END)::"ItemState", c."storageLocationId", now()
+  FROM (SELECT id, "cutById", "storageLocationId", "cutAt" + interval '1 day' AS ts FROM "Coupon") c
+  CROSS JOIN generate_series(1, 2) k
+  WHERE c.id NOT LIKE '%0' OR k = 1;
+ANALYZE;
+`;
+
+type Case = { kind: ListKind; name: string; params: Record<string, string> };
+
+const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)] as number;
+
+async function main() {
+  if (!process.env.DATABASE_URL) throw new Error("set DATABASE_URL to a local PostgreSQL server, e.g. postgresql://postgres@127.0.0.1:5432/postgres");
+  const database = await createTestDatabase("bench");
+  const keep = process.env.SEEPLINE_BENCH_KEEP_DB === "1";
+  const sql = new pg.Client({ connectionString: database.url });
+  try {
+    await sql.connect();
+    const seedStart = performance.now();
+    await sql.query(SEED_SQL);
+    const counts = await sql.query(`SELECT (SELECT count(*) FROM "Roll") AS rolls, (SELECT count(*) FROM "Coupon") AS coupons,
+      (SELECT count(*) FROM "Specimen") AS specimens, (SELECT count(*) FROM "Shipment") AS shipments, (SELECT count(*) FROM "AuditLog") AS audit`);
+    const c = counts.rows[0] as Record<string, string>;
+    console.log(`seeded ${c.rolls} rolls, ${c.coupons} coupons, ${c.specimens} specimens, ${c.shipments} shipments (${c.audit} audit rows, triggers on) in ${((performance.now() - seedStart) / 1000).toFixed(1)} s`);
+
+    // lib/server reads DATABASE_URL on first use, so point it at the bench database before loading it.
+    process.env.DATABASE_URL = database.url;
+    process.env.NEXTAUTH_SECRET ??= "bench-only-secret-0123456789abcdefghij";
+    const { listRolls } = await import("../lib/server/lists/list-rolls");
+    const { listCoupons } = await import("../lib/server/lists/list-coupons");
+    const { listSpecimens } = await import("../lib/server/lists/list-specimens");
+    const { listShipments } = await import("../lib/server/lists/list-shipments");
+    const { getDb } = await import("../lib/server/db/client");
+    const actor: CurrentUser = { id: "bench-user-1", name: "Bench technician 1", email: "bench1@example.test", role: "TECHNICIAN", clientOrganizationId: null, pressureUnit: "KPA" };
+    const run = { rolls: listRolls, coupons: listCoupons, specimens: listSpecimens, shipments: listShipments } as const;
+
+    const client = "bench-org-7";
+    const project = "bench-prj-42";
+    const range = { from: "2025-03-01", to: "2025-03-31" };
+    const cases: Case[] = [];
+    const dated = { rolls: "received", shipments: "received", coupons: "cut", specimens: "prepared" } as const;
+    const prefix = { rolls: "R25-012", shipments: "S25-01", coupons: "C25-012", specimens: "P25-012" } as const;
+    for (const kind of ["rolls", "coupons", "specimens", "shipments"] as const) {
+      cases.push(
+        { kind, name: "first page, newest first", params: { sort: dated[kind], dir: "desc" } },
+        { kind, name: "client", params: { clientOrganizationId: client } },
+        { kind, name: "project", params: { projectId: project } },
+        { kind, name: "date range (a month)", params: range },
+        { kind, name: `lab number prefix ${prefix[kind]}`, params: { q: prefix[kind] } },
+        { kind, name: "page 1000 (of 50)", params: { page: "1000" } },
+        { kind, name: "sorted by lab number, page 200", params: { sort: "labNumber", dir: "asc", page: "200" } },
+      );
+      if (kind !== "shipments") cases.push({ kind, name: "state", params: { state: kind === "rolls" ? "RECEIVED" : kind === "coupons" ? "RETAINED" : "TESTED" } }, { kind, name: "state + client", params: { state: kind === "specimens" ? "TESTED" : "RETAINED", clientOrganizationId: client } }, { kind, name: "sorted by state", params: { sort: "state" } });
+      if (kind === "rolls") cases.push({ kind, name: "roll number prefix RN-0420", params: { q: "RN-0420" } }, { kind, name: "client + date range", params: { clientOrganizationId: client, ...range } });
+      if (kind === "shipments") cases.push({ kind, name: "to acknowledge", params: { acknowledged: "no" } });
+    }
+
+    // One pass over every case first: the query compiler and the connection pool warm up as in a running app.
+    for (const c of cases) await run[c.kind]({ actor, query: parseListQuery(c.kind, c.params).query as never });
+    const results: { c: Case; p50: number; max: number; total: number; rows: number }[] = [];
+    for (const c of cases) {
+      const { query } = parseListQuery(c.kind, c.params);
+      const times: number[] = [];
+      let last = { total: 0, rows: [] as unknown[] };
+      for (let i = 0; i < REPEAT; i++) {
+        const t0 = performance.now();
+        last = await run[c.kind]({ actor, query: query as never });
+        times.push(performance.now() - t0);
+      }
+      results.push({ c, p50: median(times), max: Math.max(...times), total: last.total, rows: last.rows.length });
+    }
+
+    console.log(`\n${"list".padEnd(10)} ${"query".padEnd(34)} ${"p50 ms".padStart(7)} ${"max ms".padStart(7)} ${"total".padStart(7)} rows`);
+    for (const r of results)
+      console.log(`${r.c.kind.padEnd(10)} ${r.c.name.padEnd(34)} ${r.p50.toFixed(1).padStart(7)} ${r.max.toFixed(1).padStart(7)} ${String(r.total).padStart(7)} ${r.rows}`);
+    console.log(`(${REPEAT} runs each after one warm-up pass over all cases; a run is the count and the page, with its related rows)`);
+
+    // The plan of the slowest case, as Prisma sends it: capture its statements and EXPLAIN ANALYZE them here.
+    const slowest = results.reduce((a, b) => (b.p50 > a.p50 ? b : a));
+    console.log(`\nslowest: ${slowest.c.kind} / ${slowest.c.name} (${slowest.p50.toFixed(1)} ms); its statements and plans:`);
+    const statements = await captureStatements(database.url, async () => {
+      const { query } = parseListQuery(slowest.c.kind, slowest.c.params);
+      await run[slowest.c.kind]({ actor, query: query as never });
+    });
+    for (const s of statements.filter((s) => /^\s*SELECT/i.test(s.text) && !/set_config/.test(s.text))) {
+      const plan = await sql.query(`EXPLAIN (ANALYZE, BUFFERS OFF, COSTS OFF) ${s.text}`, s.values);
+      console.log(`\n${s.text.slice(0, 400)}${s.text.length > 400 ? " …" : ""}\n  params: ${JSON.stringify(s.values)}`);
+      for (const row of plan.rows as { "QUERY PLAN": string }[]) console.log(`  ${row["QUERY PLAN"]}`);
+    }
+    await getDb().$disconnect();
+  } finally {
+    await sql.end();
+    if (keep) console.log(`\nkept the bench database: ${database.url}`);
+    else await database.drop();
+  }
+}
+
+/** The SQL statements `work` sends through Prisma, taken from a second client with query logging on. */
+async function captureStatements(url: string, work: () => Promise<void>): Promise<{ text: string; values: unknown[] }[]> {
+  const { PrismaPg } = await import("@prisma/adapter-pg");
+  const { PrismaClient } = await import("../lib/generated/prisma/client");
+  const statements: { text: string; values: unknown[] }[] = [];
+  const logging = new PrismaClient({ adapter: new PrismaPg({ connectionString: url }), log: [{ emit: "event", level: "query" }] });
+  logging.$on("query", (e) => statements.push({ text: e.query, values: JSON.parse(e.params) as unknown[] }));
+  const globalForDb = globalThis as unknown as { seeplineDb?: unknown };
+  const previous = globalForDb.seeplineDb;
+  globalForDb.seeplineDb = logging;
+  try {
+    await work();
+  } finally {
+    globalForDb.seeplineDb = previous;
+    await logging.$disconnect();
+  }
+  return statements;
+}
+
+main().catch((error) => {
+  console.error(error);
+  process.exit(1);
+});
