@@ -2,7 +2,7 @@ import { QueueCard } from "@/components/ui/queue-card";
 import { formatDate } from "@/lib/format/dates";
 import { formatPressure } from "@/lib/format/pressure";
 import { EQUIPMENT_KIND_LABELS } from "@/lib/format/states";
-import { requirePageUser } from "@/lib/server/auth/require-permission";
+import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { listEquipment } from "@/lib/server/equipment/list-equipment";
 
 export const metadata = { title: "Equipment" };
