@@ -8,6 +8,8 @@ const NAV_ITEMS: NavItem[] = [
   { href: "/portal", label: "Our projects", section: "Work", action: "portal.view" },
   { href: "/intake", label: "Intake", section: "Work", action: "shipment.view" },
   { href: "/samples", label: "Samples", section: "Work", action: "sample.view" },
+  { href: "/labels", label: "Labels", section: "Work", action: "sample.view" },
+  { href: "/cells", label: "Cell board", section: "Work", action: "run.view" },
   { href: "/runs", label: "Runs", section: "Work", action: "run.view" },
   { href: "/review", label: "Review", section: "Work", action: "run.review" },
   { href: "/certificates", label: "Certificates", section: "Work", action: "certificate.view" },
