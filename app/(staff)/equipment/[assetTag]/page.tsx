@@ -1,0 +1,98 @@
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { CalibrationHistory } from "@/components/equipment/calibration-history";
+import { CalibrationTag } from "@/components/equipment/calibration-tag";
+import { EquipmentStatusForm } from "@/components/equipment/equipment-status-form";
+import { PressureCaution } from "@/components/equipment/pressure-caution";
+import { RecordCalibrationForm } from "@/components/equipment/record-calibration-form";
+import { RecordFacts } from "@/components/samples/record-facts";
+import { StateTag } from "@/components/ui/state-tag";
+import { isAppError } from "@/lib/errors/app-error";
+import { formatDate, formatDateTime } from "@/lib/format/dates";
+import { EQUIPMENT_KIND_LABELS } from "@/lib/format/states";
+import { can } from "@/lib/policy/permissions";
+import { requirePageUser } from "@/lib/server/auth/require-page-user";
+import { getEquipment } from "@/lib/server/equipment/get-equipment";
+import { formatPressure } from "@/lib/units/pressure-entry";
+import { EQUIPMENT_STATUS_LABELS } from "@/lib/validation/equipment";
+
+type Props = { params: Promise<{ assetTag: string }> };
+
+export async function generateMetadata({ params }: Props) {
+  return { title: decodeURIComponent((await params).assetTag) };
+}
+
+export default async function EquipmentItemPage({ params }: Props) {
+  const actor = await requirePageUser("equipment.view");
+  const assetTag = decodeURIComponent((await params).assetTag);
+  const equipment = await getEquipment({ actor, assetTag }).catch((error) => {
+    if (isAppError(error) && error.code === "NOT_FOUND") notFound();
+    throw error;
+  });
+  const manage = can(actor.role, "equipment.manage");
+  const otherUnit = actor.pressureUnit === "PSI" ? "KPA" : "PSI";
+  return (
+    <>
+      <p className="muted"><Link href="/equipment">Equipment</Link> ›</p>
+      <div className="page-head">
+        <div>
+          <h1><span className="mono">{equipment.assetTag}</span> <CalibrationTag status={equipment.calibration} retired={equipment.status === "RETIRED"} /></h1>
+          <p className="muted">{EQUIPMENT_KIND_LABELS[equipment.kind]} · {equipment.name}</p>
+        </div>
+      </div>
+      <div className="stack-gap">
+        <section className="card" data-testid="equipment-details">
+          <RecordFacts facts={[
+            ["Kind", EQUIPMENT_KIND_LABELS[equipment.kind]],
+            ["Serial number", equipment.serialNumber ?? "—"],
+            ["Status", EQUIPMENT_STATUS_LABELS[equipment.status]],
+            ["Rated maximum", equipment.ratedMaxPressurePa === null ? "—" : <>{formatPressure(equipment.ratedMaxPressurePa, actor.pressureUnit)} <span className="muted">({formatPressure(equipment.ratedMaxPressurePa, otherUnit)})</span></>],
+            ["Calibration due", formatDate(equipment.calibrations[0]?.dueAt)],
+            ["Registered", formatDateTime(equipment.createdAt)],
+          ]} />
+          <p className={equipment.calibration.usable ? "muted" : "notice notice-error"} data-testid="calibration-message">
+            {equipment.calibration.message} {usability(equipment.calibration.state)}
+          </p>
+          {equipment.ratedMaxPressurePa !== null && <PressureCaution />}
+        </section>
+        <section className="card">
+          <h2>Calibrations <span className="count">{equipment.calibrations.length}</span></h2>
+          <CalibrationHistory kind={equipment.kind} calibrations={equipment.calibrations} />
+        </section>
+        {manage && (
+          <div className="grid">
+            <section className="card"><h2>Record a calibration</h2>
+              {equipment.status === "RETIRED" ? <p className="empty">Retired equipment takes no new calibrations; put it back in service first.</p> : <RecordCalibrationForm equipmentId={equipment.id} kind={equipment.kind} />}
+            </section>
+            <section className="card"><h2>Status</h2><EquipmentStatusForm equipmentId={equipment.id} version={equipment.version} status={equipment.status} /></section>
+          </div>
+        )}
+        <section className="card">
+          <h2>Runs that used it <span className="count">{equipment.runs.length}</span></h2>
+          {equipment.runs.length === 0 ? <p className="empty">No run has used it yet.</p> : (
+            <div className="table-wrap">
+              <table className="list" data-testid="equipment-runs">
+                <thead><tr><th>Run</th><th>Used as</th><th>Method</th><th>Specimen</th><th>Assigned</th><th>Calibration used</th><th>State</th></tr></thead>
+                <tbody>{equipment.runs.map((r) => (
+                  <tr key={`${r.id}-${r.role}`}>
+                    <td><Link className="mono" href={`/runs/${r.labNumber}`}>{r.labNumber}</Link></td><td>{r.role}</td><td>ASTM {r.methodCode}</td>
+                    <td className="mono">{r.specimen.labNumber}</td><td>{formatDate(r.assignedAt)}</td>
+                    <td>{r.calibrationId ? equipment.calibrations.find((c) => c.id === r.calibrationId)?.reference ?? "—" : "—"}</td>
+                    <td><StateTag state={r.state} kind="run" /></td>
+                  </tr>
+                ))}</tbody>
+              </table>
+            </div>
+          )}
+        </section>
+      </div>
+    </>
+  );
+}
+
+function usability(state: string): string {
+  if (state === "current" || state === "due-soon") return "It may be used for a new run.";
+  // Out-of-service equipment is never overridden; a calibration problem may be, by a QA manager with a reason.
+  if (state === "out-of-service") return "It cannot be used for a new run.";
+  return "It cannot be used for a new run unless a QA manager allows it with a recorded reason.";
+}
