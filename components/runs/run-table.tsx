@@ -1,3 +1,4 @@
+import Link from "next/link";
 import { formatDate } from "@/lib/format/dates";
 import { StateTag } from "@/components/ui/state-tag";
 
@@ -13,7 +14,7 @@ export function RunTable({ runs }: { runs: RunRow[] }) {
       <tbody>
         {runs.map((r) => (
           <tr key={r.id}>
-            <td className="mono">{r.labNumber}</td><td>ASTM {r.methodCode}</td><td className="mono">{r.specimen.labNumber}</td>
+            <td><Link className="mono" href={`/runs/${r.labNumber}`}>{r.labNumber}</Link></td><td>ASTM {r.methodCode}</td><td className="mono">{r.specimen.labNumber}</td>
             <td className="mono">{r.cell.assetTag}</td><td>{r._count.readings}</td><td>{formatDate(r.assignedAt)}</td>
             <td>{r.performedBy.name}</td><td><StateTag state={r.state} kind="run" /></td>
           </tr>

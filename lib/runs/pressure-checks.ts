@@ -1,4 +1,3 @@
-import { kPaToPa, psiToKPa } from "../hydraulics/units";
 /**
  * Checks of entered pressures before they are saved (common practice, see shared/DOMAIN.md): the cell
  * (confining) pressure must exceed both line pressures by the confining margin, or the membrane can
@@ -34,7 +33,3 @@ export function checkStagePressures(p: StagePressuresPa, requiredMarginPa: numbe
   return { marginPa, requiredMarginPa, marginKept, overRated, warnings };
 }
 
-/** A pressure typed in kPa or psi, in pascals (psi factor exact, NIST SP 811, from lib/hydraulics). */
-export function pressureToPa(value: number, unit: "KPA" | "PSI"): number {
-  return unit === "PSI" ? kPaToPa(psiToKPa(value)) : kPaToPa(value);
-}

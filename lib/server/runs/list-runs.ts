@@ -4,11 +4,11 @@ import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
 import { getDb } from "../db/client";
 
-/** Runs, newest first; a technician's own runs first is left to the page's filter. */
-export async function listRuns(options: { actor: CurrentUser; states?: RunState[]; take?: number }) {
+/** Runs, newest first; `mine` keeps the acting technician's own runs. */
+export async function listRuns(options: { actor: CurrentUser; states?: RunState[]; mine?: boolean; take?: number }) {
   requirePermission(options.actor, options.states?.includes("SUBMITTED") && options.states.length === 1 ? "run.review" : "run.view");
   return getDb().run.findMany({
-    where: options.states ? { state: { in: options.states } } : {},
+    where: { ...(options.states ? { state: { in: options.states } } : {}), ...(options.mine ? { performedById: options.actor.id } : {}) },
     orderBy: { assignedAt: "desc" },
     take: options.take ?? 50,
     select: {

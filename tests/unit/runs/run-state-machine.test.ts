@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { allowedRunSteps, holdsCell, RUN_STATES, RUN_STEPS, runTransition, type RunStateName, type RunStep } from "@/lib/runs/run-state-machine";
-import { checkStagePressures, pressureToPa } from "@/lib/runs/pressure-checks";
+import { checkStagePressures } from "@/lib/runs/pressure-checks";
+import { enteredPressureToPa } from "@/lib/units/pressure-entry";
 
 describe("run state machine", () => {
   it("walks a run from set-up to approval", () => {
@@ -63,7 +64,7 @@ describe("stage pressure checks (confining margin: about 35 kPa, common practice
   });
 
   it("turns psi into pascals with the exact NIST SP 811 factor (1 psi = 6894.757293168361 Pa)", () => {
-    expect(pressureToPa(5, "PSI")).toBeCloseTo(34_473.786465841805, 6);
-    expect(pressureToPa(35, "KPA")).toBe(35_000);
+    expect(enteredPressureToPa(5, "PSI")).toBeCloseTo(34_473.786465841805, 6);
+    expect(enteredPressureToPa(35, "KPA")).toBe(35_000);
   });
 });

@@ -1,0 +1,101 @@
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { RecordFacts } from "@/components/samples/record-facts";
+import { CriteriaPanel } from "@/components/runs/criteria-panel";
+import { PressureCaution } from "@/components/runs/pressure-caution";
+import { RunCharts } from "@/components/runs/run-charts";
+import { RunStagesTable } from "@/components/runs/run-stages-table";
+import { PostTestForm, SubmitRunButton, TerminateForm } from "@/components/runs/run-step-forms";
+import { StageForm } from "@/components/runs/stage-form";
+import { ReadingsPanel } from "@/components/readings/readings-panel";
+import { StateTag } from "@/components/ui/state-tag";
+import { isAppError } from "@/lib/errors/app-error";
+import { formatDateTime } from "@/lib/format/dates";
+import { formatPressure } from "@/lib/format/pressure";
+import { toChartPoints } from "@/lib/runs/chart-points";
+import { allowedRunSteps, type RunStateName } from "@/lib/runs/run-state-machine";
+import { can } from "@/lib/policy/permissions";
+import { requirePageUser } from "@/lib/server/auth/require-page-user";
+import { getRun } from "@/lib/server/runs/get-run";
+
+type Props = { params: Promise<{ labNumber: string }> };
+
+export async function generateMetadata({ params }: Props) {
+  return { title: `Run ${(await params).labNumber}` };
+}
+
+function projectedText(permeationStart: Date | null, projectedAtS: number | null, reason: string): string {
+  if (projectedAtS === null || !permeationStart) return reason;
+  return `Probably met about ${formatDateTime(new Date(permeationStart.getTime() + projectedAtS * 1000))}. ${reason}`;
+}
+
+export default async function RunPage({ params }: Props) {
+  const actor = await requirePageUser("run.view");
+  const { labNumber } = await params;
+  const { run, evaluation, reason, thicknessBasis, inputReadings } = await getRun({ actor, labNumber }).catch((error) => {
+    if (isAppError(error) && error.code === "NOT_FOUND") notFound();
+    throw error;
+  });
+  const steps = allowedRunSteps(run.state as RunStateName);
+  const mine = can(actor.role, "run.operate") && run.performedById === actor.id;
+  const permeation = run.stages.find((s) => s.kind === "PERMEATION") ?? null;
+  const stageKinds = (["SATURATION", "BACK_PRESSURE", "EQUILIBRATION", "PERMEATION"] as const).filter((k) =>
+    k === "EQUILIBRATION" ? steps.includes("start-equilibration") : k === "PERMEATION" ? steps.includes("start-permeation") : steps.includes("add-stage"),
+  );
+  const ratioBand: [number, number] = evaluation ? [evaluation.settings.ratioMin, evaluation.settings.ratioMax] : [0.75, 1.25];
+  return (
+    <>
+      <div className="page-head">
+        <div>
+          <h1>Run <span className="mono">{run.labNumber}</span> <StateTag state={run.state} kind="run" /></h1>
+          <p className="muted">
+            {run.method.title} · specimen <Link className="mono" href={`/samples/specimens/${run.specimen.labNumber}`}>{run.specimen.labNumber}</Link> · roll{" "}
+            <Link className="mono" href={`/samples/rolls/${run.specimen.coupon.roll.labNumber}`}>{run.specimen.coupon.roll.labNumber}</Link> · {run.specimen.coupon.roll.project.clientOrganization.name}
+          </p>
+        </div>
+      </div>
+      <div className="stack-gap">
+        <PressureCaution />
+        <section className="card">
+          <RecordFacts facts={[
+            ["Cell", `${run.cell.assetTag} · ${run.cell.name}`], ["Technician", run.performedBy.name], ["Assigned", formatDateTime(run.assignedAt)],
+            ["Effective stress", formatPressure(run.effectiveStressPa, actor.pressureUnit)],
+            ["Instruments", run.equipment.map((e) => `${e.equipment.assetTag} (${e.role}${e.calibration ? `, cal. ${e.calibration.reference}` : ""})`).join("; ")],
+            ["Calibration override", run.calibrationOverrideReason ? `${run.calibrationOverrideReason} — allowed by ${run.calibrationOverrideBy?.name}` : "none"],
+            ...(run.permeantName ? ([["Permeant", `${run.permeantName}${run.permeantSalt ? `, ${run.permeantSalt}` : ""}${run.permeantMolarityMolPerL ? ` ${run.permeantMolarityMolPerL} mol/L` : ""}`]] as Array<[string, string]>) : []),
+            ["Termination", run.terminatedAt ? `${formatDateTime(run.terminatedAt)} · ${run.terminationKind === "EARLY_END" ? `ended early: ${run.terminationReason}` : "criteria met"}` : "—"],
+            ["Post-test thickness (mm)", run.postTestThicknessMm ?? "—"], ["Final mass (g)", run.postTestMassG ?? "—"], ["Observations", run.postTestObservations || "—"],
+          ]} />
+        </section>
+        <div className="grid">
+          <section className="card">
+            <h2>Stages</h2>
+            <RunStagesTable stages={run.stages} pressureUnit={actor.pressureUnit} />
+          </section>
+          {mine && stageKinds.length > 0 && (
+            <section className="card"><h2>Record a stage</h2><StageForm key={run.version} runId={run.id} version={run.version} kinds={[...stageKinds]} pressureUnit={actor.pressureUnit} /></section>
+          )}
+        </div>
+        {permeation && <ReadingsPanel runId={run.id} labNumber={run.labNumber} actor={actor} />}
+        {evaluation ? (
+          <>
+            <CriteriaPanel met={evaluation.termination.met} criteria={evaluation.termination.criteria} />
+            <section className="card" data-testid="projection">
+              <h2>Projected end</h2>
+              <p>{evaluation.termination.met ? "The criteria are met now." : projectedText(permeation?.startedAt ?? null, evaluation.projection.projectedAtS, evaluation.projection.reason)}</p>
+              <p className="muted">Gradient from the {thicknessBasis === "post-test" ? "post-test bentonite layer thickness" : "initial specimen thickness (until the post-test thickness is recorded)"}; unit weight of water: {evaluation.unitWeightBasis}.</p>
+              {evaluation.warnings.map((w) => <p key={w} className="notice notice-caution">{w}</p>)}
+            </section>
+            <RunCharts points={toChartPoints(evaluation.intervals, inputReadings)} ratioBand={ratioBand} />
+          </>
+        ) : permeation ? <p className="notice notice-caution">{reason}</p> : null}
+        {mine && steps.includes("terminate") && <section className="card"><h2>End permeation</h2><TerminateForm runId={run.id} version={run.version} criteriaMet={evaluation?.termination.met ?? false} /></section>}
+        {mine && steps.includes("record-post-test") && <section className="card"><h2>Post-test measurements</h2><PostTestForm runId={run.id} version={run.version} /></section>}
+        {mine && steps.includes("submit") && run.postTestThicknessMm && <section className="card"><h2>Review</h2><SubmitRunButton runId={run.id} version={run.version} /></section>}
+        {run.reviews.length > 0 && (
+          <section className="card"><h2>Reviews</h2><ul>{run.reviews.map((r) => <li key={r.id}>{formatDateTime(r.createdAt)} · {r.reviewer.name}: {r.decision.toLowerCase()} {r.comments && `— ${r.comments}`}</li>)}</ul></section>
+        )}
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,29 @@
+/** The cells of one reading as typed into the grid or the correction form, in keyboard order. */
+import { PRESSURE_UNIT_SYMBOLS, type PressureUnit } from "@/lib/units/pressure-entry";
+
+export type EntryKey =
+  | "takenAt" | "inflowLevelMm" | "outflowLevelMm" | "influentPressure" | "effluentPressure" | "cellPressure" | "temperatureC"
+  | "influentEcMsPerM" | "effluentEcMsPerM" | "influentPh" | "effluentPh";
+
+export type EntryColumn = { key: EntryKey; title: string; kind: "time" | "number" };
+
+export function entryColumns(unit: PressureUnit, withChemistry: boolean): EntryColumn[] {
+  const p = PRESSURE_UNIT_SYMBOLS[unit];
+  const columns: EntryColumn[] = [
+    { key: "takenAt", title: "Time", kind: "time" },
+    { key: "inflowLevelMm", title: "Inflow level (mm)", kind: "number" },
+    { key: "outflowLevelMm", title: "Outflow level (mm)", kind: "number" },
+    { key: "influentPressure", title: `Influent (${p})`, kind: "number" },
+    { key: "effluentPressure", title: `Effluent (${p})`, kind: "number" },
+    { key: "cellPressure", title: `Cell (${p})`, kind: "number" },
+    { key: "temperatureC", title: "Temp. (°C)", kind: "number" },
+  ];
+  if (withChemistry)
+    columns.push(
+      { key: "influentEcMsPerM", title: "EC in (mS/m)", kind: "number" },
+      { key: "effluentEcMsPerM", title: "EC out (mS/m)", kind: "number" },
+      { key: "influentPh", title: "pH in", kind: "number" },
+      { key: "effluentPh", title: "pH out", kind: "number" },
+    );
+  return columns;
+}

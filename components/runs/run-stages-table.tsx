@@ -1,0 +1,26 @@
+import { formatDateTime } from "@/lib/format/dates";
+import { formatPressure } from "@/lib/format/pressure";
+
+type Stage = { id: string; sequence: number; kind: string; cellPressurePa: number; influentPressurePa: number; effluentPressurePa: number; startedAt: Date; endedAt: Date | null; marginAcknowledged: boolean; recordedBy: { name: string } };
+const KIND: Record<string, string> = { SATURATION: "Saturation", BACK_PRESSURE: "Back-pressure", EQUILIBRATION: "Equilibration", PERMEATION: "Permeation" };
+
+export function RunStagesTable({ stages, pressureUnit }: { stages: Stage[]; pressureUnit: "KPA" | "PSI" }) {
+  if (stages.length === 0) return <p className="empty">No stage recorded yet: start with saturation.</p>;
+  return (
+    <div className="table-wrap">
+      <table className="list" data-testid="stages">
+        <thead><tr><th>#</th><th>Stage</th><th>Cell</th><th>Influent</th><th>Effluent</th><th>From</th><th>To</th><th>By</th></tr></thead>
+        <tbody>
+          {stages.map((s) => (
+            <tr key={s.id}>
+              <td>{s.sequence}</td>
+              <td>{KIND[s.kind] ?? s.kind}{s.marginAcknowledged && <div className="state state-warn">margin warning acknowledged</div>}</td>
+              <td>{formatPressure(s.cellPressurePa, pressureUnit)}</td><td>{formatPressure(s.influentPressurePa, pressureUnit)}</td><td>{formatPressure(s.effluentPressurePa, pressureUnit)}</td>
+              <td>{formatDateTime(s.startedAt)}</td><td>{s.endedAt ? formatDateTime(s.endedAt) : "running"}</td><td>{s.recordedBy.name}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}

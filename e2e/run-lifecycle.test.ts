@@ -1,0 +1,131 @@
+import path from "node:path";
+import type { Browser, ElementHandle, Page } from "puppeteer";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { baseUrl, browserAvailable, launchBrowser, pageSignedInAs, textOf } from "./support/session";
+
+const FIXTURE = path.resolve(import.meta.dirname, "fixtures", "readings-d5887.csv");
+
+async function field(page: Page, label: string): Promise<ElementHandle<Element>> {
+  const handle = await page.waitForSelector(`::-p-aria(${label})`);
+  if (!handle) throw new Error(`no field ${label}`);
+  return handle;
+}
+
+async function fill(page: Page, label: string, value: string) {
+  const input = await field(page, label);
+  await input.click({ count: 3 });
+  await input.type(value);
+}
+
+/** datetime-local inputs take their value whole, as the browser's picker gives it. */
+async function setDateTime(page: Page, label: string, date: Date) {
+  const local = new Date(date.getTime() - date.getTimezoneOffset() * 60_000).toISOString().slice(0, 16);
+  await (await field(page, label)).evaluate((el, value) => {
+    Object.getOwnPropertyDescriptor(HTMLInputElement.prototype, "value")!.set!.call(el, value);
+    el.dispatchEvent(new Event("input", { bubbles: true }));
+    el.dispatchEvent(new Event("change", { bubbles: true }));
+  }, local);
+}
+
+async function chooseOption(page: Page, name: string, text: string) {
+  const select = await page.waitForSelector(`select[name="${name}"]`);
+  if (!select) throw new Error(`no select ${name}`);
+  const value = await select.evaluate((el, t) => [...(el as HTMLSelectElement).options].find((o) => o.text.includes(t))?.value, text);
+  if (!value) throw new Error(`no option "${text}" in ${name}`);
+  await select.select(value);
+}
+
+async function recordStage(page: Page, kind: string, pressures: [string, string, string], startedAt: Date) {
+  await chooseOption(page, "kind", kind);
+  await fill(page, "Cell pressure (kPa)", pressures[0]);
+  await fill(page, "Influent pressure (kPa)", pressures[1]);
+  await fill(page, "Effluent pressure (kPa)", pressures[2]);
+  await setDateTime(page, "Started at", startedAt);
+  await page.click("button::-p-text(Record stage)");
+}
+
+const DAY = 86_400_000;
+
+describe.skipIf(!browserAvailable())("a run from cell assignment to submission (headless Chromium)", () => {
+  let browser: Browser;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it("technician: out-of-calibration cell refused, calibrated cell assigned, margin warning acknowledged, CSV imported, criteria met with charts, terminated, post-test recorded, submitted", async () => {
+    const tech = await pageSignedInAs(browser, "technician@quillfen.test");
+
+    // --- Assignment: the overdue cell is refused, a calibrated one starts the run.
+    await tech.goto(`${baseUrl()}/runs/new`);
+    await chooseOption(tech, "cellId", "CELL-06");
+    await chooseOption(tech, "burettePanelId", "BP-02");
+    await chooseOption(tech, "transducerId", "PT-01");
+    await fill(tech, "Effective stress (kPa)", "34.5");
+    await tech.click("button::-p-text(Start the run)");
+    await tech.waitForSelector('[data-testid="assign-error"]');
+    expect(await textOf(tech, '[data-testid="assign-error"]')).toMatch(/CELL-06 was due for calibration on \d{4}-\d{2}-\d{2}\./);
+
+    await chooseOption(tech, "cellId", "CELL-04");
+    await tech.click("button::-p-text(Start the run)");
+    await tech.waitForFunction(() => /^\/runs\/T\d{2}-\d{5}$/.test(location.pathname), { timeout: 30_000 });
+    const runNumber = tech.url().split("/").pop()!;
+    expect(await textOf(tech, "h1")).toContain("Set up");
+    expect(await textOf(tech, '[data-testid="pressure-caution"]')).toMatch(/does not replace those procedures/);
+
+    // --- Saturation with too small a confining margin: warned, then acknowledged.
+    const now = Date.now();
+    await recordStage(tech, "Saturation", ["330", "310", "310"], new Date(now - 6 * DAY));
+    await tech.waitForSelector('[data-testid="margin-warning"]');
+    expect(await textOf(tech, '[data-testid="margin-warning"]')).toMatch(/by 20\.0 kPa, less than the 35 kPa confining margin/);
+    await (await tech.waitForSelector('[data-testid="margin-warning"] input[type="checkbox"]'))!.click();
+    await tech.click("button::-p-text(Record stage)");
+    await tech.waitForFunction(() => document.querySelector('[data-testid="stages"]')?.textContent?.includes("margin warning acknowledged"));
+
+    await recordStage(tech, "Equilibration", ["552", "517", "517"], new Date(now - 5 * DAY));
+    await tech.waitForFunction(() => (document.querySelector('[data-testid="stages"]')?.querySelectorAll("tbody tr").length ?? 0) === 2);
+    await recordStage(tech, "Permeation", ["566", "531", "517"], new Date(now - 4 * DAY));
+    await tech.waitForSelector('[data-testid="csv-import"]', { timeout: 30_000 }).catch(async (error) => {
+      await tech.screenshot({ path: "tmp/e2e-run-lifecycle-failure.png", fullPage: true });
+      throw error;
+    });
+
+    // --- Import the data-logger CSV (invented data in e2e/fixtures): preview, then save all rows.
+    const upload = (await tech.waitForSelector('[data-testid="csv-file"]')) as ElementHandle<HTMLInputElement>;
+    await upload.uploadFile(FIXTURE);
+    await tech.waitForSelector('[data-testid="csv-preview"]');
+    await tech.waitForSelector('[data-testid="csv-save"]:not([disabled])');
+    await tech.click('[data-testid="csv-save"]');
+    await tech.waitForFunction(() => document.querySelector('[data-testid="csv-message"]')?.textContent?.includes("readings saved"), { timeout: 30_000 });
+    expect(await textOf(tech, '[data-testid="csv-message"]')).toMatch(/^13 readings saved from readings-d5887\.csv\.$/);
+
+    // --- The criteria are met and the charts are drawn.
+    await tech.waitForSelector('[data-testid="criteria-verdict"]');
+    expect(await textOf(tech, '[data-testid="criteria-verdict"]')).toBe("all met");
+    for (const chart of ["chart-flux", "chart-ratio", "chart-k20", "chart-volumes"]) {
+      const lines = await tech.$$eval(`[data-testid="${chart}"] .recharts-line-curve`, (paths) => paths.map((p) => p.getAttribute("d")?.length ?? 0));
+      expect(lines.length, chart).toBeGreaterThan(0);
+      expect(Math.min(...lines), chart).toBeGreaterThan(20);
+    }
+
+    // --- Terminate, post-test data, submit.
+    await tech.click("button::-p-text(Terminate: criteria met)");
+    await tech.waitForSelector('form[aria-label="Post-test data"]', { timeout: 30_000 });
+    await fill(tech, "Bentonite layer thickness (mm)", "5.9");
+    await fill(tech, "Final mass (g)", "71.2");
+    await fill(tech, "Observations", "Uniform hydration on the cut section.");
+    await tech.click("button::-p-text(Record post-test data)");
+    await tech.waitForSelector("button::-p-text(Submit for review)", { timeout: 30_000 });
+    await tech.click("button::-p-text(Submit for review)");
+    await tech.waitForFunction(() => document.querySelector("h1")?.textContent?.includes("Awaiting review"), { timeout: 30_000 });
+
+    // --- The run is in QA's queue.
+    const qa = await pageSignedInAs(browser, "qa@quillfen.test");
+    await qa.goto(`${baseUrl()}/review`);
+    expect(await textOf(qa, '[data-testid="review-list"]')).toContain(runNumber);
+    await tech.browserContext().close();
+    await qa.browserContext().close();
+  });
+});

@@ -1,0 +1,103 @@
+import "server-only";
+import { z } from "zod";
+import { AppError, type FieldErrors } from "@/lib/errors/app-error";
+import { MM_M } from "@/lib/hydraulics/units";
+import type { NeighbourReading } from "@/lib/readings/check-reading-sequence";
+import type { PrepareProblem, PreparedReading, VolumeReference } from "@/lib/readings/prepare-readings";
+import { runTransition, type RunStateName } from "@/lib/runs/run-state-machine";
+import type { CurrentUser } from "../auth/current-user";
+import type { Tx } from "../db/transaction";
+
+/** The role of the RunEquipment row whose calibration holds the burette areas. */
+export const BURETTE_PANEL_ROLE = "burette panel";
+
+const buretteAreasSchema = z.object({ inflowBuretteAreaM2: z.number().positive(), outflowBuretteAreaM2: z.number().positive() });
+
+/** Burette areas in mm^2 from a calibration's values ({ inflowBuretteAreaM2, outflowBuretteAreaM2 }), or null. */
+export function buretteAreasMm2(values: unknown): { inflow: number; outflow: number } | null {
+  const parsed = buretteAreasSchema.safeParse(values);
+  if (!parsed.success) return null;
+  const m2PerMm2 = MM_M * MM_M;
+  return { inflow: parsed.data.inflowBuretteAreaM2 / m2PerMm2, outflow: parsed.data.outflowBuretteAreaM2 / m2PerMm2 };
+}
+
+export const readingLabel = (sequence: number) => `Reading ${sequence}`;
+
+/**
+ * Everything a reading write needs, read inside the write's transaction with the run row locked, so two
+ * batches for one run cannot interleave their sequence numbers or their order checks. Refuses another
+ * technician's run, a run whose state does not allow readings, a run without a permeation start or
+ * without calibrated burette areas.
+ */
+export async function loadReadingContext(tx: Tx, options: { actor: CurrentUser; runId: string }) {
+  await tx.$queryRaw`SELECT id FROM "Run" WHERE id = ${options.runId} FOR UPDATE`;
+  const run = await tx.run.findUnique({
+    where: { id: options.runId },
+    select: {
+      id: true, labNumber: true, state: true, performedById: true,
+      stages: { where: { kind: "PERMEATION" }, orderBy: { sequence: "asc" }, take: 1, select: { startedAt: true } },
+      equipment: { where: { role: BURETTE_PANEL_ROLE }, select: { equipment: { select: { assetTag: true } }, calibration: { select: { values: true, reference: true } } } },
+    },
+  });
+  if (!run) throw new AppError("NOT_FOUND");
+  if (run.performedById !== options.actor.id)
+    throw new AppError("FORBIDDEN", `${run.labNumber} is another technician's run; only the person performing it records its readings.`);
+  const step = runTransition(run.state as RunStateName, "record-reading");
+  if (!step.ok) throw new AppError("ILLEGAL_TRANSITION", `${run.labNumber}: ${step.message}`, { details: { allowed: step.allowed } });
+  const permeationStartedAt = run.stages[0]?.startedAt;
+  if (!permeationStartedAt)
+    throw new AppError("ILLEGAL_TRANSITION", `${run.labNumber} has no permeation stage, so there is no start to count elapsed time from; record the permeation stage first.`);
+  const panel = run.equipment[0];
+  if (!panel) throw new AppError("INVALID_INPUT", `${run.labNumber} has no burette panel recorded, so burette levels cannot be turned into volumes.`);
+  const areasMm2 = buretteAreasMm2(panel.calibration?.values);
+  if (!areasMm2)
+    throw new AppError("INVALID_INPUT", `The calibration of burette panel ${panel.equipment.assetTag} used by ${run.labNumber} holds no burette areas (inflowBuretteAreaM2, outflowBuretteAreaM2); ask the lab administrator to record them.`);
+
+  const readings = await tx.reading.findMany({
+    where: { runId: run.id },
+    orderBy: [{ sequence: "asc" }, { createdAt: "asc" }],
+    select: {
+      id: true, sequence: true, elapsedS: true, inflowLevelMm: true, outflowLevelMm: true, inflowCumulativeMl: true, outflowCumulativeMl: true,
+      headPa: true, influentPressurePa: true, effluentPressurePa: true, cellPressurePa: true, temperatureC: true,
+      influentEcMsPerM: true, effluentEcMsPerM: true, influentPh: true, effluentPh: true, takenAt: true,
+      correctedBy: { select: { id: true, createdAt: true, recordedBy: { select: { name: true } } } },
+    },
+  });
+  const current = readings.filter((r) => !r.correctedBy).sort((a, b) => a.elapsedS - b.elapsedS);
+  // Saved volumes are relative to the run's first reading with levels; that row never changes, so it stays the anchor.
+  const anchor = readings.find((r) => r.inflowLevelMm !== null && r.outflowLevelMm !== null);
+  const reference: VolumeReference | null = anchor
+    ? { inflowLevelMm: anchor.inflowLevelMm!, outflowLevelMm: anchor.outflowLevelMm!, inflowCumulativeMl: anchor.inflowCumulativeMl, outflowCumulativeMl: anchor.outflowCumulativeMl }
+    : null;
+  if (readings.length > 0 && !reference)
+    throw new AppError("INVALID_INPUT", `The readings of ${run.labNumber} so far were saved as volumes without burette levels, so new levels cannot be continued from them.`);
+  const nextSequence = readings.reduce((max, r) => Math.max(max, r.sequence), 0) + 1;
+  return { run, permeationStartedAt, areasMm2, readings, current, reference, nextSequence };
+}
+export type ReadingContext = Awaited<ReturnType<typeof loadReadingContext>>;
+
+export function asNeighbour(reading: { sequence: number; elapsedS: number; inflowLevelMm: number | null; outflowLevelMm: number | null } | undefined): NeighbourReading | null {
+  return reading ? { label: readingLabel(reading.sequence), elapsedS: reading.elapsedS, inflowLevelMm: reading.inflowLevelMm, outflowLevelMm: reading.outflowLevelMm } : null;
+}
+
+/** Per-field messages keyed as the form names its fields, two messages on one field joined. */
+export function problemsToFieldErrors(problems: readonly PrepareProblem[], key: (problem: PrepareProblem) => string): FieldErrors {
+  const errors: FieldErrors = {};
+  for (const p of problems) {
+    const k = key(p);
+    errors[k] = errors[k] ? `${errors[k]} ${p.message}` : p.message;
+  }
+  return errors;
+}
+
+/** "Nothing was saved." with the first problem and a count of the rest. */
+export function nothingSavedMessage(messages: readonly string[], what = "Nothing was saved."): string {
+  const [first, ...rest] = messages;
+  if (!first) return what;
+  return `${what} ${first}${rest.length ? ` (and ${rest.length} more problem${rest.length === 1 ? "" : "s"})` : ""}`;
+}
+
+/** The rows of a save, numbered on from the run's last sequence. */
+export function readingRows(prepared: readonly PreparedReading[], options: { runId: string; firstSequence: number; source: string; recordedById: string }) {
+  return prepared.map((r, i) => ({ ...r, runId: options.runId, sequence: options.firstSequence + i, source: options.source, recordedById: options.recordedById }));
+}

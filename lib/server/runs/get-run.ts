@@ -1,0 +1,28 @@
+import "server-only";
+import { AppError } from "@/lib/errors/app-error";
+import type { CurrentUser } from "../auth/current-user";
+import { requirePermission } from "../auth/require-permission";
+import { getDb } from "../db/client";
+import { evaluateRunRecords } from "./evaluate-run-records";
+
+/** A run with its specimen, instruments, stages and reviews, and the hydraulics verdict on its readings. */
+export async function getRun(options: { actor: CurrentUser; labNumber: string }) {
+  requirePermission(options.actor, "run.view");
+  const db = getDb();
+  const run = await db.run.findUnique({
+    where: { labNumber: options.labNumber },
+    include: {
+      specimen: { select: { id: true, labNumber: true, dieDiameterMm: true, initialThicknessMm: true, coupon: { select: { labNumber: true, roll: { select: { labNumber: true, project: { select: { name: true, clientOrganization: { select: { name: true } } } } } } } } } },
+      cell: { select: { assetTag: true, name: true, ratedMaxPressurePa: true } },
+      method: { select: { code: true, title: true, defaults: true } },
+      performedBy: { select: { id: true, name: true } },
+      calibrationOverrideBy: { select: { name: true } },
+      equipment: { select: { role: true, equipment: { select: { assetTag: true, name: true, ratedMaxPressurePa: true } }, calibration: { select: { reference: true, dueAt: true } } } },
+      stages: { orderBy: { sequence: "asc" }, include: { recordedBy: { select: { name: true } } } },
+      reviews: { orderBy: { createdAt: "asc" }, include: { reviewer: { select: { name: true } } } },
+    },
+  });
+  if (!run) throw new AppError("NOT_FOUND");
+  const verdict = await evaluateRunRecords(db, run.id);
+  return { run, ...verdict };
+}

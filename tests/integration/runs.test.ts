@@ -1,0 +1,152 @@
+import { describe, expect, it } from "vitest";
+import { AppError } from "@/lib/errors/app-error";
+import { withActor } from "@/lib/server/db/transaction";
+import { assignSpecimenToCell } from "@/lib/server/runs/assign-specimen-to-cell";
+import { grantCalibrationOverride } from "@/lib/server/runs/grant-calibration-override";
+import { recordPostTest } from "@/lib/server/runs/record-post-test";
+import { recordStage } from "@/lib/server/runs/record-stage";
+import { submitRun } from "@/lib/server/runs/submit-run";
+import { terminateRun } from "@/lib/server/runs/terminate-run";
+import { db, makeProject, makeUser, unique } from "../support/factories";
+
+const DAY = 86_400_000;
+const SYSTEM = { id: "system:test" };
+
+async function failure(promise: Promise<unknown>): Promise<AppError> {
+  try {
+    await promise;
+  } catch (error) {
+    if (error instanceof AppError) return error;
+    throw error;
+  }
+  throw new Error("expected the operation to be refused");
+}
+
+async function makeInstrument(kind: "PERMEAMETER_CELL" | "BURETTE_PANEL" | "PRESSURE_TRANSDUCER", options: { calibratedDaysAgo?: number; ratedMaxPressurePa?: number; values?: object } = {}) {
+  return withActor(SYSTEM, async (tx) => {
+    const admin = await tx.user.findFirst({ select: { id: true } });
+    const equipment = await tx.equipment.create({ data: { assetTag: unique(kind.slice(0, 4)).toUpperCase(), kind, name: `Test ${kind}`, ratedMaxPressurePa: options.ratedMaxPressurePa ?? 1_000_000 } });
+    const calibratedAt = new Date(Date.now() - (options.calibratedDaysAgo ?? 30) * DAY);
+    await tx.calibration.create({ data: { equipmentId: equipment.id, calibratedAt, dueAt: new Date(calibratedAt.getTime() + 365 * DAY), reference: unique("CAL"), performedBy: "Test metrology", values: options.values ?? {}, recordedById: admin!.id } });
+    return equipment;
+  });
+}
+
+async function makePreparedSpecimen(technicianId: string) {
+  const project = await makeProject();
+  return withActor(SYSTEM, async (tx) => {
+    const shipment = await tx.shipment.create({ data: { labNumber: unique("S"), clientOrganizationId: project.clientOrganizationId, projectId: project.id, deliveredBy: "x", receivedAt: new Date(), receivedById: technicianId } });
+    const roll = await tx.roll.create({ data: { labNumber: unique("R"), shipmentId: shipment.id, projectId: project.id, rollNumber: unique("r"), lotNumber: "L", product: "GCL", manufacturer: "M", state: "CUT" } });
+    const coupon = await tx.coupon.create({ data: { labNumber: unique("C"), rollId: roll.id, positionInSample: "centre", lengthMm: 300, widthMm: 300, cutById: technicianId, cutAt: new Date() } });
+    return tx.specimen.create({ data: { labNumber: unique("P"), couponId: coupon.id, dieDiameterMm: 100, initialThicknessMm: 6, initialMassG: 45, intendedMethodCode: "D5887", preparedById: technicianId, preparedAt: new Date() } });
+  });
+}
+
+async function setUp() {
+  const [technician, other, qa] = await Promise.all([makeUser("TECHNICIAN"), makeUser("TECHNICIAN"), makeUser("QA_MANAGER")]);
+  const [cell, staleCell, panel, transducer, specimen] = await Promise.all([
+    makeInstrument("PERMEAMETER_CELL"),
+    makeInstrument("PERMEAMETER_CELL", { calibratedDaysAgo: 400 }),
+    makeInstrument("BURETTE_PANEL", { values: { inflowBuretteAreaM2: 3.14e-5, outflowBuretteAreaM2: 3.12e-5 } }),
+    makeInstrument("PRESSURE_TRANSDUCER", { ratedMaxPressurePa: 700_000 }),
+    makePreparedSpecimen(technician.id),
+  ]);
+  const assignInput = (cellId: string) => ({ specimenId: specimen.id, cellId, burettePanelId: panel.id, transducerId: transducer.id, methodCode: "D5887", pressureUnit: "KPA", effectiveStress: "34.5" });
+  return { technician, other, qa, cell, staleCell, panel, transducer, specimen, assignInput };
+}
+
+/** Readings of a steady run: 2e-9 m3/m2/s through a 100 mm specimen every 6 h (invented for the test). */
+async function addSteadyReadings(runId: string, technicianId: string, count: number) {
+  const areaM2 = (Math.PI * 0.1 ** 2) / 4;
+  const stepMl = 2e-9 * areaM2 * 21_600 * 1e6;
+  await withActor(SYSTEM, (tx) =>
+    tx.reading.createMany({
+      data: Array.from({ length: count }, (_, i) => ({
+        runId, sequence: i + 1, takenAt: new Date(Date.now() - (count - i) * 21_600_000), elapsedS: i * 21_600,
+        inflowCumulativeMl: i * stepMl, outflowCumulativeMl: i * stepMl * 0.98, headPa: 14_000, temperatureC: 20, recordedById: technicianId,
+      })),
+    }),
+  );
+}
+
+describe("cell assignment and calibration", () => {
+  it("refuses a cell past its calibration date, then allows it once a QA manager has granted an override, which the run records", async () => {
+    const { technician, qa, staleCell, assignInput, specimen } = await setUp();
+    const refused = await failure(assignSpecimenToCell({ actor: technician, input: assignInput(staleCell.id) }));
+    expect(refused.code).toBe("ILLEGAL_TRANSITION");
+    expect(refused.message).toMatch(new RegExp(`${staleCell.assetTag} was due for calibration on \\d{4}-\\d{2}-\\d{2}\\..*ask a QA manager`));
+    expect((await db().specimen.findUniqueOrThrow({ where: { id: specimen.id } })).state).toBe("PREPARED");
+
+    expect((await failure(grantCalibrationOverride({ actor: technician, input: { equipmentId: staleCell.id, reason: "Calibration booked for Friday", validDays: 3 } }))).code).toBe("FORBIDDEN");
+    await grantCalibrationOverride({ actor: qa, input: { equipmentId: staleCell.id, reason: "Calibration booked for Friday", validDays: 3 } });
+    const run = await assignSpecimenToCell({ actor: technician, input: assignInput(staleCell.id) });
+    const stored = await db().run.findUniqueOrThrow({ where: { id: run.id }, include: { equipment: true } });
+    expect(stored).toMatchObject({ state: "SET_UP", performedById: technician.id, calibrationOverrideById: qa.id, effectiveStressPa: 34_500 });
+    expect(stored.calibrationOverrideReason).toBe(`${staleCell.assetTag}: Calibration booked for Friday`);
+    expect(stored.equipment.map((e) => e.role).sort()).toEqual(["burette panel", "permeameter cell", "pressure transducer"]);
+    expect(stored.equipment.every((e) => e.calibrationId)).toBe(true);
+    expect((await db().specimen.findUniqueOrThrow({ where: { id: specimen.id } })).state).toBe("ASSIGNED");
+  });
+
+  it("does not put two runs in one cell", async () => {
+    const { technician, cell, assignInput } = await setUp();
+    await assignSpecimenToCell({ actor: technician, input: assignInput(cell.id) });
+    const second = await makePreparedSpecimen(technician.id);
+    const error = await failure(assignSpecimenToCell({ actor: technician, input: { ...assignInput(cell.id), specimenId: second.id } }));
+    expect(error.code).toBe("CONFLICT");
+    expect(error.message).toMatch(/That cell is holding run T\d{2}-\d{5}/);
+  });
+});
+
+describe("stages, termination, post-test and submission", () => {
+  it("warns on a broken confining margin until acknowledged, refuses a pressure above a rating, and keeps the run's steps in order", async () => {
+    const { technician, other, cell, assignInput, specimen } = await setUp();
+    const run = await assignSpecimenToCell({ actor: technician, input: assignInput(cell.id) });
+    const stage = { runId: run.id, version: 1, kind: "SATURATION", pressureUnit: "KPA", cellPressure: "330", influentPressure: "310", effluentPressure: "310", startedAt: new Date(Date.now() - 5 * DAY).toISOString() };
+
+    expect((await failure(recordStage({ actor: other, input: stage }))).code).toBe("FORBIDDEN");
+    const warned = await failure(recordStage({ actor: technician, input: stage }));
+    expect(warned.message).toMatch(/exceeds the higher line pressure by 20\.0 kPa, less than the 35 kPa confining margin/);
+    expect(warned.fieldErrors).toHaveProperty("acknowledgeMargin");
+    expect(await db().runStage.count({ where: { runId: run.id } })).toBe(0);
+
+    const over = await failure(recordStage({ actor: technician, input: { ...stage, cellPressure: "760", influentPressure: "700", effluentPressure: "700" } }));
+    expect(over.message).toMatch(/is rated to 700 kPa; 760 kPa would exceed it/);
+
+    await recordStage({ actor: technician, input: { ...stage, acknowledgeMargin: true } });
+    expect(await db().runStage.findFirstOrThrow({ where: { runId: run.id } })).toMatchObject({ marginAcknowledged: true, cellPressurePa: 330_000, recordedById: technician.id });
+
+    const early = await failure(terminateRun({ actor: technician, input: { runId: run.id, version: 2, kind: "EARLY_END", reason: "Membrane leak" } }));
+    expect(early.message).toMatch(/A run that is saturating cannot terminate the run/);
+
+    await recordStage({ actor: technician, input: { ...stage, version: 2, kind: "EQUILIBRATION", cellPressure: "552", influentPressure: "517", effluentPressure: "517", startedAt: new Date(Date.now() - 4 * DAY).toISOString() } });
+    await recordStage({ actor: technician, input: { ...stage, version: 3, kind: "PERMEATION", cellPressure: "566", influentPressure: "531", effluentPressure: "517", startedAt: new Date(Date.now() - 3 * DAY).toISOString() } });
+    expect((await db().specimen.findUniqueOrThrow({ where: { id: specimen.id } })).state).toBe("UNDER_TEST");
+    const stages = await db().runStage.findMany({ where: { runId: run.id }, orderBy: { sequence: "asc" } });
+    expect(stages.map((s) => [s.kind, s.endedAt !== null])).toEqual([["SATURATION", true], ["EQUILIBRATION", true], ["PERMEATION", false]]);
+
+    // Criteria not met with three readings: terminating on criteria is refused with the reasons.
+    await addSteadyReadings(run.id, technician.id, 3);
+    const notYet = await failure(terminateRun({ actor: technician, input: { runId: run.id, version: 4, kind: "CRITERIA_MET" } }));
+    expect(notYet.message).toMatch(/^The termination criteria are not met yet: /);
+
+  });
+
+  it("terminates when the saved readings meet the criteria, records post-test data and submits", async () => {
+    const { technician, cell, assignInput, specimen } = await setUp();
+    const run = await assignSpecimenToCell({ actor: technician, input: assignInput(cell.id) });
+    const base = { runId: run.id, pressureUnit: "KPA", startedAt: new Date(Date.now() - 4 * DAY).toISOString() };
+    await recordStage({ actor: technician, input: { ...base, version: 1, kind: "SATURATION", cellPressure: "345", influentPressure: "310", effluentPressure: "310" } });
+    await recordStage({ actor: technician, input: { ...base, version: 2, kind: "EQUILIBRATION", cellPressure: "552", influentPressure: "517", effluentPressure: "517" } });
+    await recordStage({ actor: technician, input: { ...base, version: 3, kind: "PERMEATION", cellPressure: "552", influentPressure: "517", effluentPressure: "503" } });
+    await addSteadyReadings(run.id, technician.id, 8);
+
+    expect((await failure(submitRun({ actor: technician, input: { runId: run.id, version: 4 } }))).code).toBe("ILLEGAL_TRANSITION");
+    await terminateRun({ actor: technician, input: { runId: run.id, version: 4, kind: "CRITERIA_MET" } });
+    expect((await db().specimen.findUniqueOrThrow({ where: { id: specimen.id } })).state).toBe("TESTED");
+    expect((await failure(recordPostTest({ actor: technician, input: { runId: run.id, version: 5, thicknessMm: "0", finalMassG: "70" } }))).fieldErrors).toHaveProperty("thicknessMm");
+    await recordPostTest({ actor: technician, input: { runId: run.id, version: 5, thicknessMm: "5.9", finalMassG: "71.2", observations: "Even hydration" } });
+    await submitRun({ actor: technician, input: { runId: run.id, version: 6 } });
+    expect(await db().run.findUniqueOrThrow({ where: { id: run.id } })).toMatchObject({ state: "SUBMITTED", terminationKind: "CRITERIA_MET", postTestThicknessMm: 5.9 });
+  });
+});
