@@ -46,7 +46,7 @@ export function CorrectReadingForm({ readingId, sequence, pressureUnit, withChem
     router.refresh();
   });
 
-  if (!open) return <button type="button" className="button button-quiet" onClick={() => setOpen(true)} aria-label={`Correct reading ${sequence}`}>Correct…</button>;
+  if (!open) return <button type="button" className={`button button-quiet ${styles.compactButton}`} onClick={() => setOpen(true)} aria-label={`Correct reading ${sequence}`}>Correct…</button>;
   return (
     <form onSubmit={onSubmit} noValidate aria-label={`Correct reading ${sequence}`} data-testid={`correct-reading-${sequence}`}>
       {notice && <div className="notice notice-error" role="status">{notice}</div>}

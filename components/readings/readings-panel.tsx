@@ -85,9 +85,9 @@ export async function ReadingsPanel({ runId, actor }: ReadingsPanelProps) {
                     <td className={styles.num}>{pressureCell(r.cellPressurePa, unit)}</td>
                     <td className={styles.num}>{fixed(r.temperatureC, 1)}</td>
                     {chemistry && <><td className={styles.num}>{fixed(r.influentEcMsPerM, 1)}</td><td className={styles.num}>{fixed(r.effluentEcMsPerM, 1)}</td><td className={styles.num}>{fixed(r.influentPh, 2)}</td><td className={styles.num}>{fixed(r.effluentPh, 2)}</td></>}
-                    <td>
+                    <td className={styles.recorded}>
                       <span className="muted">{r.recordedBy.name} · {r.source === "manual" ? "entered" : r.source}</span>
-                      {canRecord && <div><CorrectReadingForm readingId={r.id} sequence={r.sequence} pressureUnit={unit} withChemistry={chemistry} values={entryValues(r, unit)} /></div>}
+                      {canRecord && <> <CorrectReadingForm readingId={r.id} sequence={r.sequence} pressureUnit={unit} withChemistry={chemistry} values={entryValues(r, unit)} /></>}
                     </td>
                   </tr>,
                 ];
@@ -122,7 +122,7 @@ export async function ReadingsPanel({ runId, actor }: ReadingsPanelProps) {
               runId={run.id}
               pressureUnit={unit}
               withChemistry={chemistry}
-              carryOver={last ? { influentPressure: pressureInput(last.influentPressurePa, unit), effluentPressure: pressureInput(last.effluentPressurePa, unit), cellPressure: pressureInput(last.cellPressurePa, unit), temperatureC: String(last.temperatureC) } : {}}
+              carryOver={last ? { influentPressure: pressureInput(last.influentPressurePa, unit), effluentPressure: pressureInput(last.effluentPressurePa, unit), cellPressure: pressureInput(last.cellPressurePa, unit), temperatureC: last.temperatureC.toFixed(1) } : {}}
             />
           </div>
           <div>
