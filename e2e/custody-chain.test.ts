@@ -1,21 +1,9 @@
 import type { Browser, Page } from "puppeteer";
+import { chooseByLabel, fill, setValue } from "./support/forms";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { baseUrl, browserAvailable, launchBrowser, pageSignedInAs, textOf } from "./support/session";
 
 const LAB_NUMBER = (letter: string) => new RegExp(`${letter}\\d{2}-\\d{5}`, "g");
-
-async function fillLabelled(page: Page, label: string, value: string) {
-  const input = await page.waitForSelector(`::-p-aria(${label})`);
-  await input!.click({ count: 3 });
-  await input!.type(value);
-}
-
-async function selectByText(page: Page, label: string, text: string) {
-  const select = await page.waitForSelector(`::-p-aria(${label})`);
-  const value = await select!.evaluate((el, t) => [...(el as HTMLSelectElement).options].find((o) => o.text.includes(t))?.value, text);
-  if (!value) throw new Error(`no option "${text}" in ${label}`);
-  await select!.select(value);
-}
 
 async function answerChecklist(page: Page) {
   const groups = await page.$$('[data-testid="preparation-checklist"] [role="radiogroup"]');
@@ -38,30 +26,24 @@ describe.skipIf(!browserAvailable())("chain of custody from the door to specimen
     // --- The clerk logs the shipment by pasting rows from a spreadsheet.
     const clerk = await pageSignedInAs(browser, "clerk@quillfen.test");
     await clerk.goto(`${baseUrl()}/intake/new`);
-    await selectByText(clerk, "Client", "Ostrel Mining Cooperative");
-    await selectByText(clerk, "Project", "Tailings pond B lining");
-    await fillLabelled(clerk, "Delivered by", "Courier parcel 77-310 (invented)");
-    await selectByText(clerk, "Stored at", "RACK-A2");
-    await fillLabelled(clerk, "Condition on arrival", "Three rolls, wrapped and dry.");
+    await chooseByLabel(clerk, "Client", "Ostrel Mining Cooperative");
+    await chooseByLabel(clerk, "Project", "Tailings pond B lining");
+    await fill(clerk, "Delivered by", "Courier parcel 77-310 (invented)");
+    await chooseByLabel(clerk, "Stored at", "RACK-A2");
+    await fill(clerk, "Condition on arrival", "Three rolls, wrapped and dry.");
     const pasted = [
       "Roll number\tLot number\tProduct\tManufacturer\tLength (mm)\tWidth (mm)\tMD marked",
       `${rollNumbers[0]}\tL-77\tNeedle-punched GCL\tOrrin Textile Works\t1000\t1200\tyes`,
       `${rollNumbers[1]}\t\tNeedle-punched GCL\tOrrin Textile Works\t1000\t1200\tyes`,
       `${rollNumbers[2]}\tL-77\tNeedle-punched GCL\tOrrin Textile Works\t1000\t1200\tno`,
     ].join("\n");
-    const pasteBox = await clerk.waitForSelector("::-p-aria(Paste rows from a spreadsheet)");
-    await pasteBox!.evaluate((el, text) => {
-      // A paste sets the whole value at once, as a spreadsheet copy does.
-      const setter = Object.getOwnPropertyDescriptor(HTMLTextAreaElement.prototype, "value")!.set!;
-      setter.call(el, text);
-      el.dispatchEvent(new Event("input", { bubbles: true }));
-    }, pasted);
+    await setValue(clerk, "Paste rows from a spreadsheet", pasted);
     await clerk.click("::-p-text(Read pasted rows)");
     await clerk.waitForSelector('[data-testid="row-2-errors"]');
     expect(await textOf(clerk, '[data-testid="row-2-errors"]')).toMatch(/Enter the lot number/);
     expect(await clerk.$$eval('[data-testid="roll-grid"] tbody tr', (rows) => rows.length)).toBe(3);
 
-    await fillLabelled(clerk, "Row 2 lot number", "L-77");
+    await fill(clerk, "Row 2 lot number", "L-77");
     await clerk.click("::-p-text(Log shipment and rolls)");
     await clerk.waitForFunction(() => location.pathname.startsWith("/intake/shipments/"), { timeout: 30_000 });
     const shipmentNumber = decodeURIComponent(clerk.url().split("/").pop()!);
@@ -89,17 +71,17 @@ describe.skipIf(!browserAvailable())("chain of custody from the door to specimen
     // --- The technician cuts one coupon from the first roll and prepares two specimens from it.
     const tech = await pageSignedInAs(browser, "technician@quillfen.test");
     await tech.goto(`${baseUrl()}/samples/rolls/${rollLabNumbers[0]}`);
-    await fillLabelled(tech, "Position in the roll sample", "Centre, 250 mm from the leading edge");
-    await fillLabelled(tech, "Length (mm)", "300");
-    await fillLabelled(tech, "Width (mm)", "300");
+    await fill(tech, "Position in the roll sample", "Centre, 250 mm from the leading edge");
+    await fill(tech, "Length (mm)", "300");
+    await fill(tech, "Width (mm)", "300");
     await tech.click("::-p-text(Record coupon)");
     await tech.waitForSelector('[data-testid="roll-coupons"]');
     const couponNumber = (await textOf(tech, '[data-testid="roll-coupons"]')).match(LAB_NUMBER("C"))![0];
 
     await tech.goto(`${baseUrl()}/samples/coupons/${couponNumber}`);
     for (const thickness of ["6.8", "7.1"]) {
-      await fillLabelled(tech, "Initial thickness (mm)", thickness);
-      await fillLabelled(tech, "Initial mass (g)", "46.5");
+      await fill(tech, "Initial thickness (mm)", thickness);
+      await fill(tech, "Initial mass (g)", "46.5");
       await answerChecklist(tech);
       await tech.click("::-p-text(Record specimen)");
       await tech.waitForFunction(() => document.querySelector('[role="status"]')?.textContent?.includes("recorded"));
@@ -132,7 +114,7 @@ describe.skipIf(!browserAvailable())("chain of custody from the door to specimen
     await tech.goto(`${baseUrl()}/`);
     const underTest = (await textOf(tech, '[data-testid="queue-runs"]')).match(LAB_NUMBER("P"))![0];
     await tech.goto(`${baseUrl()}/samples/specimens/${underTest}`);
-    await selectByText(tech, "Move to", "RACK-A1");
+    await chooseByLabel(tech, "Move to", "RACK-A1");
     await tech.click("button::-p-text(Move)");
     await tech.waitForSelector('[data-testid="custody-action-message"]');
     expect(await textOf(tech, '[data-testid="custody-action-message"]')).toBe(`${underTest}: A specimen that is under test cannot move; from here it can only finish testing.`);

@@ -1,12 +1,7 @@
-import type { Browser, Page } from "puppeteer";
+import type { Browser } from "puppeteer";
+import { fill } from "./support/forms";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { baseUrl, browserAvailable, launchBrowser, pageSignedInAs, signInOverHttp, textOf } from "./support/session";
-
-async function fill(page: Page, label: string, value: string) {
-  const input = await page.waitForSelector(`::-p-aria(${label})`);
-  await input!.click({ count: 3 });
-  await input!.type(value);
-}
 
 describe.skipIf(!browserAvailable())("the administrator keeps people's accounts (headless Chromium)", () => {
   let browser: Browser;

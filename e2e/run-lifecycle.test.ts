@@ -1,46 +1,17 @@
 import path from "node:path";
 import type { Browser, ElementHandle, Page } from "puppeteer";
+import { chooseByName, fill, localDateTime, setValue } from "./support/forms";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { baseUrl, browserAvailable, launchBrowser, pageSignedInAs, textOf } from "./support/session";
 
 const FIXTURE = path.resolve(import.meta.dirname, "fixtures", "readings-d5887.csv");
 
-async function field(page: Page, label: string): Promise<ElementHandle<Element>> {
-  const handle = await page.waitForSelector(`::-p-aria(${label})`);
-  if (!handle) throw new Error(`no field ${label}`);
-  return handle;
-}
-
-async function fill(page: Page, label: string, value: string) {
-  const input = await field(page, label);
-  await input.click({ count: 3 });
-  await input.type(value);
-}
-
-/** datetime-local inputs take their value whole, as the browser's picker gives it. */
-async function setDateTime(page: Page, label: string, date: Date) {
-  const local = new Date(date.getTime() - date.getTimezoneOffset() * 60_000).toISOString().slice(0, 16);
-  await (await field(page, label)).evaluate((el, value) => {
-    Object.getOwnPropertyDescriptor(HTMLInputElement.prototype, "value")!.set!.call(el, value);
-    el.dispatchEvent(new Event("input", { bubbles: true }));
-    el.dispatchEvent(new Event("change", { bubbles: true }));
-  }, local);
-}
-
-async function chooseOption(page: Page, name: string, text: string) {
-  const select = await page.waitForSelector(`select[name="${name}"]`);
-  if (!select) throw new Error(`no select ${name}`);
-  const value = await select.evaluate((el, t) => [...(el as HTMLSelectElement).options].find((o) => o.text.includes(t))?.value, text);
-  if (!value) throw new Error(`no option "${text}" in ${name}`);
-  await select.select(value);
-}
-
 async function recordStage(page: Page, kind: string, pressures: [string, string, string], startedAt: Date) {
-  await chooseOption(page, "kind", kind);
+  await chooseByName(page, "kind", kind);
   await fill(page, "Cell pressure (kPa)", pressures[0]);
   await fill(page, "Influent pressure (kPa)", pressures[1]);
   await fill(page, "Effluent pressure (kPa)", pressures[2]);
-  await setDateTime(page, "Started at", startedAt);
+  await setValue(page, "Started at", localDateTime(startedAt));
   await page.click("button::-p-text(Record stage)");
 }
 
@@ -60,15 +31,15 @@ describe.skipIf(!browserAvailable())("a run from cell assignment to submission (
 
     // --- Assignment: the overdue cell is refused, a calibrated one starts the run.
     await tech.goto(`${baseUrl()}/runs/new`);
-    await chooseOption(tech, "cellId", "CELL-06");
-    await chooseOption(tech, "burettePanelId", "BP-02");
-    await chooseOption(tech, "transducerId", "PT-01");
+    await chooseByName(tech, "cellId", "CELL-06");
+    await chooseByName(tech, "burettePanelId", "BP-02");
+    await chooseByName(tech, "transducerId", "PT-01");
     await fill(tech, "Effective stress (kPa)", "34.5");
     await tech.click("button::-p-text(Start the run)");
     await tech.waitForSelector('[data-testid="assign-error"]');
     expect(await textOf(tech, '[data-testid="assign-error"]')).toMatch(/CELL-06 was due for calibration on \d{4}-\d{2}-\d{2}\./);
 
-    await chooseOption(tech, "cellId", "CELL-04");
+    await chooseByName(tech, "cellId", "CELL-04");
     await tech.click("button::-p-text(Start the run)");
     await tech.waitForFunction(() => /^\/runs\/T\d{2}-\d{5}$/.test(location.pathname), { timeout: 30_000 });
     const runNumber = tech.url().split("/").pop()!;

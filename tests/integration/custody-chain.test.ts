@@ -1,5 +1,4 @@
 import { describe, expect, it } from "vitest";
-import { AppError } from "@/lib/errors/app-error";
 import { acknowledgeShipment } from "@/lib/server/intake/acknowledge-shipment";
 import { correctReceipt } from "@/lib/server/intake/correct-receipt";
 import { logShipment } from "@/lib/server/intake/log-shipment";
@@ -8,17 +7,9 @@ import { disposeRetained } from "@/lib/server/samples/dispose-retained";
 import { moveItem } from "@/lib/server/samples/move-item";
 import { prepareSpecimen } from "@/lib/server/samples/prepare-specimen";
 import { retainItem } from "@/lib/server/samples/retain-item";
+import { failure } from "../support/refusals";
 import { db, makeProject, makeStorageLocation, makeUser, unique } from "../support/factories";
 
-async function failure(promise: Promise<unknown>): Promise<AppError> {
-  try {
-    await promise;
-  } catch (error) {
-    if (error instanceof AppError) return error;
-    throw error;
-  }
-  throw new Error("expected the operation to be refused");
-}
 
 const rollRow = (rollNumber: string) => ({ rollNumber, lotNumber: "L-1", product: "Test GCL", manufacturer: "Test maker", sampleLengthMm: "1000", sampleWidthMm: "1200", machineDirectionMarked: "yes" });
 

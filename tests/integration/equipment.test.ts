@@ -10,18 +10,11 @@ import { registerEquipment } from "@/lib/server/equipment/register-equipment";
 import { setEquipmentStatus } from "@/lib/server/equipment/set-equipment-status";
 import { enteredPressureToPa } from "@/lib/units/pressure-entry";
 import { readBuretteAreasM2 } from "@/lib/validation/equipment";
+import { codeOf } from "../support/refusals";
 import { db, makeProject, makeUser, unique } from "../support/factories";
 
 const DAY = 86_400_000;
 
-async function codeOf(promise: Promise<unknown>): Promise<string> {
-  try {
-    await promise;
-    return "no error";
-  } catch (error) {
-    return error instanceof AppError ? error.code : `unexpected ${String(error)}`;
-  }
-}
 
 async function fieldErrorsOf(promise: Promise<unknown>): Promise<Record<string, string>> {
   try {

@@ -1,7 +1,6 @@
 import { readFileSync } from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
-import { AppError } from "@/lib/errors/app-error";
 import { withActor } from "@/lib/server/db/transaction";
 import { correctReading } from "@/lib/server/readings/correct-reading";
 import { importReadingsCsv } from "@/lib/server/readings/import-readings-csv";
@@ -9,6 +8,7 @@ import { listRunReadings } from "@/lib/server/readings/list-run-readings";
 import { recordReadings } from "@/lib/server/readings/record-readings";
 import { toHydraulicsReadings } from "@/lib/server/readings/to-hydraulics-input";
 import { evaluateRun } from "@/lib/hydraulics";
+import { failure } from "../support/refusals";
 import { db, makeProject, makeUser, unique } from "../support/factories";
 
 const DAY = 86_400_000;
@@ -16,15 +16,6 @@ const HOUR = 3_600_000;
 const SYSTEM = { id: "system:test" };
 const fixture = (name: string) => readFileSync(path.resolve(import.meta.dirname, "../../e2e/fixtures", name), "utf8");
 
-async function failure(promise: Promise<unknown>): Promise<AppError> {
-  try {
-    await promise;
-  } catch (error) {
-    if (error instanceof AppError) return error;
-    throw error;
-  }
-  throw new Error("expected the operation to be refused");
-}
 
 /** A run in `state` whose permeation began `startedDaysAgo` days ago, with a burette panel of 31.4 / 31.2 mm² (invented). */
 async function makeRun(options: { state?: "PERMEATING" | "EQUILIBRATING" | "TERMINATED"; startedDaysAgo?: number } = {}) {

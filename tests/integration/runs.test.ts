@@ -1,5 +1,4 @@
 import { describe, expect, it } from "vitest";
-import { AppError } from "@/lib/errors/app-error";
 import { withActor } from "@/lib/server/db/transaction";
 import { assignSpecimenToCell } from "@/lib/server/runs/assign-specimen-to-cell";
 import { grantCalibrationOverride } from "@/lib/server/runs/grant-calibration-override";
@@ -7,20 +6,12 @@ import { recordPostTest } from "@/lib/server/runs/record-post-test";
 import { recordStage } from "@/lib/server/runs/record-stage";
 import { submitRun } from "@/lib/server/runs/submit-run";
 import { terminateRun } from "@/lib/server/runs/terminate-run";
+import { failure } from "../support/refusals";
 import { db, makeProject, makeUser, unique } from "../support/factories";
 
 const DAY = 86_400_000;
 const SYSTEM = { id: "system:test" };
 
-async function failure(promise: Promise<unknown>): Promise<AppError> {
-  try {
-    await promise;
-  } catch (error) {
-    if (error instanceof AppError) return error;
-    throw error;
-  }
-  throw new Error("expected the operation to be refused");
-}
 
 async function makeInstrument(kind: "PERMEAMETER_CELL" | "BURETTE_PANEL" | "PRESSURE_TRANSDUCER", options: { calibratedDaysAgo?: number; ratedMaxPressurePa?: number; values?: object } = {}) {
   return withActor(SYSTEM, async (tx) => {

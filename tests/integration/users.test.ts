@@ -1,20 +1,12 @@
 import { describe, expect, it } from "vitest";
-import { AppError } from "@/lib/errors/app-error";
 import { changeOwnPassword } from "@/lib/server/users/change-own-password";
 import { createUser } from "@/lib/server/users/create-user";
 import { resetPassword } from "@/lib/server/users/reset-password";
 import { setUserActive } from "@/lib/server/users/set-user-active";
 import { verifyCredentials } from "@/lib/server/auth/verify-credentials";
+import { codeOf } from "../support/refusals";
 import { db, makeOrganization, makeUser, TEST_PASSWORD, unique } from "../support/factories";
 
-async function codeOf(promise: Promise<unknown>): Promise<string> {
-  try {
-    await promise;
-    return "no error";
-  } catch (error) {
-    return error instanceof AppError ? error.code : `unexpected ${String(error)}`;
-  }
-}
 
 describe("user administration", () => {
   it("lets only the administrator create users", async () => {

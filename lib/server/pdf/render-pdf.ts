@@ -4,19 +4,8 @@ import os from "node:os";
 import path from "node:path";
 import type { Browser, PDFMargin } from "puppeteer";
 import { AppError } from "@/lib/errors/app-error";
+import { CHROMIUM_FLAGS } from "./chromium";
 import { createFifoLimiter } from "./create-fifo-limiter";
-
-/** The same quiet-on-a-closed-network flags the end-to-end tests use (e2e/support/find-browser.ts). */
-const CHROMIUM_FLAGS = [
-  "--no-sandbox",
-  "--disable-gpu",
-  "--disable-dev-shm-usage",
-  "--disable-background-networking",
-  "--disable-component-update",
-  "--disable-sync",
-  "--no-first-run",
-  "--disable-quic",
-];
 
 /** A4 margins of every document unless it asks otherwise; the footer sits in the bottom one. */
 export const DEFAULT_PDF_MARGIN: PDFMargin = { top: "14mm", right: "14mm", bottom: "16mm", left: "14mm" };
