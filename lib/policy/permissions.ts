@@ -78,3 +78,13 @@ export function isAction(value: string): value is Action {
 export function isStaffRole(role: RoleName): boolean {
   return role !== "CLIENT_USER";
 }
+
+/**
+ * Whether this person may approve this run: a QA manager, and not the one who performed it (ISO/IEC 17025
+ * independence of review; the database refuses it too).
+ */
+export function canApproveRun(actor: { id: string; role: RoleName }, run: { performedById: string }): { ok: true } | { ok: false; reason: string } {
+  if (!can(actor.role, "run.review")) return { ok: false, reason: `Approving needs the role ${describeRolesAllowedTo("run.review")}.` };
+  if (actor.id === run.performedById) return { ok: false, reason: "You performed this run, so another QA manager must review it." };
+  return { ok: true };
+}

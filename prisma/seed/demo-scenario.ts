@@ -114,7 +114,9 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
   await prepare(waitingCoupon.id, 3, users.technician2!, "D5887", "PREPARED");
 
   const certifiedSpecimen = await prepare((await cutCoupon(certifiedRoll.id, 19, users.technician!)).id, 19, users.technician!, "D5887", "RETAINED");
-  const reviewSpecimen = await prepare((await cutCoupon(reviewRoll.id, 12, users.technician2!)).id, 12, users.technician2!, "D5887", "TESTED");
+  const reviewCoupon = await cutCoupon(reviewRoll.id, 12, users.technician2!);
+  const reviewSpecimen = await prepare(reviewCoupon.id, 12, users.technician2!, "D5887", "TESTED");
+  const secondReviewSpecimen = await prepare(reviewCoupon.id, 12, users.technician!, "D5887", "TESTED");
   const testingSpecimen = await prepare((await cutCoupon(testingRoll.id, 6, users.technician!)).id, 6, users.technician!, "D5887", "UNDER_TEST");
 
   // Runs: one approved and certified, one awaiting review, one permeating now.
@@ -157,6 +159,9 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
 
   const submittedRun = await makeRun(reviewSpecimen.id, "CELL-02", users.technician2!, 11, "SUBMITTED", 12);
   await tx.run.update({ where: { id: submittedRun.id }, data: { terminatedAt: ago(5), terminationKind: "CRITERIA_MET", postTestThicknessMm: 6.1, postTestMassG: 70.8, postTestObservations: "Even swelling.", submittedAt: ago(4) } });
+  // A second run of the same roll waits for review too, so QA has one to return and one to approve.
+  const secondSubmittedRun = await makeRun(secondReviewSpecimen.id, "CELL-05", users.technician!, 11, "SUBMITTED", 12);
+  await tx.run.update({ where: { id: secondSubmittedRun.id }, data: { terminatedAt: ago(5), terminationKind: "CRITERIA_MET", postTestThicknessMm: 6.0, postTestMassG: 71.0, postTestObservations: "Even swelling; no channels.", submittedAt: ago(4) } });
 
   await makeRun(testingSpecimen.id, "CELL-03", users.technician!, 5, "PERMEATING", 7);
 }

@@ -12,7 +12,7 @@ export default async function ReviewPage() {
     <>
       <h1>Review</h1>
       <p className="muted">Runs submitted by technicians and waiting for a QA decision. You cannot approve a run you performed.</p>
-      <QueueCard title="Awaiting review" count={runs.length} empty="Nothing is waiting for review." testId="review-list"><RunTable runs={runs} /></QueueCard>
+      <QueueCard title="Awaiting review" count={runs.length} empty="Nothing is waiting for review." testId="review-list"><RunTable runs={runs} linkTo="review" /></QueueCard>
     </>
   );
 }

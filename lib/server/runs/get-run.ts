@@ -3,6 +3,7 @@ import { AppError } from "@/lib/errors/app-error";
 import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
 import { getDb } from "../db/client";
+import { runDeviations } from "@/lib/runs/deviations";
 import { evaluateRunRecords } from "./evaluate-run-records";
 
 /** A run with its specimen, instruments, stages and reviews, and the hydraulics verdict on its readings. */
@@ -12,7 +13,7 @@ export async function getRun(options: { actor: CurrentUser; labNumber: string })
   const run = await db.run.findUnique({
     where: { labNumber: options.labNumber },
     include: {
-      specimen: { select: { id: true, labNumber: true, dieDiameterMm: true, initialThicknessMm: true, coupon: { select: { labNumber: true, roll: { select: { labNumber: true, project: { select: { name: true, clientOrganization: { select: { name: true } } } } } } } } } },
+      specimen: { select: { id: true, labNumber: true, dieDiameterMm: true, initialThicknessMm: true, checklist: { select: { question: true, answer: true } }, coupon: { select: { labNumber: true, roll: { select: { labNumber: true, project: { select: { name: true, clientOrganization: { select: { name: true } } } } } } } } } },
       cell: { select: { assetTag: true, name: true, ratedMaxPressurePa: true } },
       method: { select: { code: true, title: true, defaults: true } },
       performedBy: { select: { id: true, name: true } },
@@ -23,6 +24,7 @@ export async function getRun(options: { actor: CurrentUser; labNumber: string })
     },
   });
   if (!run) throw new AppError("NOT_FOUND");
-  const verdict = await evaluateRunRecords(db, run.id);
-  return { run, ...verdict };
+  const [verdict, correctedReadings] = await Promise.all([evaluateRunRecords(db, run.id), db.reading.count({ where: { runId: run.id, correctsId: { not: null } } })]);
+  const deviations = runDeviations({ ...run, checklist: run.specimen.checklist, correctedReadings });
+  return { run, deviations, ...verdict };
 }

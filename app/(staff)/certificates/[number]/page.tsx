@@ -1,0 +1,53 @@
+import { notFound } from "next/navigation";
+import { IssueCertificateForm } from "@/components/certificates/issue-certificate-form";
+import { ReviseCertificateForm } from "@/components/certificates/revise-certificate-form";
+import { isAppError } from "@/lib/errors/app-error";
+import { formatDateTime } from "@/lib/format/dates";
+import { can } from "@/lib/policy/permissions";
+import { formatResultValue } from "@/lib/results/format-result";
+import { requirePageUser } from "@/lib/server/auth/require-page-user";
+import { getCertificate } from "@/lib/server/certificates/get-certificate";
+
+type Props = { params: Promise<{ number: string }> };
+
+export async function generateMetadata({ params }: Props) {
+  return { title: `Certificate ${(await params).number}` };
+}
+
+const STATUS_TONE: Record<string, string> = { ISSUED: "state-ok", SUPERSEDED: "state-warn", REVOKED: "state-bad", DRAFT: "" };
+
+export default async function CertificatePage({ params }: Props) {
+  const actor = await requirePageUser("certificate.view");
+  const { number } = await params;
+  const certificate = await getCertificate({ actor, number }).catch((error) => {
+    if (isAppError(error) && error.code === "NOT_FOUND") notFound();
+    throw error;
+  });
+  const mayIssue = can(actor.role, "certificate.issue");
+  const latest = certificate.revisions[0];
+  return (
+    <>
+      <h1>Certificate <span className="mono">{certificate.number}</span></h1>
+      <p className="muted">{certificate.clientOrganization.name} · {certificate.project.name} ({certificate.project.code})</p>
+      <div className="stack-gap">
+        {certificate.revisions.map((r) => (
+          <section key={r.id} className="card" data-testid={`revision-${r.revision}`}>
+            <h2>Revision {r.revision} <span className={`state ${STATUS_TONE[r.status] ?? ""}`} data-testid={`revision-${r.revision}-status`}>{r.status.toLowerCase()}</span></h2>
+            {r.reason && <p>Reason: {r.reason}</p>}
+            <ul>
+              {r.results.map(({ result }) => <li key={result.id}>{result.run.labNumber} · specimen {result.run.specimen.labNumber} · {result.property === "INDEX_FLUX" ? "index flux" : "hydraulic conductivity at 20 °C"} {formatResultValue(result.value, result.unit)}</li>)}
+            </ul>
+            {r.issuedAt && (
+              <p className="muted">
+                Issued {formatDateTime(r.issuedAt)} · signed by {r.signatures.map((s) => `${s.signer.name} (${s.meaning})`).join(", ")} · verification code <span className="mono" data-testid={`revision-${r.revision}-code`}>{r.verificationCode}</span> · SHA-256 <span className="mono">{r.pdfSha256?.slice(0, 16)}…</span>
+              </p>
+            )}
+            {r.status !== "DRAFT" && r.pdfSha256 && <p><a className="button button-quiet" href={`/api/certificates/${certificate.number}/pdf?revision=${r.revision}`} data-testid={`revision-${r.revision}-pdf`}>Download PDF</a> <a href={`/verify/${r.verificationCode}`}>Verification page</a></p>}
+            {r.status === "DRAFT" && mayIssue && <IssueCertificateForm revisionId={r.id} />}
+          </section>
+        ))}
+        {mayIssue && latest?.status === "ISSUED" && <section className="card"><h2>Correct this certificate</h2><ReviseCertificateForm certificateId={certificate.id} /></section>}
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,35 @@
+import { isoDate } from "@/lib/certificates/certificate-wording";
+import type { CertificateSnapshot } from "@/lib/certificates/certificate-snapshot";
+
+// A reason typed with or without its full stop reads as one sentence.
+function sentence(text: string): string {
+  const trimmed = text.trim();
+  return /[.!?]$/.test(trimmed) ? trimmed : `${trimmed}.`;
+}
+
+/** Title, the identity panel (number, revision, issue date) and, for a correction, what it supersedes. */
+export function CertificateHeading({ snapshot }: { snapshot: CertificateSnapshot }) {
+  const methods = [...new Set(snapshot.tests.map((t) => t.method.code))];
+  return (
+    <>
+      <div className="cert-head">
+        <div>
+          <div className="cert-kicker">Test certificate</div>
+          <h1>Hydraulic tests on geosynthetic clay liner</h1>
+          <div className="doc-small">{methods.length ? `Methods: ${methods.join(", ")}` : "No tests are reported on this certificate."}</div>
+        </div>
+        <div className="cert-identity" data-testid="certificate-identity">
+          <div><div className="cert-label">Certificate</div><div className="cert-value cert-number">{snapshot.number}</div></div>
+          <div><div className="cert-label">Revision</div><div className="cert-value">{snapshot.revision}</div></div>
+          <div><div className="cert-label">Issued</div><div className="cert-value">{isoDate(snapshot.issuedAt)}</div></div>
+        </div>
+      </div>
+      {snapshot.supersedes ? (
+        <div className="doc-box doc-box-warn cert-supersedes" style={{ marginTop: 0, marginBottom: "10pt" }}>
+          Revision {snapshot.revision} supersedes revision {snapshot.supersedes.revision}: {sentence(snapshot.supersedes.reason || snapshot.reason || "no reason was recorded")}
+          {" "}Revision {snapshot.supersedes.revision} is no longer valid.
+        </div>
+      ) : null}
+    </>
+  );
+}

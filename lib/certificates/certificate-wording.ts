@@ -1,0 +1,73 @@
+/**
+ * How the certificate writes units, custody steps, roles and numbers. Pure, so the document and its
+ * tests say the same thing.
+ */
+import { ROLE_LABELS, type RoleName } from "../policy/permissions";
+
+/** The two statements every certificate carries (DOMAIN.md, "Cautions the software must carry"). */
+export const CERTIFICATE_CAUTIONS = [
+  "The results relate only to the specimens tested, as received and prepared by the laboratory.",
+  "Design decisions based on these results rest with the responsible engineer, under local codes and licensed practice.",
+] as const;
+
+/** "m3/m2/s" -> "m³/m²/s": unit text as entered, with powers of metres set as superscripts. */
+export function prettyUnit(unit: string): string {
+  return unit.replace(/\b([ckm]?m)([23])(?![0-9])/g, (_, metres: string, power: string) => `${metres}${power === "2" ? "²" : "³"}`);
+}
+
+const CUSTODY_WORDS: Record<string, string> = {
+  RECEIVED: "Received", STORED: "Stored", MOVED: "Moved", CUT: "Cut", PREPARED: "Prepared", ASSIGNED: "Mounted in cell",
+  TEST_STARTED: "Test started", TESTED: "Tested", RETAINED: "Retained", DISPOSED: "Disposed", CORRECTED: "Corrected",
+};
+
+/** Text with its first letter capitalised, for table cells ("received" -> "Received"). */
+export function capitalise(text: string): string {
+  return text.charAt(0).toUpperCase() + text.slice(1);
+}
+
+/** A custody action as a word ("TEST_STARTED" -> "Test started"); other text is kept, capitalised. */
+export function custodyActionLabel(action: string): string {
+  return CUSTODY_WORDS[action] ?? capitalise(action);
+}
+
+/**
+ * A result as printed with its unit. The snapshot's display may already carry the unit
+ * ("2.4 × 10⁻⁹ m³/m²/s") or not ("2.4e-9"); the unit is added only when it is missing.
+ */
+export function valueWithUnit(display: string, unit: string): string {
+  const pretty = prettyUnit(unit);
+  const text = display.trim();
+  return text.endsWith(pretty) || text.endsWith(unit) ? text : `${text} ${pretty}`;
+}
+
+/** An uncertainty as printed under a heading that already says "(k = 2)": the repeated coverage factor is dropped. */
+export function withoutCoverageFactor(uncertainty: string): string {
+  return uncertainty.replace(/\s*\(k\s*=\s*2\)\s*$/, "");
+}
+
+/** A role code as a person's title ("QA_MANAGER" -> "QA manager"); any other text stays as given. */
+export function roleLabel(role: string): string {
+  return ROLE_LABELS[role as RoleName] ?? role;
+}
+
+/**
+ * A measured condition for print: at most `decimals` places, trailing zeros dropped ("34.50" -> "34.5"),
+ * or "not recorded" when there is no value.
+ */
+export function conditionValue(value: number | null, unit: string, decimals = 1): string {
+  if (value === null || !Number.isFinite(value)) return "not recorded";
+  const text = value.toFixed(decimals).replace(/(\.\d*?)0+$/, "$1").replace(/\.$/, "");
+  return `${text} ${unit}`;
+}
+
+/** The date part of an ISO time ("2026-12-01"), as the lab writes dates; "—" when missing. */
+export function isoDate(iso: string | null): string {
+  return iso ? iso.slice(0, 10) : "—";
+}
+
+/** "2026-12-01 14:05 UTC" from an ISO time; "—" when missing. */
+export function isoDateTime(iso: string | null): string {
+  if (!iso) return "—";
+  const date = new Date(iso);
+  return Number.isNaN(date.getTime()) ? iso : `${date.toISOString().slice(0, 16).replace("T", " ")} UTC`;
+}

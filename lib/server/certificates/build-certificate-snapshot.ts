@@ -1,0 +1,123 @@
+import "server-only";
+import type { CertificateSample, CertificateSnapshot, CertificateTest } from "@/lib/certificates/certificate-snapshot";
+import { verificationUrl } from "@/lib/certificates/verification-code";
+import { ROLE_LABELS } from "@/lib/policy/permissions";
+import { conformanceSummary } from "@/lib/results/conformance-summary";
+import { formatResultValue, formatUncertainty } from "@/lib/results/format-result";
+import { runDeviations } from "@/lib/runs/deviations";
+import { DEMO_LAB_DECLARED_UNCERTAINTIES } from "@/lib/results/declared-uncertainties";
+import { AppError } from "@/lib/errors/app-error";
+import type { CurrentUser } from "../auth/current-user";
+import type { Tx } from "../db/transaction";
+import { evaluateRunRecords } from "../runs/evaluate-run-records";
+import { findProjectLimits } from "../specifications/find-project-limits";
+
+const PROPERTY_LABELS: Record<string, string> = { INDEX_FLUX: "Index flux", HYDRAULIC_CONDUCTIVITY: "Hydraulic conductivity at 20 °C" };
+const ACTION_WORDS: Record<string, string> = { RECEIVED: "received", STORED: "stored", CUT: "cut", PREPARED: "prepared", ASSIGNED: "mounted in a cell", TEST_STARTED: "permeation started", TESTED: "tested" };
+const iso = (d: Date | null | undefined) => (d ? d.toISOString() : null);
+
+/** Everything a certificate revision will say, read inside the issuing transaction and frozen with it. */
+export async function buildCertificateSnapshot(tx: Tx, options: { revisionId: string; signer: CurrentUser; meaning: string; now: Date; baseUrl: string }): Promise<CertificateSnapshot> {
+  const revision = await tx.certificateRevision.findUnique({
+    where: { id: options.revisionId },
+    include: {
+      supersedes: { select: { revision: true } },
+      certificate: { include: { project: true, clientOrganization: true } },
+      results: { include: { result: { include: { approvedBy: { select: { name: true } } } } } },
+    },
+  });
+  if (!revision) throw new AppError("NOT_FOUND");
+  const lab = await tx.laboratory.findUnique({ where: { id: "lab" } });
+  const { certificate } = revision;
+  const limits = await findProjectLimits({ projectId: certificate.projectId, tx });
+
+  const runIds = [...new Set(revision.results.map((r) => r.result.runId))];
+  const runs = await tx.run.findMany({
+    where: { id: { in: runIds } },
+    orderBy: { labNumber: "asc" },
+    include: {
+      method: { select: { code: true, title: true } },
+      cell: { select: { assetTag: true } },
+      performedBy: { select: { name: true } },
+      stages: { orderBy: { sequence: "asc" } },
+      reviews: { where: { decision: "APPROVED" }, orderBy: { createdAt: "desc" }, take: 1, include: { reviewer: { select: { name: true } } } },
+      _count: { select: { readings: { where: { correctsId: { not: null } } } } },
+      specimen: { include: { checklist: true, coupon: { include: { roll: { include: { shipment: true } } } } } },
+    },
+  });
+
+  const tests: CertificateTest[] = [];
+  const samples = new Map<string, CertificateSample>();
+  for (const run of runs) {
+    const { evaluation, inputReadings } = await evaluateRunRecords(tx, run.id, { uncertainty: DEMO_LAB_DECLARED_UNCERTAINTIES });
+    const permeation = run.stages.find((s) => s.kind === "PERMEATION");
+    const temperatures = inputReadings.map((r) => r.temperatureC);
+    const roll = run.specimen.coupon.roll;
+    tests.push({
+      runLabNumber: run.labNumber,
+      specimenLabNumber: run.specimen.labNumber,
+      rollLabNumber: roll.labNumber,
+      method: run.method,
+      conditions: {
+        effectiveStressKPa: run.effectiveStressPa === null ? null : run.effectiveStressPa / 1000,
+        headKPa: permeation ? (permeation.influentPressurePa - permeation.effluentPressurePa) / 1000 : null,
+        permeant: run.permeantName ? [run.permeantName, run.permeantSalt, run.permeantMolarityMolPerL ? `${run.permeantMolarityMolPerL} mol/L` : null].filter(Boolean).join(", ") : "de-aired water",
+        meanTemperatureC: temperatures.length ? temperatures.reduce((a, t) => a + t, 0) / temperatures.length : null,
+        cell: run.cell.assetTag,
+        thicknessMm: run.postTestThicknessMm,
+      },
+      terminatedAt: iso(run.terminatedAt),
+      termination: run.terminationKind === "EARLY_END" ? `ended early: ${run.terminationReason}` : "termination criteria met",
+      deviations: runDeviations({ ...run, checklist: run.specimen.checklist, correctedReadings: run._count.readings }),
+      results: revision.results
+        .filter((r) => r.result.runId === run.id)
+        .map(({ result }) => {
+          const limit = limits?.get(result.property) ?? null;
+          return {
+            property: result.property,
+            label: PROPERTY_LABELS[result.property] ?? result.property,
+            value: result.value,
+            unit: result.unit,
+            display: formatResultValue(result.value, result.unit),
+            expandedUncertainty: result.expandedUncertainty,
+            uncertaintyDisplay: result.expandedUncertainty === null ? null : formatUncertainty(result.expandedUncertainty, result.unit, { value: result.value }),
+            conformance: limit ? conformanceSummary({ value: result.value, unit: result.unit }, limit) : null,
+          };
+        }),
+      chart: (evaluation?.intervals ?? []).map((iv) => ({ hours: iv.toS / 3600, flux: iv.flux, k20: iv.k20 })),
+      performedBy: run.performedBy.name,
+      approvedBy: run.reviews[0]?.reviewer.name ?? revision.results.find((r) => r.result.runId === run.id)?.result.approvedBy?.name ?? "—",
+      approvedAt: iso(run.reviews[0]?.createdAt) ?? "",
+    });
+
+    if (!samples.has(roll.id)) {
+      const events = await tx.custodyEvent.findMany({
+        where: { OR: [{ rollId: roll.id }, { couponId: run.specimen.couponId }, { specimenId: run.specimen.id }], action: { in: Object.keys(ACTION_WORDS) as never } },
+        orderBy: { occurredAt: "asc" },
+        include: { actor: { select: { name: true } }, roll: { select: { labNumber: true } }, coupon: { select: { labNumber: true } }, specimen: { select: { labNumber: true } } },
+      });
+      samples.set(roll.id, {
+        rollLabNumber: roll.labNumber, rollNumber: roll.rollNumber, lotNumber: roll.lotNumber, product: roll.product, manufacturer: roll.manufacturer,
+        shipmentLabNumber: roll.shipment.labNumber, receivedAt: roll.shipment.receivedAt.toISOString(),
+        custody: events.map((e) => ({ at: e.occurredAt.toISOString(), action: ACTION_WORDS[e.action] ?? e.action.toLowerCase(), item: e.roll?.labNumber ?? e.coupon?.labNumber ?? e.specimen?.labNumber ?? "", by: e.actor.name })),
+      });
+    }
+  }
+
+  return {
+    number: certificate.number,
+    revision: revision.revision,
+    reason: revision.reason,
+    verificationCode: revision.verificationCode,
+    verificationUrl: verificationUrl(options.baseUrl, revision.verificationCode),
+    issuedAt: options.now.toISOString(),
+    lab: { name: lab?.name ?? "Laboratory", address: lab?.address ?? "", accreditation: lab?.accreditation ?? null },
+    client: { name: certificate.clientOrganization.name, address: certificate.clientOrganization.address },
+    project: { code: certificate.project.code, name: certificate.project.name, siteName: certificate.project.siteName, siteLocation: certificate.project.siteLocation },
+    specification: limits ? { name: limits.specificationName } : null,
+    samples: [...samples.values()],
+    tests,
+    signatory: { name: options.signer.name, role: ROLE_LABELS[options.signer.role], meaning: options.meaning, signedAt: options.now.toISOString() },
+    supersedes: revision.supersedes ? { revision: revision.supersedes.revision, reason: revision.reason } : null,
+  };
+}

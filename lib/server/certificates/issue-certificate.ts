@@ -1,0 +1,53 @@
+import "server-only";
+import { createHash } from "node:crypto";
+import { AppError } from "@/lib/errors/app-error";
+import { issueCertificateSchema } from "@/lib/validation/certificates";
+import type { CurrentUser } from "../auth/current-user";
+import { requirePermission } from "../auth/require-permission";
+import { verifyPassword } from "../auth/password";
+import { getDb } from "../db/client";
+import { withActor } from "../db/transaction";
+import { parseOrThrow } from "../validation/parse";
+import { buildCertificateSnapshot } from "./build-certificate-snapshot";
+import { renderCertificatePdf } from "./render-certificate-pdf";
+
+function publicBaseUrl(): string {
+  return (process.env.NEXTAUTH_URL ?? "http://localhost:3000").replace(/\/$/, "");
+}
+
+/**
+ * A QA manager signs and issues a draft revision: their password is asked again, the certificate's
+ * content is frozen as a snapshot, its PDF rendered and its SHA-256 digest stored with a signature
+ * record. A revision that supersedes an issued one marks that one superseded in the same transaction.
+ */
+export async function issueCertificate(options: { actor: CurrentUser; input: unknown; now?: Date }) {
+  requirePermission(options.actor, "certificate.issue");
+  const input = parseOrThrow(issueCertificateSchema, options.input);
+  const db = getDb();
+  const signer = await db.user.findUniqueOrThrow({ where: { id: options.actor.id }, omit: { passwordHash: false } });
+  if (!(await verifyPassword(input.password, signer.passwordHash)))
+    throw new AppError("INVALID_INPUT", "That password is not right; nothing was signed.", { fieldErrors: { password: "Not your password." } });
+
+  const draft = await db.certificateRevision.findUnique({ where: { id: input.revisionId }, select: { status: true, revision: true, _count: { select: { results: true } }, certificate: { select: { number: true } } } });
+  if (!draft) throw new AppError("NOT_FOUND");
+  if (draft.status !== "DRAFT") throw new AppError("ILLEGAL_TRANSITION", `${draft.certificate.number} revision ${draft.revision} is already ${draft.status.toLowerCase()}.`);
+  if (draft._count.results === 0) throw new AppError("ILLEGAL_TRANSITION", "A certificate needs at least one approved result.");
+
+  const now = options.now ?? new Date();
+  const snapshot = await db.$transaction((tx) => buildCertificateSnapshot(tx, { revisionId: input.revisionId, signer: options.actor, meaning: input.meaning, now, baseUrl: publicBaseUrl() }), { timeout: 30_000 });
+  // Rendering takes Chromium a moment, so it happens outside the writing transaction.
+  const pdf = await renderCertificatePdf(snapshot);
+  const pdfSha256 = createHash("sha256").update(pdf).digest("hex");
+
+  return withActor(options.actor, async (tx) => {
+    const revision = await tx.certificateRevision.findUniqueOrThrow({ where: { id: input.revisionId }, select: { status: true, supersedesId: true } });
+    if (revision.status !== "DRAFT") throw new AppError("CONFLICT", "Someone issued this revision a moment ago; reload the page.");
+    if (revision.supersedesId) {
+      const previous = await tx.certificateRevision.updateMany({ where: { id: revision.supersedesId, status: "ISSUED" }, data: { status: "SUPERSEDED", supersededAt: now } });
+      if (previous.count !== 1) throw new AppError("CONFLICT", "The revision this one corrects is no longer the issued one; reload the page.");
+    }
+    await tx.certificateRevision.update({ where: { id: input.revisionId }, data: { status: "ISSUED", issuedAt: now, pdf: new Uint8Array(pdf), pdfSha256, snapshot } });
+    await tx.signature.create({ data: { revisionId: input.revisionId, signerId: options.actor.id, signerRole: options.actor.role, meaning: input.meaning, signedAt: now } });
+    return { number: snapshot.number, revision: snapshot.revision, pdfSha256, verificationCode: snapshot.verificationCode };
+  }, { timeoutMs: 30_000 });
+}

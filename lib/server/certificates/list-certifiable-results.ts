@@ -1,0 +1,25 @@
+import "server-only";
+import type { CurrentUser } from "../auth/current-user";
+import { requirePermission } from "../auth/require-permission";
+import { getDb } from "../db/client";
+
+/** Approved results not yet on any certificate, grouped by project, for drafting a new certificate. */
+export async function listCertifiableResults(options: { actor: CurrentUser }) {
+  requirePermission(options.actor, "certificate.issue");
+  const results = await getDb().result.findMany({
+    where: { approvedAt: { not: null }, certificateResults: { none: {} } },
+    orderBy: { approvedAt: "asc" },
+    select: {
+      id: true, property: true, value: true, unit: true, approvedAt: true,
+      run: { select: { labNumber: true, methodCode: true, specimen: { select: { labNumber: true, coupon: { select: { roll: { select: { labNumber: true, project: { select: { id: true, name: true, code: true, clientOrganization: { select: { name: true } } } } } } } } } } } },
+    },
+  });
+  const byProject = new Map<string, { project: { id: string; name: string; code: string; client: string }; results: typeof results }>();
+  for (const r of results) {
+    const p = r.run.specimen.coupon.roll.project;
+    const entry = byProject.get(p.id) ?? { project: { id: p.id, name: p.name, code: p.code, client: p.clientOrganization.name }, results: [] };
+    entry.results.push(r);
+    byProject.set(p.id, entry);
+  }
+  return [...byProject.values()];
+}

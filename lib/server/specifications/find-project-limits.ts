@@ -1,0 +1,47 @@
+import "server-only";
+import type { TestProperty } from "@/lib/results/property-units";
+import { getDb, type Db } from "../db/client";
+import type { Tx } from "../db/transaction";
+import { limitOrder, limitSelect } from "./limit-select";
+
+export type ProjectLimit = {
+  id: string;
+  property: TestProperty;
+  limitText: string;
+  unit: string;
+  direction: "MAXIMUM" | "MINIMUM";
+  significantDigits: number;
+  conformanceMethod: "ABSOLUTE" | "ROUNDING";
+  testMethodCode: string | null;
+};
+
+export type ProjectLimits = {
+  specificationId: string;
+  specificationName: string;
+  /** In the order of the TestProperty enum. */
+  limits: ProjectLimit[];
+  /** The limit for one property, or null when the specification does not limit it. */
+  get(property: TestProperty): ProjectLimit | null;
+};
+
+/**
+ * The limits a project's results are judged against, by property: those of the project's newest
+ * specification (by creation), or null when it has none. No permission check: a building block for
+ * operations that have made their own (certificate issuing). Pass `tx` to read inside a transaction.
+ */
+export async function findProjectLimits(options: { projectId: string; tx?: Tx | Pick<Db, "specification"> }): Promise<ProjectLimits | null> {
+  const db = options.tx ?? getDb();
+  const specification = await db.specification.findFirst({
+    where: { projectId: options.projectId, isTemplate: false },
+    orderBy: [{ createdAt: "desc" }, { id: "desc" }],
+    select: { id: true, name: true, limits: { orderBy: limitOrder, select: limitSelect } },
+  });
+  if (!specification) return null;
+  const byProperty = new Map<TestProperty, ProjectLimit>(specification.limits.map((limit) => [limit.property, limit]));
+  return {
+    specificationId: specification.id,
+    specificationName: specification.name,
+    limits: specification.limits,
+    get: (property) => byProperty.get(property) ?? null,
+  };
+}

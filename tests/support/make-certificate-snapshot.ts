@@ -1,0 +1,117 @@
+import { conformanceSummary } from "@/lib/results/conformance-summary";
+import { formatResultValue, formatUncertainty } from "@/lib/results/format-result";
+import type { CertificateResultLine, CertificateSnapshot, CertificateTest } from "@/lib/certificates/certificate-snapshot";
+
+/**
+ * Invented certificate snapshots, worded as buildCertificateSnapshot words real ones (lib/results formatting
+ * and conformance) for the document tests, the benchmark and looking at the PDF: an invented
+ * lab and client, 1-3 tests (index flux that conforms, hydraulic conductivity that conforms, and one with a
+ * salt solution that does not), and charts of any length. Deterministic for a given seed.
+ */
+export type SnapshotOptions = { tests?: number; chartPoints?: number; seed?: number; supersedes?: boolean; deviations?: boolean };
+
+function random(seed: number) {
+  let s = seed >>> 0 || 1;
+  return () => {
+    s = (Math.imul(s, 1664525) + 1013904223) >>> 0;
+    return s / 4294967296;
+  };
+}
+
+const HOUR = 3_600_000;
+
+function result(property: string, label: string, value: number, unit: string, uncertainty: number, limit: string): CertificateResultLine {
+  return {
+    property, label, value, unit, display: formatResultValue(value, unit), expandedUncertainty: uncertainty, uncertaintyDisplay: formatUncertainty(uncertainty, unit, { value }),
+    conformance: conformanceSummary({ value, unit }, { limitText: limit, unit, direction: "MAXIMUM", conformanceMethod: "ROUNDING" }),
+  };
+}
+
+const TEMPLATES = [
+  {
+    method: { code: "ASTM D5887", title: "Index flux through saturated GCL specimens, flexible-wall permeameter" },
+    permeant: "de-aired water", flux: 2.4e-9, k: 3.1e-11,
+    results: () => [result("INDEX_FLUX", "Index flux", 2.43e-9, "m3/m2/s", 0.21e-9, "1e-8")],
+  },
+  {
+    method: { code: "ASTM D5084", title: "Hydraulic conductivity, flexible-wall permeameter, method C (falling head, rising tail)" },
+    permeant: "de-aired water", flux: 1.9e-9, k: 2.7e-11,
+    results: () => [result("HYDRAULIC_CONDUCTIVITY", "Hydraulic conductivity at 20 °C", 2.7e-11, "m/s", 0.31e-11, "5e-11")],
+  },
+  {
+    method: { code: "ASTM D6766", title: "Hydraulic properties of GCLs permeated with potentially incompatible liquids" },
+    permeant: "calcium chloride solution, CaCl2, 0.1 mol/L", flux: 6.3e-9, k: 8.7e-11,
+    results: () => [
+      result("HYDRAULIC_CONDUCTIVITY", "Hydraulic conductivity at 20 °C", 8.7e-11, "m/s", 0.92e-11, "5e-11"),
+      result("INDEX_FLUX", "Index flux", 6.3e-9, "m3/m2/s", 0.64e-9, "1e-8"),
+    ],
+  },
+];
+
+export function makeCertificateSnapshot(options: SnapshotOptions = {}): CertificateSnapshot {
+  const rand = random(options.seed ?? 7);
+  const testCount = Math.min(3, Math.max(1, options.tests ?? 2));
+  const points = options.chartPoints ?? 24;
+  const issuedAt = Date.UTC(2026, 11, 14, 9, 30);
+  const receivedAt = issuedAt - 30 * 24 * HOUR;
+  const revision = options.supersedes ? 2 : 1;
+  const code = "7Q4K-2M9X-HT3B";
+
+  const rolls = ["R26-00412", "R26-00413"];
+  const tests: CertificateTest[] = Array.from({ length: testCount }, (_, i) => {
+    const t = TEMPLATES[i]!;
+    const roll = rolls[i % rolls.length]!;
+    const chart = Array.from({ length: points }, (_, n) => {
+      // Flux settles from about twice its final value, with a little scatter, as a hydrating GCL does.
+      const settle = 1 + 1.1 * Math.exp(-n / Math.max(2, points / 8));
+      const scatter = 1 + 0.05 * (rand() - 0.5);
+      return { hours: Math.round((n + 1) * (i === 2 ? 12 : 6) * 10) / 10, flux: t.flux * settle * scatter, k20: t.k * settle * scatter * (1 + 0.01 * (rand() - 0.5)) };
+    });
+    return {
+      runLabNumber: `T26-0009${i + 1}`, specimenLabNumber: `S26-0031${i + 1}`, rollLabNumber: roll,
+      method: t.method,
+      conditions: { effectiveStressKPa: 34.5, headKPa: 14.0 + i * 0.2, permeant: t.permeant, meanTemperatureC: 20.6 - i * 0.4, cell: `CELL-0${i + 1}`, thicknessMm: 5.92 + i * 0.11 },
+      terminatedAt: new Date(issuedAt - (6 - i) * 24 * HOUR).toISOString(),
+      termination: i === 2 ? "ended early: client asked for the result after 18 days" : "termination criteria met",
+      deviations: options.deviations && i === 0 ? ["Permeation paused for 3 h on day 2 (power cut); readings before and after are kept, the pause is excluded from the intervals."] : [],
+      results: t.results(),
+      chart,
+      performedBy: i % 2 ? "Ravi Anand" : "Joana Ferreira", approvedBy: "Mireille Okafor", approvedAt: new Date(issuedAt - (4 - i) * 24 * HOUR).toISOString(),
+    };
+  });
+
+  const custody = (roll: string, n: number) => [
+    { at: new Date(receivedAt).toISOString(), action: "received", item: roll, by: "Tomasz Wilk" },
+    { at: new Date(receivedAt + 2 * HOUR).toISOString(), action: "stored", item: roll, by: "Tomasz Wilk" },
+    { at: new Date(receivedAt + 3 * 24 * HOUR).toISOString(), action: "cut", item: `C26-0020${n}`, by: "Joana Ferreira" },
+    { at: new Date(receivedAt + 3 * 24 * HOUR + HOUR).toISOString(), action: "prepared", item: `S26-0031${n}`, by: "Joana Ferreira" },
+    { at: new Date(receivedAt + 4 * 24 * HOUR).toISOString(), action: "mounted in a cell", item: `S26-0031${n}`, by: "Joana Ferreira" },
+    { at: new Date(receivedAt + 4 * 24 * HOUR + 2 * HOUR).toISOString(), action: "permeation started", item: `S26-0031${n}`, by: "Ravi Anand" },
+    { at: new Date(issuedAt - 6 * 24 * HOUR).toISOString(), action: "tested", item: `S26-0031${n}`, by: "Ravi Anand" },
+  ];
+  const usedRolls = rolls.slice(0, Math.min(rolls.length, testCount));
+
+  return {
+    number: "C26-00017",
+    revision,
+    reason: options.supersedes ? "Client address corrected; the results are unchanged" : "",
+    verificationCode: code,
+    verificationUrl: `https://lab.example.test/verify/${code}`,
+    issuedAt: new Date(issuedAt).toISOString(),
+    lab: { name: "Northfold Geosynthetics Laboratory (invented)", address: "Unit 4, Quarry Lane\nEastmere EM3 8TQ", accreditation: "Accredited to ISO/IEC 17025 (invented accreditation no. 0000)" },
+    client: { name: "Marlow Waste Authority (invented)", address: "12 Harbour Road, Marlow" },
+    project: { code: "MWA-C4", name: "Landfill cell 4 basal liner", siteName: "Hollin Moor landfill", siteLocation: "Cell 4, east bench" },
+    specification: { name: "MWA cell 4 GCL specification, rev. B (GRI-GCL3 limits)" },
+    samples: usedRolls.map((roll, i) => ({
+      rollLabNumber: roll, rollNumber: `GCL-44${71 + i}-A`, lotNumber: `L-2209-${i + 1}`, product: "Needle-punched GCL, sodium bentonite, 4.0 kg/m²",
+      manufacturer: "Invented Mills", shipmentLabNumber: "S26-00031", receivedAt: new Date(receivedAt).toISOString(),
+      custody: tests
+        .filter((t) => t.rollLabNumber === roll)
+        .flatMap((t, j) => custody(roll, Number(t.specimenLabNumber.slice(-1))).slice(j ? 2 : 0))
+        .sort((a, b) => a.at.localeCompare(b.at)),
+    })),
+    tests,
+    signatory: { name: "Mireille Okafor", role: "QA manager", meaning: "Reviewed the results and records and approved this certificate for issue", signedAt: new Date(issuedAt).toISOString() },
+    supersedes: options.supersedes ? { revision: 1, reason: "Client address corrected; the results are unchanged" } : null,
+  };
+}

@@ -1,0 +1,66 @@
+import { createElement } from "react";
+import { renderToStaticMarkup } from "react-dom/server";
+import { describe, expect, it } from "vitest";
+import { CertificateDocument } from "@/components/documents/certificate-document";
+import { CERTIFICATE_CAUTIONS } from "@/lib/certificates/certificate-wording";
+import type { CertificateSnapshot } from "@/lib/certificates/certificate-snapshot";
+import { makeCertificateSnapshot } from "../../support/make-certificate-snapshot";
+
+// The document as static HTML (no browser): what it says, from the snapshot alone. The PDF itself is
+// checked in tests/integration/certificate-document.test.ts.
+const QR = '<svg viewBox="0 0 29 29" data-qr="1"></svg>';
+const html = (snapshot: CertificateSnapshot) => renderToStaticMarkup(createElement(CertificateDocument, { snapshot, qrSvg: QR }));
+const text = (snapshot: CertificateSnapshot) => html(snapshot).replace(/<style[\s\S]*?<\/style>/g, "").replace(/<[^>]+>/g, " ").replace(/&amp;/g, "&").replace(/\s+/g, " ");
+
+describe("certificate document", () => {
+  it("carries the number, revision, issue date, both cautions and the verification code with its 2D code", () => {
+    const s = makeCertificateSnapshot({ tests: 1 });
+    const t = text(s);
+    expect(t).toContain("C26-00017");
+    expect(t).toMatch(/Revision 1 Issued 2026-12-14/);
+    for (const caution of CERTIFICATE_CAUTIONS) expect(t).toContain(caution);
+    expect(t).toContain("7Q4K-2M9X-HT3B");
+    expect(html(s)).toContain('data-qr="1"');
+    expect(t).not.toContain("supersedes");
+  });
+
+  it("shows each test's conditions, results with uncertainty, verdicts with their numbers, and a chart", () => {
+    const s = makeCertificateSnapshot({ tests: 3, chartPoints: 12 });
+    const t = text(s);
+    expect(t).toContain("34.5 kPa");
+    expect(t).toContain("calcium chloride solution, CaCl2, 0.1 mol/L");
+    expect(t).toContain("8.7 × 10⁻¹¹ m/s ± 0.92 × 10⁻¹¹ m/s"); // the unit is not printed twice, nor "(k = 2)" under a heading saying it
+    expect(t).not.toMatch(/m\/s m\/s/);
+    expect(t).toContain("8.7e-11 m/s, rounded to 9e-11 (ASTM E29, half to even), exceeds the maximum of 5e-11 m/s: does not conform.");
+    expect(t).toContain("Compared value 9e-11 m/s Limit maximum 5e-11 m/s");
+    expect(t).toContain("4 results were compared with the specification: 3 conform, 1 does not.");
+    const markup = html(s);
+    expect(markup.match(/data-testid="chart-flux"/g)).toHaveLength(3);
+    expect(markup.match(/<polyline /g)).toHaveLength(6);
+    expect(t).toContain("Flux (×10⁻⁹ m³/m²/s)");
+  });
+
+  it("says a revision supersedes the one before, with the reason, and lists deviations or says none", () => {
+    const t = text(makeCertificateSnapshot({ tests: 2, supersedes: true, deviations: true }));
+    expect(t).toContain("Revision 2 supersedes revision 1: Client address corrected; the results are unchanged.");
+    expect(t).toContain("Permeation paused for 3 h");
+    expect(t).toContain("None.");
+  });
+
+  it("escapes what people typed and copes with no specification, no results and no chart data", () => {
+    const base = makeCertificateSnapshot({ tests: 1 });
+    const s: CertificateSnapshot = {
+      ...base,
+      client: { name: "<script>alert(1)</script> & Co", address: null },
+      specification: null,
+      tests: [{ ...base.tests[0]!, results: [], chart: [] }],
+    };
+    const markup = html(s);
+    expect(markup).not.toContain("<script>alert");
+    expect(markup).toContain("&lt;script&gt;alert(1)&lt;/script&gt; &amp; Co");
+    const t = text(s);
+    expect(t).toContain("None given");
+    expect(t).toContain("No results are reported for this test.");
+    expect(t).toContain("no intervals recorded");
+  });
+});
