@@ -1,3 +1,4 @@
+import Link from "next/link";
 import { formatAge, formatDate } from "@/lib/format/dates";
 import { EQUIPMENT_KIND_LABELS } from "@/lib/format/states";
 import type { HomeQueues } from "@/lib/server/queues/get-home-queues";
@@ -14,7 +15,7 @@ export function StaffQueues({ queues, now }: { queues: HomeQueues; now: Date }) 
             <thead><tr><th>Shipment</th><th>Client / project</th><th>Rolls</th><th>Waiting</th></tr></thead>
             <tbody>
               {queues.shipments.map((s) => (
-                <tr key={s.id}><td className="mono">{s.labNumber}</td><td>{s.clientOrganization.name}<div className="muted">{s.project.name}</div></td><td>{s._count.rolls}</td><td>{formatAge(s.receivedAt, now)}</td></tr>
+                <tr key={s.id}><td><Link className="mono" href={`/intake/shipments/${s.labNumber}`}>{s.labNumber}</Link></td><td>{s.clientOrganization.name}<div className="muted">{s.project.name}</div></td><td>{s._count.rolls}</td><td>{formatAge(s.receivedAt, now)}</td></tr>
               ))}
             </tbody>
           </table>
@@ -26,7 +27,7 @@ export function StaffQueues({ queues, now }: { queues: HomeQueues; now: Date }) 
             <thead><tr><th>Roll</th><th>Project</th><th>State</th></tr></thead>
             <tbody>
               {queues.rollsToCut.map((r) => (
-                <tr key={r.id}><td className="mono">{r.labNumber}<div className="muted">{r.rollNumber}</div></td><td>{r.project.name}</td><td><StateTag state={r.state} /></td></tr>
+                <tr key={r.id}><td><Link className="mono" href={`/samples/rolls/${r.labNumber}`}>{r.labNumber}</Link><div className="muted">{r.rollNumber}</div></td><td>{r.project.name}</td><td><StateTag state={r.state} /></td></tr>
               ))}
             </tbody>
           </table>
@@ -38,7 +39,7 @@ export function StaffQueues({ queues, now }: { queues: HomeQueues; now: Date }) 
             <thead><tr><th>Specimen</th><th>From roll</th><th>Method</th><th>Prepared</th></tr></thead>
             <tbody>
               {queues.specimens.map((s) => (
-                <tr key={s.id}><td className="mono">{s.labNumber}</td><td className="mono">{s.coupon.roll.labNumber}<div className="muted">{s.coupon.roll.project.name}</div></td><td>ASTM {s.intendedMethodCode}</td><td>{formatDate(s.preparedAt)}</td></tr>
+                <tr key={s.id}><td><Link className="mono" href={`/runs/new?specimen=${s.id}`}>{s.labNumber}</Link></td><td className="mono">{s.coupon.roll.labNumber}<div className="muted">{s.coupon.roll.project.name}</div></td><td>ASTM {s.intendedMethodCode}</td><td>{formatDate(s.preparedAt)}</td></tr>
               ))}
             </tbody>
           </table>
@@ -50,7 +51,7 @@ export function StaffQueues({ queues, now }: { queues: HomeQueues; now: Date }) 
             <thead><tr><th>Run</th><th>Cell</th><th>Specimen</th><th>State</th><th>By</th></tr></thead>
             <tbody>
               {queues.runs.map((r) => (
-                <tr key={r.id}><td className="mono">{r.labNumber}<div className="muted">ASTM {r.methodCode}</div></td><td className="mono">{r.cell.assetTag}</td><td className="mono">{r.specimen.labNumber}</td><td><StateTag state={r.state} kind="run" /></td><td>{r.performedBy.name}</td></tr>
+                <tr key={r.id}><td><Link className="mono" href={`/runs/${r.labNumber}`}>{r.labNumber}</Link><div className="muted">ASTM {r.methodCode}</div></td><td className="mono">{r.cell.assetTag}</td><td className="mono">{r.specimen.labNumber}</td><td><StateTag state={r.state} kind="run" /></td><td>{r.performedBy.name}</td></tr>
               ))}
             </tbody>
           </table>
@@ -62,7 +63,7 @@ export function StaffQueues({ queues, now }: { queues: HomeQueues; now: Date }) 
             <thead><tr><th>Run</th><th>Specimen</th><th>Technician</th><th>Waiting</th></tr></thead>
             <tbody>
               {queues.reviews.map((r) => (
-                <tr key={r.id}><td className="mono">{r.labNumber}<div className="muted">ASTM {r.methodCode}</div></td><td className="mono">{r.specimen.labNumber}</td><td>{r.performedBy.name}</td><td>{r.submittedAt ? formatAge(r.submittedAt, now) : "—"}</td></tr>
+                <tr key={r.id}><td><Link className="mono" href={`/review/${r.labNumber}`}>{r.labNumber}</Link><div className="muted">ASTM {r.methodCode}</div></td><td className="mono">{r.specimen.labNumber}</td><td>{r.performedBy.name}</td><td>{r.submittedAt ? formatAge(r.submittedAt, now) : "—"}</td></tr>
               ))}
             </tbody>
           </table>
@@ -74,7 +75,7 @@ export function StaffQueues({ queues, now }: { queues: HomeQueues; now: Date }) 
             <thead><tr><th>Asset</th><th>Kind</th><th>Due</th></tr></thead>
             <tbody>
               {queues.calibrations.map((e) => (
-                <tr key={e.id}><td className="mono">{e.assetTag}</td><td>{EQUIPMENT_KIND_LABELS[e.kind]}</td><td>{e.dueAt && e.dueAt < now ? <span className="state state-bad">overdue {formatDate(e.dueAt)}</span> : formatDate(e.dueAt)}</td></tr>
+                <tr key={e.id}><td><Link className="mono" href={`/equipment/${e.assetTag}`}>{e.assetTag}</Link></td><td>{EQUIPMENT_KIND_LABELS[e.kind]}</td><td>{e.dueAt && e.dueAt < now ? <span className="state state-bad">overdue {formatDate(e.dueAt)}</span> : formatDate(e.dueAt)}</td></tr>
               ))}
             </tbody>
           </table>
