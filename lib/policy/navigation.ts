@@ -6,6 +6,7 @@ export type NavItem = { href: string; label: string; section: "Work" | "Lab" | "
 const NAV_ITEMS: NavItem[] = [
   { href: "/", label: "Today", section: "Work", action: "workspace.view" },
   { href: "/portal", label: "Our projects", section: "Work", action: "portal.view" },
+  { href: "/portal/certificates", label: "Certificates", section: "Work", action: "portal.view" },
   { href: "/intake", label: "Intake", section: "Work", action: "shipment.view" },
   { href: "/samples", label: "Samples", section: "Work", action: "sample.view" },
   { href: "/labels", label: "Labels", section: "Work", action: "sample.view" },
@@ -14,6 +15,7 @@ const NAV_ITEMS: NavItem[] = [
   { href: "/review", label: "Review", section: "Work", action: "run.review" },
   { href: "/certificates", label: "Certificates", section: "Work", action: "certificate.view" },
   { href: "/equipment", label: "Equipment", section: "Lab", action: "equipment.view" },
+  { href: "/specifications", label: "Specifications", section: "Lab", action: "certificate.view" },
   { href: "/admin/users", label: "People", section: "Lab", action: "user.manage" },
   { href: "/admin/audit", label: "Audit trail", section: "Lab", action: "audit.view" },
   { href: "/account", label: "My account", section: "Account", action: "account.self" },

@@ -19,6 +19,9 @@ const ROUTE_ACTIONS: ReadonlyArray<readonly [prefix: string, action: Action]> = 
   ["/equipment/new", "equipment.manage"],
   ["/review", "run.review"],
   ["/certificates", "certificate.view"],
+  ["/specifications", "certificate.view"],
+  ["/specifications/new", "specification.manage"],
+  ["/certificates/new", "certificate.issue"],
   ["/portal", "portal.view"],
   ["/account", "account.self"],
 ];

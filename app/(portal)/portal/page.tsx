@@ -1,3 +1,4 @@
+import Link from "next/link";
 import { QueueCard } from "@/components/ui/queue-card";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getHomeQueues } from "@/lib/server/queues/get-home-queues";
@@ -17,7 +18,7 @@ export default async function PortalHomePage() {
           <thead><tr><th>Project</th><th>Site</th><th>Rolls received</th><th>In testing</th><th>Tested</th></tr></thead>
           <tbody>
             {list.map((p) => (
-              <tr key={p.id}><td>{p.name}<div className="muted mono">{p.code}</div></td><td>{p.siteName}</td><td>{p.rollCount}</td><td>{p.rollsUnderTest}</td><td>{p.rollsTested}</td></tr>
+              <tr key={p.id}><td><Link href={`/portal/projects/${encodeURIComponent(p.code)}`}>{p.name}</Link><div className="muted mono">{p.code}</div></td><td>{p.siteName}</td><td>{p.rollCount}</td><td>{p.rollsUnderTest}</td><td>{p.rollsTested}</td></tr>
             ))}
           </tbody>
         </table>

@@ -38,7 +38,7 @@ describe("permission matrix", () => {
 describe("navigation and page addresses", () => {
   it("shows each role only the places it may open", () => {
     for (const role of ROLES) for (const item of navigationFor(role)) expect(can(role, item.action)).toBe(true);
-    expect(navigationFor("CLIENT_USER").map((i) => i.href)).toEqual(["/portal", "/account"]);
+    expect(navigationFor("CLIENT_USER").map((i) => i.href)).toEqual(["/portal", "/portal/certificates", "/account"]);
     expect(navigationFor("TECHNICIAN").map((i) => i.href)).not.toContain("/admin/users");
   });
 

@@ -1,0 +1,51 @@
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { CertificateTable } from "@/components/portal/certificate-table";
+import { ProjectRolls } from "@/components/portal/project-rolls";
+import { ProjectShipments } from "@/components/portal/project-shipments";
+import { isAppError } from "@/lib/errors/app-error";
+import { requirePageUser } from "@/lib/server/auth/require-page-user";
+import { getPortalProject } from "@/lib/server/portal/get-portal-project";
+
+type Props = { params: Promise<{ code: string }> };
+
+export const metadata = { title: "Project" };
+
+export default async function PortalProjectPage({ params }: Props) {
+  const actor = await requirePageUser("portal.view");
+  const { code } = await params;
+  // Another organisation's project is not found, exactly like one that does not exist.
+  const project = await getPortalProject({ actor, projectCode: code }).catch((error) => {
+    if (isAppError(error) && error.code === "NOT_FOUND") notFound();
+    throw error;
+  });
+  return (
+    <>
+      <div className="page-head">
+        <div>
+          <p className="muted"><Link href="/portal">Our projects</Link> /</p>
+          <h1 data-testid="project-name">{project.name}</h1>
+          <p className="muted"><span className="mono">{project.code}</span> · {project.siteName}{project.siteLocation ? `, ${project.siteLocation}` : ""}</p>
+        </div>
+      </div>
+      <div className="stack-gap">
+        <section className="card">
+          <h2>Rolls <span className="count">{project.rolls.length}</span></h2>
+          <ProjectRolls rolls={project.rolls} />
+        </section>
+        <section className="card">
+          <h2>Certificates <span className="count">{project.certificates.length === 0 ? "none yet" : project.certificates.length}</span></h2>
+          {project.certificates.length === 0 ? (
+            <p className="empty">No certificate has been issued for this project yet.</p>
+          ) : (
+            <CertificateTable certificates={project.certificates} />
+          )}
+        </section>
+        <section className="card">
+          <h2>Shipments received <span className="count">{project.shipments.length}</span></h2>
+          <ProjectShipments shipments={project.shipments} />
+        </section>
+      </div>
+    </>
+  );
+}
