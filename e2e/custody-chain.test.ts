@@ -111,8 +111,8 @@ describe.skipIf(!browserAvailable())("chain of custody from the door to specimen
     await tech.waitForFunction((n) => location.pathname === `/samples/specimens/${n}`, {}, specimenNumbers[1]);
 
     // --- An illegal transition is refused with what is allowed: moving a specimen that is under test.
-    await tech.goto(`${baseUrl()}/`);
-    const underTest = (await textOf(tech, '[data-testid="queue-runs"]')).match(LAB_NUMBER("P"))![0];
+    await tech.goto(`${baseUrl()}/samples/specimens?state=UNDER_TEST`);
+    const underTest = (await textOf(tech, '[data-testid="specimen-list"]')).match(LAB_NUMBER("P"))![0];
     await tech.goto(`${baseUrl()}/samples/specimens/${underTest}`);
     await chooseByLabel(tech, "Move to", "RACK-A1");
     await tech.click("button::-p-text(Move)");
