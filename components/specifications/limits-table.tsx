@@ -1,18 +1,10 @@
 import { formatUnit } from "@/lib/results/format-result";
-import { TEST_PROPERTY_LABELS, type TestProperty } from "@/lib/results/property-units";
+import { TEST_PROPERTY_LABELS, type SpecificationLimitRow } from "@/lib/results/property-units";
 import { CONFORMANCE_METHOD_LABELS, LIMIT_DIRECTION_LABELS } from "@/lib/validation/specifications";
 import styles from "./specifications.module.css";
 
-export type LimitRow = {
-  id: string;
-  property: TestProperty;
-  limitText: string;
-  unit: string;
-  direction: "MAXIMUM" | "MINIMUM";
-  significantDigits: number;
-  conformanceMethod: "ABSOLUTE" | "ROUNDING";
-  testMethodCode: string | null;
-};
+export type { SpecificationLimitRow as LimitRow } from "@/lib/results/property-units";
+type LimitRow = SpecificationLimitRow;
 
 /** A specification's limits: the limit as written, its unit, direction, digits and how conformance is judged. */
 export function LimitsTable({ limits, testId }: { limits: LimitRow[]; testId?: string }) {

@@ -77,3 +77,15 @@ export function convertUnit(value: number | string, from: string, to: string): s
   const v = new D(typeof value === "number" ? String(value) : value);
   return a === b ? v.toString() : v.times(UNITS[a]!.factor).div(UNITS[b]!.factor).toString();
 }
+
+/** One limit of a specification as stored: the limit exactly as written, its unit, direction and digits. */
+export type SpecificationLimitRow = {
+  id: string;
+  property: TestProperty;
+  limitText: string;
+  unit: string;
+  direction: "MAXIMUM" | "MINIMUM";
+  significantDigits: number;
+  conformanceMethod: "ABSOLUTE" | "ROUNDING";
+  testMethodCode: string | null;
+};

@@ -2,6 +2,7 @@ import "server-only";
 import { transition, type CustodyActionName, type ItemKind, type ItemStateName } from "@/lib/custody/state-machine";
 import { AppError } from "@/lib/errors/app-error";
 import type { Actor, Tx } from "../db/transaction";
+import { CUSTODY_ITEM_FIELD } from "./item-fields";
 
 type ItemRow = { id: string; labNumber: string; state: ItemStateName; version: number; storageLocationId: string | null };
 
@@ -18,8 +19,6 @@ async function updateItem(tx: Tx, kind: ItemKind, id: string, version: number, d
   if (kind === "coupon") return tx.coupon.updateMany(args);
   return tx.specimen.updateMany(args);
 }
-
-const ITEM_FIELD: Record<ItemKind, "rollId" | "couponId" | "specimenId"> = { roll: "rollId", coupon: "couponId", specimen: "specimenId" };
 
 /**
  * Applies one custody action to a roll, coupon or specimen inside the caller's transaction: asks the
@@ -58,7 +57,7 @@ export async function applyCustodyAction(
   await tx.custodyEvent.create({
     data: {
       action: options.action,
-      [ITEM_FIELD[options.kind]]: item.id,
+      [CUSTODY_ITEM_FIELD[options.kind]]: item.id,
       fromState: item.state,
       toState: step.toState,
       fromLocationId: item.storageLocationId,

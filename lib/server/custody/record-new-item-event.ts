@@ -1,8 +1,7 @@
 import "server-only";
 import type { CustodyActionName, ItemKind, ItemStateName } from "@/lib/custody/state-machine";
 import type { Actor, Tx } from "../db/transaction";
-
-const ITEM_FIELD: Record<ItemKind, "rollId" | "couponId" | "specimenId"> = { roll: "rollId", coupon: "couponId", specimen: "specimenId" };
+import { CUSTODY_ITEM_FIELD } from "./item-fields";
 
 /** The first custody event of an item just created (received, cut or prepared): no from-state. */
 export async function recordNewItemEvent(
@@ -12,7 +11,7 @@ export async function recordNewItemEvent(
   await tx.custodyEvent.create({
     data: {
       action: options.action,
-      [ITEM_FIELD[options.kind]]: options.id,
+      [CUSTODY_ITEM_FIELD[options.kind]]: options.id,
       toState: options.state,
       toLocationId: options.locationId,
       actorId: options.actor.id,

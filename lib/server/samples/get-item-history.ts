@@ -3,17 +3,16 @@ import type { ItemKind } from "@/lib/custody/state-machine";
 import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
 import { getDb } from "../db/client";
+import { CUSTODY_ITEM_FIELD } from "../custody/item-fields";
 
 const ENTITY: Record<ItemKind, string> = { roll: "Roll", coupon: "Coupon", specimen: "Specimen" };
-const ITEM_FIELD: Record<ItemKind, "rollId" | "couponId" | "specimenId"> = { roll: "rollId", coupon: "couponId", specimen: "specimenId" };
-
 /** An item's custody ledger (oldest first) and its corrections, each with the person's name. */
 export async function getItemHistory(options: { actor: CurrentUser; kind: ItemKind; id: string }) {
   requirePermission(options.actor, "sample.view");
   const db = getDb();
   const [events, corrections] = await Promise.all([
     db.custodyEvent.findMany({
-      where: { [ITEM_FIELD[options.kind]]: options.id },
+      where: { [CUSTODY_ITEM_FIELD[options.kind]]: options.id },
       orderBy: [{ occurredAt: "asc" }, { id: "asc" }],
       select: {
         id: true, action: true, fromState: true, toState: true, occurredAt: true, note: true,

@@ -1,19 +1,10 @@
 import "server-only";
-import type { TestProperty } from "@/lib/results/property-units";
+import type { SpecificationLimitRow, TestProperty } from "@/lib/results/property-units";
 import { getDb, type Db } from "../db/client";
 import type { Tx } from "../db/transaction";
 import { limitOrder, limitSelect } from "./limit-select";
 
-export type ProjectLimit = {
-  id: string;
-  property: TestProperty;
-  limitText: string;
-  unit: string;
-  direction: "MAXIMUM" | "MINIMUM";
-  significantDigits: number;
-  conformanceMethod: "ABSOLUTE" | "ROUNDING";
-  testMethodCode: string | null;
-};
+export type ProjectLimit = SpecificationLimitRow;
 
 export type ProjectLimits = {
   specificationId: string;
