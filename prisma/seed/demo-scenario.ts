@@ -149,6 +149,7 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
 
   const approvedRun = await makeRun(certifiedSpecimen.id, "CELL-01", users.technician!, 18, "APPROVED", 12);
   await tx.run.update({ where: { id: approvedRun.id }, data: { terminatedAt: ago(12), terminationKind: "CRITERIA_MET", postTestThicknessMm: 5.9, postTestMassG: 71.3, postTestObservations: "Uniform hydration; no channels seen on the cut section.", submittedAt: ago(12) } });
+  await tx.runStage.updateMany({ where: { runId: approvedRun.id, kind: "PERMEATION" }, data: { endedAt: ago(12) } });
   await tx.review.create({ data: { runId: approvedRun.id, reviewerId: users.qa!, decision: "APPROVED", comments: "Criteria met; checklist complete.", createdAt: ago(11) } });
   const result = await tx.result.create({ data: { runId: approvedRun.id, property: "INDEX_FLUX", value: 2.4e-9, unit: "m3/m2/s", expandedUncertainty: 0.2e-9, temperatureC: 20.6, unitWeightBasis: "conventional 9.81 kN/m3", approvedById: users.qa!, approvedAt: ago(11) } });
   const certificate = await tx.certificate.create({ data: { number: await allocateLabNumber(tx, "certificate", ago(10)), projectId: projects["MWA-C4"]!, clientOrganizationId: orgs.MWA! } });
@@ -159,9 +160,11 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
 
   const submittedRun = await makeRun(reviewSpecimen.id, "CELL-02", users.technician2!, 11, "SUBMITTED", 12);
   await tx.run.update({ where: { id: submittedRun.id }, data: { terminatedAt: ago(5), terminationKind: "CRITERIA_MET", postTestThicknessMm: 6.1, postTestMassG: 70.8, postTestObservations: "Even swelling.", submittedAt: ago(4) } });
+  await tx.runStage.updateMany({ where: { runId: submittedRun.id, kind: "PERMEATION" }, data: { endedAt: ago(5) } });
   // A second run of the same roll waits for review too, so QA has one to return and one to approve.
   const secondSubmittedRun = await makeRun(secondReviewSpecimen.id, "CELL-05", users.technician!, 11, "SUBMITTED", 12);
   await tx.run.update({ where: { id: secondSubmittedRun.id }, data: { terminatedAt: ago(5), terminationKind: "CRITERIA_MET", postTestThicknessMm: 6.0, postTestMassG: 71.0, postTestObservations: "Even swelling; no channels.", submittedAt: ago(4) } });
+  await tx.runStage.updateMany({ where: { runId: secondSubmittedRun.id, kind: "PERMEATION" }, data: { endedAt: ago(5) } });
 
   await makeRun(testingSpecimen.id, "CELL-03", users.technician!, 5, "PERMEATING", 7);
 }

@@ -39,7 +39,7 @@ export default async function CertificatePage({ params }: Props) {
             </ul>
             {r.issuedAt && (
               <p className="muted">
-                Issued {formatDateTime(r.issuedAt)} · signed by {r.signatures.map((s) => `${s.signer.name} (${s.meaning})`).join(", ")} · verification code <span className="mono" data-testid={`revision-${r.revision}-code`}>{r.verificationCode}</span> · SHA-256 <span className="mono">{r.pdfSha256?.slice(0, 16)}…</span>
+                Issued {formatDateTime(r.issuedAt)} · signed by {r.signatures.map((s) => `${s.signer.name} (${s.meaning})`).join(", ")} · verification code <span className="mono" data-testid={`revision-${r.revision}-code`}>{r.verificationCode}</span> · {r.pdfSha256 ? <>SHA-256 <span className="mono" title={r.pdfSha256}>{r.pdfSha256.slice(0, 16)}…</span></> : "no PDF stored (a demo record; issue a new revision to produce one)"}
               </p>
             )}
             {r.status !== "DRAFT" && r.pdfSha256 && <p><a className="button button-quiet" href={`/api/certificates/${certificate.number}/pdf?revision=${r.revision}`} data-testid={`revision-${r.revision}-pdf`}>Download PDF</a> <a href={`/verify/${r.verificationCode}`}>Verification page</a></p>}
