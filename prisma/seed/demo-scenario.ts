@@ -71,7 +71,7 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
     return created;
   };
 
-  const s1 = await ship("MWA-C4", "MWA", 21, true, "Carrier: Dunmore Haulage (invented), driver signed", "Three rolls, wrapped, one corner of the outer film torn; liner undamaged.");
+  const s1 = await ship("MWA-C4", "MWA", 21, true, "Carrier: Quernbeck Haulage (invented), driver signed", "Three rolls, wrapped, one corner of the outer film torn; liner undamaged.");
   const certifiedRoll = await roll(s1, 1, "TESTED", "RETAIN-1");
   const reviewRoll = await roll(s1, 2, "UNDER_TEST", "HUMID-1");
   const testingRoll = await roll(s1, 3, "UNDER_TEST", "HUMID-1");
@@ -175,7 +175,7 @@ async function createEquipment(tx: Tx, adminId: string, now: Date): Promise<Ids>
     const eq = await tx.equipment.create({ data: { assetTag, kind, name, serialNumber: `SN-${assetTag}`, ratedMaxPressurePa } });
     const calibratedAt = new Date(now.getTime() - calibratedDaysAgo * DAY);
     const cal = await tx.calibration.create({
-      data: { equipmentId: eq.id, calibratedAt, dueAt: new Date(calibratedAt.getTime() + 365 * DAY), reference: `CAL-${assetTag}-${calibratedAt.getUTCFullYear()}`, performedBy: "Brightwell Metrology (invented)", values, recordedById: adminId },
+      data: { equipmentId: eq.id, calibratedAt, dueAt: new Date(calibratedAt.getTime() + 365 * DAY), reference: `CAL-${assetTag}-${calibratedAt.getUTCFullYear()}`, performedBy: "Haldrow Metrology (invented)", values, recordedById: adminId },
     });
     ids[assetTag] = eq.id;
     ids[`${assetTag}:cal`] = cal.id;

@@ -76,18 +76,18 @@ export function makeCertificateSnapshot(options: SnapshotOptions = {}): Certific
       deviations: options.deviations && i === 0 ? ["Permeation paused for 3 h on day 2 (power cut); readings before and after are kept, the pause is excluded from the intervals."] : [],
       results: t.results(),
       chart,
-      performedBy: i % 2 ? "Ravi Anand" : "Joana Ferreira", approvedBy: "Mireille Okafor", approvedAt: new Date(issuedAt - (4 - i) * 24 * HOUR).toISOString(),
+      performedBy: i % 2 ? "Tamsin Okerlund" : "Quenby Ardlow", approvedBy: "Ottilie Brannagh", approvedAt: new Date(issuedAt - (4 - i) * 24 * HOUR).toISOString(),
     };
   });
 
   const custody = (roll: string, n: number) => [
-    { at: new Date(receivedAt).toISOString(), action: "received", item: roll, by: "Tomasz Wilk" },
-    { at: new Date(receivedAt + 2 * HOUR).toISOString(), action: "stored", item: roll, by: "Tomasz Wilk" },
-    { at: new Date(receivedAt + 3 * 24 * HOUR).toISOString(), action: "cut", item: `C26-0020${n}`, by: "Joana Ferreira" },
-    { at: new Date(receivedAt + 3 * 24 * HOUR + HOUR).toISOString(), action: "prepared", item: `S26-0031${n}`, by: "Joana Ferreira" },
-    { at: new Date(receivedAt + 4 * 24 * HOUR).toISOString(), action: "mounted in a cell", item: `S26-0031${n}`, by: "Joana Ferreira" },
-    { at: new Date(receivedAt + 4 * 24 * HOUR + 2 * HOUR).toISOString(), action: "permeation started", item: `S26-0031${n}`, by: "Ravi Anand" },
-    { at: new Date(issuedAt - 6 * 24 * HOUR).toISOString(), action: "tested", item: `S26-0031${n}`, by: "Ravi Anand" },
+    { at: new Date(receivedAt).toISOString(), action: "received", item: roll, by: "Edvin Harrowgill" },
+    { at: new Date(receivedAt + 2 * HOUR).toISOString(), action: "stored", item: roll, by: "Edvin Harrowgill" },
+    { at: new Date(receivedAt + 3 * 24 * HOUR).toISOString(), action: "cut", item: `C26-0020${n}`, by: "Quenby Ardlow" },
+    { at: new Date(receivedAt + 3 * 24 * HOUR + HOUR).toISOString(), action: "prepared", item: `S26-0031${n}`, by: "Quenby Ardlow" },
+    { at: new Date(receivedAt + 4 * 24 * HOUR).toISOString(), action: "mounted in a cell", item: `S26-0031${n}`, by: "Quenby Ardlow" },
+    { at: new Date(receivedAt + 4 * 24 * HOUR + 2 * HOUR).toISOString(), action: "permeation started", item: `S26-0031${n}`, by: "Tamsin Okerlund" },
+    { at: new Date(issuedAt - 6 * 24 * HOUR).toISOString(), action: "tested", item: `S26-0031${n}`, by: "Tamsin Okerlund" },
   ];
   const usedRolls = rolls.slice(0, Math.min(rolls.length, testCount));
 
@@ -98,9 +98,9 @@ export function makeCertificateSnapshot(options: SnapshotOptions = {}): Certific
     verificationCode: code,
     verificationUrl: `https://lab.example.test/verify/${code}`,
     issuedAt: new Date(issuedAt).toISOString(),
-    lab: { name: "Northfold Geosynthetics Laboratory (invented)", address: "Unit 4, Quarry Lane\nEastmere EM3 8TQ", accreditation: "Accredited to ISO/IEC 17025 (invented accreditation no. 0000)" },
-    client: { name: "Marlow Waste Authority (invented)", address: "12 Harbour Road, Marlow" },
-    project: { code: "MWA-C4", name: "Landfill cell 4 basal liner", siteName: "Hollin Moor landfill", siteLocation: "Cell 4, east bench" },
+    lab: { name: "Quillfen Liner Laboratory (invented)", address: "Unit 4, Quarry Lane\nTarnwick TW7 0QL", accreditation: "Accredited to ISO/IEC 17025 (invented accreditation no. 0000)" },
+    client: { name: "Marrowdale Waste Authority (invented)", address: "12 Tipyard Road, Marrowdale" },
+    project: { code: "MWA-C4", name: "Landfill cell 4 basal liner", siteName: "Marrowdale Tip", siteLocation: "Cell 4, east bench" },
     specification: { name: "MWA cell 4 GCL specification, rev. B (GRI-GCL3 limits)" },
     samples: usedRolls.map((roll, i) => ({
       rollLabNumber: roll, rollNumber: `GCL-44${71 + i}-A`, lotNumber: `L-2209-${i + 1}`, product: "Needle-punched GCL, sodium bentonite, 4.0 kg/m²",
@@ -111,7 +111,7 @@ export function makeCertificateSnapshot(options: SnapshotOptions = {}): Certific
         .sort((a, b) => a.at.localeCompare(b.at)),
     })),
     tests,
-    signatory: { name: "Mireille Okafor", role: "QA manager", meaning: "Reviewed the results and records and approved this certificate for issue", signedAt: new Date(issuedAt).toISOString() },
+    signatory: { name: "Ottilie Brannagh", role: "QA manager", meaning: "Reviewed the results and records and approved this certificate for issue", signedAt: new Date(issuedAt).toISOString() },
     supersedes: options.supersedes ? { revision: 1, reason: "Client address corrected; the results are unchanged" } : null,
   };
 }
