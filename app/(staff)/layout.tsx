@@ -1,6 +1,7 @@
 import { headers } from "next/headers";
 import { forbidden, redirect } from "next/navigation";
 import { AppShell } from "@/components/shell/app-shell";
+import { isStaffRole } from "@/lib/policy/permissions";
 import { getCurrentUser } from "@/lib/server/auth/current-user";
 import { getLabName } from "@/lib/server/lab/get-lab-name";
 
@@ -10,7 +11,7 @@ export const dynamic = "force-dynamic";
 export default async function StaffLayout({ children }: { children: React.ReactNode }) {
   const user = await getCurrentUser();
   if (!user) redirect("/sign-in");
-  if (user.role === "CLIENT_USER") {
+  if (!isStaffRole(user.role)) {
     // A client's start page is the portal; any other lab page is refused with the 403 page.
     if (((await headers()).get("x-seepline-path") ?? "/") === "/") redirect("/portal");
     forbidden();

@@ -1,5 +1,5 @@
 import { formatDateTime } from "@/lib/format/dates";
-import { formatPressure } from "@/lib/format/pressure";
+import { formatPressure } from "@/lib/units/pressure-entry";
 
 type Stage = { id: string; sequence: number; kind: string; cellPressurePa: number; influentPressurePa: number; effluentPressurePa: number; startedAt: Date; endedAt: Date | null; marginAcknowledged: boolean; recordedBy: { name: string } };
 const KIND: Record<string, string> = { SATURATION: "Saturation", BACK_PRESSURE: "Back-pressure", EQUILIBRATION: "Equilibration", PERMEATION: "Permeation" };

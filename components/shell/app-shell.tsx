@@ -1,5 +1,5 @@
 import { navigationFor } from "@/lib/policy/navigation";
-import { ROLE_LABELS } from "@/lib/policy/permissions";
+import { isStaffRole, ROLE_LABELS } from "@/lib/policy/permissions";
 import type { CurrentUser } from "@/lib/server/auth/current-user";
 import { LabNumberSearch } from "./lab-number-search";
 import { NavLinks } from "./nav-links";
@@ -19,7 +19,7 @@ export function AppShell({ user, labName, children }: { user: CurrentUser; labNa
       </aside>
       <main className="shell-main">
         <div className="topline">
-          {user.role !== "CLIENT_USER" ? <LabNumberSearch /> : <div />}
+          {isStaffRole(user.role) ? <LabNumberSearch /> : <div />}
           <div className="who">
             <span data-testid="signed-in-as">{user.name}</span>
             <span className="role-tag">{ROLE_LABELS[user.role]}</span>

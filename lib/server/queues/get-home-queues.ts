@@ -43,10 +43,10 @@ async function findSpecimensWaiting() {
   });
 }
 
-/** Runs not yet submitted; a technician sees their own, everyone else sees all. */
+/** Runs not yet submitted; those who operate runs see their own (as on the runs page), everyone else sees all. */
 async function findRunsInProgress(actor: CurrentUser) {
   return getDb().run.findMany({
-    where: { state: { in: [...ACTIVE_RUN_STATES] }, ...(actor.role === "TECHNICIAN" ? { performedById: actor.id } : {}) },
+    where: { state: { in: [...ACTIVE_RUN_STATES] }, ...(can(actor.role, "run.operate") ? { performedById: actor.id } : {}) },
     orderBy: { assignedAt: "asc" },
     take: LIMIT,
     select: {

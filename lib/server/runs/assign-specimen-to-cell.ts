@@ -24,20 +24,20 @@ export async function assignSpecimenToCell(options: { actor: CurrentUser; input:
   const input = parseOrThrow(assignSpecimenSchema, options.input);
   const now = options.now ?? new Date();
   return withActor(options.actor, async (tx) => {
-    const roles: Array<[id: string | undefined, role: string, kind: string]> = [
-      [input.cellId, "permeameter cell", "PERMEAMETER_CELL"],
-      [input.burettePanelId, "burette panel", "BURETTE_PANEL"],
-      [input.transducerId, "pressure transducer", "PRESSURE_TRANSDUCER"],
-      [input.thermometerId, "thermometer", "THERMOMETER"],
+    const roles: Array<[id: string | undefined, role: string, kind: string, field: string]> = [
+      [input.cellId, "permeameter cell", "PERMEAMETER_CELL", "cellId"],
+      [input.burettePanelId, "burette panel", "BURETTE_PANEL", "burettePanelId"],
+      [input.transducerId, "pressure transducer", "PRESSURE_TRANSDUCER", "transducerId"],
+      [input.thermometerId, "thermometer", "THERMOMETER", "thermometerId"],
     ];
-    const used = roles.filter((r): r is [string, string, string] => !!r[0]);
+    const used = roles.filter((r): r is [string, string, string, string] => !!r[0]);
     const statuses = await findEquipmentStatuses({ ids: used.map((r) => r[0]), now, tx });
 
     const refusals: string[] = [];
     let override: { reason: string; grantedById: string } | null = null;
-    for (const [id, role, kind] of used) {
+    for (const [id, role, kind, field] of used) {
       const status = statuses.get(id);
-      if (!status || status.kind !== kind) throw new AppError("INVALID_INPUT", `Choose a ${role}.`, { fieldErrors: { [role === "permeameter cell" ? "cellId" : role === "burette panel" ? "burettePanelId" : role === "thermometer" ? "thermometerId" : "transducerId"]: `Not a ${role}.` } });
+      if (!status || status.kind !== kind) throw new AppError("INVALID_INPUT", `Choose a ${role}.`, { fieldErrors: { [field]: `Not a ${role}.` } });
       if (status.status.usable) continue;
       const granted = status.status.state === "out-of-service" ? null : await tx.calibrationOverride.findFirst({ where: { equipmentId: id, validUntil: { gt: now } }, orderBy: { createdAt: "desc" } });
       if (granted) override = { reason: `${status.assetTag}: ${granted.reason}`, grantedById: granted.grantedById };

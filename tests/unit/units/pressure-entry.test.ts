@@ -1,7 +1,6 @@
 import fc from "fast-check";
 import { unit } from "mathjs";
 import { describe, expect, it } from "vitest";
-import { formatPressure as legacyFormatPressure } from "../../../lib/format/pressure";
 import { PSI_PA } from "../../../lib/hydraulics/units";
 import { enteredPressureToPa, formatPressure, formatPressureNumber, paPerUnit, paToEnteredPressure } from "../../../lib/units/pressure-entry";
 
@@ -61,9 +60,5 @@ describe("formatPressure", () => {
     expect(formatPressure(enteredPressureToPa(5, "PSI"), "PSI", { decimals: 2 })).toBe("5.00 psi");
     expect(formatPressureNumber(-1, "KPA")).toBe("0");
     expect(formatPressureNumber(-0.01, "PSI", { decimals: 2 })).toBe("0.00");
-  });
-
-  it("is the same function the older lib/format/pressure import gives", () => {
-    expect(legacyFormatPressure).toBe(formatPressure);
   });
 });

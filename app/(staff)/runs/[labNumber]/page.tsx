@@ -11,7 +11,7 @@ import { ReadingsPanel } from "@/components/readings/readings-panel";
 import { StateTag } from "@/components/ui/state-tag";
 import { isAppError } from "@/lib/errors/app-error";
 import { formatDateTime } from "@/lib/format/dates";
-import { formatPressure } from "@/lib/format/pressure";
+import { formatPressure } from "@/lib/units/pressure-entry";
 import { toChartPoints } from "@/lib/runs/chart-points";
 import { allowedRunSteps, type RunStateName } from "@/lib/runs/run-state-machine";
 import { can } from "@/lib/policy/permissions";
