@@ -2,15 +2,14 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { signIn } from "next-auth/react";
-import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { signInSchema, type SignInInput } from "@/lib/validation/account";
 import { Field } from "@/components/ui/field";
 
 export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
-  const router = useRouter();
   const [failure, setFailure] = useState<string | null>(null);
+  const [leaving, setLeaving] = useState(false);
   const { register, handleSubmit, formState } = useForm<SignInInput>({ resolver: zodResolver(signInSchema) });
 
   const onSubmit = handleSubmit(async (values) => {
@@ -20,8 +19,11 @@ export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
       setFailure(result?.error && result.error !== "CredentialsSignin" ? result.error : "That e-mail and password do not match an active account.");
       return;
     }
-    router.replace(callbackUrl);
-    router.refresh();
+    // A full page load, not a client-side transition: the router still holds what the server answered while
+    // signed out (the prefetched "/" redirecting to this page), and following that loops back here with a
+    // blank page. A fresh document request carries the new session cookie to every server component.
+    setLeaving(true);
+    window.location.assign(callbackUrl);
   });
 
   return (
@@ -33,8 +35,8 @@ export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
       <Field label="Password" error={formState.errors.password?.message}>
         <input type="password" autoComplete="current-password" {...register("password")} />
       </Field>
-      <button className="button" type="submit" disabled={formState.isSubmitting}>
-        {formState.isSubmitting ? "Signing in…" : "Sign in"}
+      <button className="button" type="submit" disabled={formState.isSubmitting || leaving}>
+        {formState.isSubmitting || leaving ? "Signing in…" : "Sign in"}
       </button>
     </form>
   );

@@ -2,8 +2,8 @@
 export function DocumentFrame({ title, children }: { title: string; children: React.ReactNode }) {
   return (
     <html lang="en">
-      {/* A standalone page rendered to static HTML for Chromium, not a Next.js page: a plain <head> is right. */}
-      {/* eslint-disable-next-line @next/next/no-head-element */}
+      {/* A standalone page rendered to static HTML for Chromium, not a Next.js page: a plain <head> is right
+          (eslint.config.mjs turns off the rule against <head> for components/documents). */}
       <head>
         <meta charSet="utf-8" />
         <title>{title}</title>
