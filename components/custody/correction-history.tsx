@@ -3,7 +3,7 @@ import { formatDateTime } from "@/lib/format/dates";
 type CorrectionRow = { id: string; field: string; oldValue: string; newValue: string; reason: string; createdAt: Date; actor: { name: string }; itemLabel?: string };
 
 /** Changes made after the record was first saved: the old value stays visible beside the new one. */
-export function CorrectionHistory({ corrections }: { corrections: CorrectionRow[] }) {
+export function CorrectionHistory({ corrections, zone = "UTC" }: { corrections: CorrectionRow[]; zone?: string }) {
   if (corrections.length === 0) return <p className="empty">No correction has been made.</p>;
   return (
     <div className="table-wrap">
@@ -12,7 +12,7 @@ export function CorrectionHistory({ corrections }: { corrections: CorrectionRow[
         <tbody>
           {corrections.map((c) => (
             <tr key={c.id}>
-              <td>{formatDateTime(c.createdAt)}</td><td>{c.actor.name}</td><td>{c.itemLabel ? `${c.itemLabel} · ` : ""}{c.field}</td>
+              <td>{formatDateTime(c.createdAt, zone)}</td><td>{c.actor.name}</td><td>{c.itemLabel ? `${c.itemLabel} · ` : ""}{c.field}</td>
               <td><del>{c.oldValue || "—"}</del></td><td>{c.newValue || "—"}</td><td>{c.reason}</td>
             </tr>
           ))}

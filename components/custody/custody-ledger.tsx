@@ -8,13 +8,13 @@ type Event = {
 
 const ACTION_LABELS: Record<string, string> = {
   RECEIVED: "Received", STORED: "Stored", MOVED: "Moved", CUT: "Cut", PREPARED: "Prepared", ASSIGNED: "Assigned to a cell",
-  TEST_STARTED: "Test started", TESTED: "Tested", RETAINED: "Retained", DISPOSED: "Disposed of", CORRECTED: "Corrected",
+  TEST_STARTED: "Test started", TESTED: "Tested", RETAINED: "Retained", DISPOSED: "Disposed of", CORRECTED: "Corrected", WITHDRAWN: "Taken out of its cell",
 };
 
 const state = (s: string | null) => (s ? (ITEM_STATE_LABELS[s] ?? s) : "—");
 
 /** Every custody event of one item: what, who, when, where, and from which state to which. */
-export function CustodyLedger({ events }: { events: Event[] }) {
+export function CustodyLedger({ events, zone = "UTC" }: { events: Event[]; zone?: string }) {
   if (events.length === 0) return <p className="empty">No custody event recorded.</p>;
   return (
     <div className="table-wrap">
@@ -23,7 +23,7 @@ export function CustodyLedger({ events }: { events: Event[] }) {
         <tbody>
           {events.map((e) => (
             <tr key={e.id}>
-              <td>{formatDateTime(e.occurredAt)}</td>
+              <td>{formatDateTime(e.occurredAt, zone)}</td>
               <td>{ACTION_LABELS[e.action] ?? e.action}</td>
               <td>{e.actor.name}</td>
               <td>{state(e.fromState)} → {state(e.toState)}</td>

@@ -15,6 +15,7 @@ export const DOCUMENT_CSS = `
 .doc-lab-address { color: #4f5f66; font-size: 8.5pt; white-space: pre-line; }
 .doc-lab-accreditation { color: #4f5f66; font-size: 7.5pt; text-align: right; max-width: 45%; }
 .doc-title { display: flex; justify-content: space-between; align-items: baseline; gap: 12pt; margin-bottom: 8pt; }
+.doc-amended { color: #9a3b1f; font-size: 11pt; text-transform: uppercase; letter-spacing: 0.05em; }
 .doc-number { font-family: "DejaVu Sans Mono", "Liberation Mono", monospace; font-size: 13pt; font-weight: 700; white-space: nowrap; }
 .doc-facts { display: grid; grid-template-columns: 1fr 1fr; gap: 5pt 18pt; margin: 0; }
 .doc-facts div { break-inside: avoid; }

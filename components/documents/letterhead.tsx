@@ -1,14 +1,22 @@
-import type { Letterhead as LetterheadData } from "@/lib/server/lab/get-letterhead";
+import { timeZoneStatement } from "@/lib/format/time-zone";
 
-/** The lab's name and address at the top of every printed document. */
-export function Letterhead({ lab }: { lab: LetterheadData }) {
+type LetterheadData = { name: string; address: string; accreditation: string | null; timeZone?: string };
+
+/**
+ * The lab's name and address at the top of every printed document, and the time zone its times are in
+ * (`at` is the document's own date, for the zone's offset on that day).
+ */
+export function Letterhead({ lab, at }: { lab: LetterheadData; at?: Date }) {
   return (
     <header className="doc-letterhead">
       <div>
         <div className="doc-lab-name">{lab.name}</div>
         {lab.address ? <div className="doc-lab-address">{lab.address}</div> : null}
       </div>
-      {lab.accreditation ? <div className="doc-lab-accreditation">{lab.accreditation}</div> : null}
+      <div className="doc-lab-accreditation">
+        {lab.accreditation ? <div>{lab.accreditation}</div> : null}
+        <div className="doc-small" data-testid="document-time-zone">{timeZoneStatement(lab.timeZone ?? "UTC", at)}</div>
+      </div>
     </header>
   );
 }

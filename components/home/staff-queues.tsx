@@ -6,7 +6,7 @@ import { QueueCard } from "@/components/ui/queue-card";
 import { StateTag } from "@/components/ui/state-tag";
 
 /** The home page's work queues; each role is given only the queues its policy allows. */
-export function StaffQueues({ queues, now }: { queues: HomeQueues; now: Date }) {
+export function StaffQueues({ queues, now, zone = "UTC" }: { queues: HomeQueues; now: Date; zone?: string }) {
   return (
     <div className="grid">
       {queues.shipments && (
@@ -39,7 +39,7 @@ export function StaffQueues({ queues, now }: { queues: HomeQueues; now: Date }) 
             <thead><tr><th>Specimen</th><th>From roll</th><th>Method</th><th>Prepared</th></tr></thead>
             <tbody>
               {queues.specimens.map((s) => (
-                <tr key={s.id}><td><Link className="mono" href={`/runs/new?specimen=${s.id}`}>{s.labNumber}</Link></td><td className="mono">{s.coupon.roll.labNumber}<div className="muted">{s.coupon.roll.project.name}</div></td><td>ASTM {s.intendedMethodCode}</td><td>{formatDate(s.preparedAt)}</td></tr>
+                <tr key={s.id}><td><Link className="mono" href={`/runs/new?specimen=${s.id}`}>{s.labNumber}</Link></td><td className="mono">{s.coupon.roll.labNumber}<div className="muted">{s.coupon.roll.project.name}</div></td><td>ASTM {s.intendedMethodCode}</td><td>{formatDate(s.preparedAt, zone)}</td></tr>
               ))}
             </tbody>
           </table>
@@ -75,7 +75,7 @@ export function StaffQueues({ queues, now }: { queues: HomeQueues; now: Date }) 
             <thead><tr><th>Asset</th><th>Kind</th><th>Due</th></tr></thead>
             <tbody>
               {queues.calibrations.map((e) => (
-                <tr key={e.id}><td><Link className="mono" href={`/equipment/${e.assetTag}`}>{e.assetTag}</Link></td><td>{EQUIPMENT_KIND_LABELS[e.kind]}</td><td>{e.dueAt && e.dueAt < now ? <span className="state state-bad">overdue {formatDate(e.dueAt)}</span> : formatDate(e.dueAt)}</td></tr>
+                <tr key={e.id}><td><Link className="mono" href={`/equipment/${e.assetTag}`}>{e.assetTag}</Link></td><td>{EQUIPMENT_KIND_LABELS[e.kind]}</td><td>{e.dueAt && e.dueAt < now ? <span className="state state-bad">overdue {formatDate(e.dueAt, zone)}</span> : formatDate(e.dueAt, zone)}</td></tr>
               ))}
             </tbody>
           </table>

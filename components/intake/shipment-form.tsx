@@ -6,11 +6,12 @@ import { useState } from "react";
 import { useFieldArray, useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
 import { logShipmentAction } from "@/app/(staff)/intake/actions";
-import { parsePastedRows } from "@/lib/custody/paste-grid";
-import { logShipmentSchema, ROLL_PASTE_COLUMNS } from "@/lib/validation/intake";
+import { readPastedRolls, ROLL_COLUMN_TITLES } from "@/lib/custody/pasted-rolls";
+import { YES_NO_HINT } from "@/lib/custody/yes-no";
+import { logShipmentSchema } from "@/lib/validation/intake";
 import { applyServerErrors } from "@/components/ui/apply-server-errors";
 import { Field } from "@/components/ui/field";
-import { nowForDateTimeInput } from "@/components/ui/now-for-input";
+import { ZonedDateTimeInput } from "@/components/ui/zoned-date-time-input";
 import { LabNumberLinks } from "./lab-number-links";
 import styles from "./shipment-form.module.css";
 
@@ -18,17 +19,17 @@ type FormInput = z.input<typeof logShipmentSchema>;
 type FormOutput = z.output<typeof logShipmentSchema>;
 type Options = { clients: Array<{ id: string; name: string; projects: Array<{ id: string; name: string; code: string }> }>; locations: Array<{ id: string; code: string; name: string }> };
 
-const EMPTY_ROLL = { rollNumber: "", lotNumber: "", product: "", manufacturer: "", sampleLengthMm: "", sampleWidthMm: "", machineDirectionMarked: false };
-const COLUMN_TITLES = ["Roll number", "Lot number", "Product", "Manufacturer", "Length (mm)", "Width (mm)", "MD marked"];
+const EMPTY_ROLL = { rollNumber: "", lotNumber: "", product: "", manufacturer: "", sampleLengthMm: "", sampleWidthMm: "", machineDirectionMarked: false, conditionNotes: "" };
+const COLUMN_TITLES = Object.values(ROLL_COLUMN_TITLES);
 
 /** Logging a shipment: its details, then its rolls typed in or pasted from a spreadsheet, checked row by row. */
-export function ShipmentForm({ options }: { options: Options }) {
+export function ShipmentForm({ options, zone }: { options: Options; zone: string }) {
   const router = useRouter();
   const [pasted, setPasted] = useState("");
   const [notice, setNotice] = useState<string | null>(null);
   const form = useForm<FormInput, unknown, FormOutput>({
     resolver: zodResolver(logShipmentSchema),
-    defaultValues: { clientOrganizationId: "", projectId: "", deliveredBy: "", receivedAt: nowForDateTimeInput(), conditionNotes: "", storageLocationId: "", rolls: [] },
+    defaultValues: { clientOrganizationId: "", projectId: "", deliveredBy: "", receivedAt: new Date().toISOString(), conditionNotes: "", storageLocationId: "", rolls: [] },
   });
   const { register, handleSubmit, formState, control, trigger } = form;
   const rolls = useFieldArray({ control, name: "rolls" });
@@ -37,9 +38,11 @@ export function ShipmentForm({ options }: { options: Options }) {
   const rowErrors = formState.errors.rolls;
 
   const addPasted = async () => {
-    const { rows } = parsePastedRows(pasted, ROLL_PASTE_COLUMNS);
+    const { rolls: rows, problems } = readPastedRolls(pasted);
     if (rows.length === 0) return setNotice("Nothing to read: paste rows copied from a spreadsheet, one roll per row.");
-    rolls.append(rows.map((r) => ({ ...EMPTY_ROLL, ...r.cells })));
+    // A cell that is not a clear yes or no refuses the paste: nothing is added until it is put right.
+    if (problems.length > 0) return setNotice(`Nothing was added. ${problems.join(" ")}`);
+    rolls.append(rows.map((r) => ({ ...EMPTY_ROLL, ...r })));
     setPasted("");
     setNotice(`${rows.length} row${rows.length === 1 ? "" : "s"} read. Check the rows marked in red before saving.`);
     await trigger("rolls");
@@ -78,7 +81,7 @@ export function ShipmentForm({ options }: { options: Options }) {
             <input {...register("deliveredBy")} />
           </Field>
           <Field label="Received at" error={formState.errors.receivedAt?.message}>
-            <input type="datetime-local" {...register("receivedAt")} />
+            <ZonedDateTimeInput control={control} name="receivedAt" zone={zone} />
           </Field>
           <Field label="Stored at" error={formState.errors.storageLocationId?.message}>
             <select {...register("storageLocationId")}>
@@ -87,7 +90,7 @@ export function ShipmentForm({ options }: { options: Options }) {
             </select>
           </Field>
         </div>
-        <Field label="Condition on arrival" hint="Wrapping, damage, wetness, labels: what the client will see on the receipt." error={formState.errors.conditionNotes?.message}>
+        <Field label="Condition on arrival" hint="Wrapping, damage, wetness, labels: what the client will see on the receipt. A roll's own condition goes in its row." error={formState.errors.conditionNotes?.message}>
           <textarea rows={3} {...register("conditionNotes")} />
         </Field>
       </section>
@@ -95,7 +98,7 @@ export function ShipmentForm({ options }: { options: Options }) {
       <section className="card">
         <h2>Rolls <span className="count">{rolls.fields.length} in this shipment</span></h2>
         <div className={styles.paste}>
-          <Field label="Paste rows from a spreadsheet" hint={`Columns: ${COLUMN_TITLES.join(", ")}. A header row lets the columns come in any order.`}>
+          <Field label="Paste rows from a spreadsheet" hint={`Columns: ${COLUMN_TITLES.join(", ")}. A header row lets the columns come in any order. MD marked: ${YES_NO_HINT} (blank is no).`}>
             <textarea rows={4} value={pasted} onChange={(e) => setPasted(e.target.value)} className="mono" spellCheck={false} />
           </Field>
           <div className={styles.pasteButtons}>
@@ -122,6 +125,7 @@ export function ShipmentForm({ options }: { options: Options }) {
                       <td><input aria-label={`Row ${index + 1} length`} inputMode="decimal" className={styles.narrow} {...register(`rolls.${index}.sampleLengthMm`)} /></td>
                       <td><input aria-label={`Row ${index + 1} width`} inputMode="decimal" className={styles.narrow} {...register(`rolls.${index}.sampleWidthMm`)} /></td>
                       <td><input type="checkbox" aria-label={`Row ${index + 1} machine direction marked`} {...register(`rolls.${index}.machineDirectionMarked`)} /></td>
+                      <td><input aria-label={`Row ${index + 1} condition`} placeholder="as the shipment" {...register(`rolls.${index}.conditionNotes`)} /></td>
                       <td>
                         <button type="button" className="button button-quiet" onClick={() => rolls.remove(index)} aria-label={`Remove row ${index + 1}`}>×</button>
                         {messages.length > 0 && <div className={`field-error ${styles.rowMessages}`} data-testid={`row-${index + 1}-errors`}>{messages.map((m) => <div key={m}><LabNumberLinks text={m} /></div>)}</div>}

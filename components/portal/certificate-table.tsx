@@ -2,19 +2,19 @@ import { formatDate } from "@/lib/format/dates";
 import type { PortalCertificate, PortalCertificateRevision } from "@/lib/server/portal/list-portal-certificates";
 import styles from "./portal.module.css";
 
-function RevisionStatus({ revision }: { revision: PortalCertificateRevision }) {
+function RevisionStatus({ revision, zone }: { revision: PortalCertificateRevision; zone: string }) {
   if (revision.status === "SUPERSEDED")
     return (
       <>
         <span className="state state-warn">{revision.supersededByRevision ? `Superseded by revision ${revision.supersededByRevision}` : "Superseded"}</span>
-        {revision.supersededAt && <div className={`muted ${styles.nowrap}`}>since {formatDate(revision.supersededAt)}</div>}
+        {revision.supersededAt && <div className={`muted ${styles.nowrap}`}>since {formatDate(revision.supersededAt, zone)}</div>}
       </>
     );
   if (revision.status === "REVOKED")
     return (
       <>
         <span className="state state-bad">Revoked</span>
-        {revision.revokedAt && <div className={`muted ${styles.nowrap}`}>since {formatDate(revision.revokedAt)}</div>}
+        {revision.revokedAt && <div className={`muted ${styles.nowrap}`}>since {formatDate(revision.revokedAt, zone)}</div>}
       </>
     );
   return <span className="state state-ok">Issued, valid</span>;
@@ -24,7 +24,7 @@ function RevisionStatus({ revision }: { revision: PortalCertificateRevision }) {
  * Certificates with every issued revision: status (superseded ones say by which revision), issue date,
  * verification code and the PDF download. `showProject` adds the project column for the all-projects list.
  */
-export function CertificateTable({ certificates, showProject = false }: { certificates: PortalCertificate[]; showProject?: boolean }) {
+export function CertificateTable({ certificates, showProject = false, zone = "UTC" }: { certificates: PortalCertificate[]; showProject?: boolean; zone?: string }) {
   return (
     <div className="table-wrap">
       <table className={`list ${styles.certificates}`} data-testid="portal-certificates">
@@ -47,10 +47,10 @@ export function CertificateTable({ certificates, showProject = false }: { certif
                 )}
                 <td>{revision.revision}</td>
                 <td>
-                  <RevisionStatus revision={revision} />
+                  <RevisionStatus revision={revision} zone={zone} />
                   {revision.reason && <div className={`muted ${styles.reason}`}>Reason: {revision.reason}</div>}
                 </td>
-                <td className={styles.nowrap}>{formatDate(revision.issuedAt)}</td>
+                <td className={styles.nowrap}>{formatDate(revision.issuedAt, zone)}</td>
                 <td><a className="mono" href={`/verify/${encodeURIComponent(revision.verificationCode)}`}>{revision.verificationCode}</a></td>
                 <td>
                   {revision.hasPdf ? (

@@ -4,7 +4,7 @@ import styles from "./portal.module.css";
 import { RollProgress } from "./roll-progress";
 
 /** The project's rolls, one row each, with where the roll stands in the chain. */
-export function ProjectRolls({ rolls }: { rolls: PortalProject["rolls"] }) {
+export function ProjectRolls({ rolls, zone = "UTC" }: { rolls: PortalProject["rolls"]; zone?: string }) {
   if (rolls.length === 0) return <p className="empty">No rolls of this project have arrived yet.</p>;
   return (
     <div className="table-wrap">
@@ -23,7 +23,7 @@ export function ProjectRolls({ rolls }: { rolls: PortalProject["rolls"] }) {
                 {describeRollProgress(roll.progress)}
                 {roll.certificateNumbers.length > 0 && <div className="muted mono">{roll.certificateNumbers.join(", ")}</div>}
               </td>
-              <td className={styles.progressCell}><RollProgress steps={roll.progress} rollLabel={roll.rollNumber} /></td>
+              <td className={styles.progressCell}><RollProgress steps={roll.progress} rollLabel={roll.rollNumber} zone={zone} /></td>
             </tr>
           ))}
         </tbody>

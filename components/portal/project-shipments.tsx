@@ -2,7 +2,7 @@ import { formatDate } from "@/lib/format/dates";
 import type { PortalProject } from "@/lib/server/portal/get-portal-project";
 
 /** Shipments of the project with their receipt acknowledgements (the PDF route checks the organisation again). */
-export function ProjectShipments({ shipments }: { shipments: PortalProject["shipments"] }) {
+export function ProjectShipments({ shipments, zone = "UTC" }: { shipments: PortalProject["shipments"]; zone?: string }) {
   if (shipments.length === 0) return <p className="empty">No shipment of this project has arrived yet.</p>;
   return (
     <div className="table-wrap">
@@ -12,9 +12,9 @@ export function ProjectShipments({ shipments }: { shipments: PortalProject["ship
           {shipments.map((s) => (
             <tr key={s.labNumber}>
               <td className="mono">{s.labNumber}</td>
-              <td>{formatDate(s.receivedAt)}</td>
+              <td>{formatDate(s.receivedAt, zone)}</td>
               <td>{s.rollCount}</td>
-              <td>{s.acknowledgedAt ? `acknowledged ${formatDate(s.acknowledgedAt)}` : <span className="state state-warn">not yet acknowledged</span>}</td>
+              <td>{s.acknowledgedAt ? `acknowledged ${formatDate(s.acknowledgedAt, zone)}` : <span className="state state-warn">not yet acknowledged</span>}</td>
               <td><a href={`/api/shipments/${encodeURIComponent(s.labNumber)}/receipt`} download>Receipt (PDF)</a></td>
             </tr>
           ))}

@@ -8,6 +8,7 @@ import type { z } from "zod";
 import { correctReadingAction } from "@/app/(staff)/runs/[labNumber]/readings-actions";
 import { applyServerErrors } from "@/components/ui/apply-server-errors";
 import { Field } from "@/components/ui/field";
+import { ZonedDateTimeInput } from "@/components/ui/zoned-date-time-input";
 import type { PressureUnit } from "@/lib/units/pressure-entry";
 import { correctReadingSchema, type ReadingEntryInput } from "@/lib/validation/readings";
 import { entryColumns } from "./entry-columns";
@@ -21,17 +22,18 @@ export type CorrectReadingFormProps = {
   sequence: number;
   pressureUnit: PressureUnit;
   withChemistry: boolean;
-  /** The saved values as input text in the person's unit (takenAt as a datetime-local value with seconds). */
+  /** The saved values as input text in the person's unit (takenAt as ISO text, shown in the lab's time zone). */
   values: Record<keyof ReadingEntryInput, string>;
+  zone: string;
 };
 
 /** "Correct…": the saved values to change, and the reason; saves a new reading, the original stays in its history. */
-export function CorrectReadingForm({ readingId, sequence, pressureUnit, withChemistry, values }: CorrectReadingFormProps) {
+export function CorrectReadingForm({ readingId, sequence, pressureUnit, withChemistry, values, zone }: CorrectReadingFormProps) {
   const router = useRouter();
   const [open, setOpen] = useState(false);
   const [notice, setNotice] = useState<string | null>(null);
   const form = useForm<FormInput, unknown, FormOutput>({ resolver: zodResolver(correctReadingSchema), defaultValues: { readingId, pressureUnit, values, reason: "" } });
-  const { register, handleSubmit, formState } = form;
+  const { register, handleSubmit, formState, control } = form;
   const errors = formState.errors.values as Record<string, { message?: string } | undefined> | undefined;
 
   const onSubmit = handleSubmit(async (input) => {
@@ -53,7 +55,9 @@ export function CorrectReadingForm({ readingId, sequence, pressureUnit, withChem
       <div className={styles.correctForm}>
         {entryColumns(pressureUnit, withChemistry).map((c) => (
           <Field key={c.key} label={c.title} error={errors?.[c.key]?.message}>
-            <input {...register(`values.${c.key}` as Path<FormInput>)} type={c.kind === "time" ? "datetime-local" : "text"} step={c.kind === "time" ? 1 : undefined} inputMode={c.kind === "number" ? "decimal" : undefined} />
+            {c.kind === "time"
+              ? <ZonedDateTimeInput control={control} name={`values.${c.key}` as Path<FormInput>} zone={zone} seconds />
+              : <input {...register(`values.${c.key}` as Path<FormInput>)} type="text" inputMode="decimal" />}
           </Field>
         ))}
         <div className={styles.wide}>

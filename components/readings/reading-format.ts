@@ -13,10 +13,3 @@ export const pressureCell = (pa: number | null | undefined, unit: PressureUnit):
 /** A pressure as the value of an input, with enough digits that sending it back changes nothing. */
 export const pressureInput = (pa: number | null | undefined, unit: PressureUnit): string =>
   pa === null || pa === undefined ? "" : String(+paToEnteredPressure(pa, unit).toFixed(6));
-
-/** A date-time as a datetime-local input wants it, with seconds, in the browser's time zone. */
-export function dateTimeInputValue(iso: string | Date): string {
-  const d = new Date(iso);
-  const pad = (n: number) => String(n).padStart(2, "0");
-  return `${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}T${pad(d.getHours())}:${pad(d.getMinutes())}:${pad(d.getSeconds())}`;
-}

@@ -7,7 +7,7 @@ import { useFieldArray, useForm, type Path } from "react-hook-form";
 import type { z } from "zod";
 import { recordReadingsAction } from "@/app/(staff)/runs/[labNumber]/readings-actions";
 import { applyServerErrors } from "@/components/ui/apply-server-errors";
-import { nowForDateTimeInput } from "@/components/ui/now-for-input";
+import { ZonedDateTimeInput } from "@/components/ui/zoned-date-time-input";
 import type { PressureUnit } from "@/lib/units/pressure-entry";
 import { recordReadingsSchema, type ReadingEntryInput } from "@/lib/validation/readings";
 import { entryColumns } from "./entry-columns";
@@ -24,10 +24,12 @@ export type ReadingsGridProps = {
   withChemistry: boolean;
   /** Values a new row starts with (pressures and temperature rarely change between readings), in the person's unit. */
   carryOver: Partial<Row>;
+  /** The lab's time zone: the time column is typed as wall-clock time there. */
+  zone: string;
 };
 
 const blankRow = (from: Partial<Row>): Row => ({
-  takenAt: nowForDateTimeInput(), inflowLevelMm: "", outflowLevelMm: "",
+  takenAt: new Date(Math.floor(Date.now() / 60_000) * 60_000).toISOString(), inflowLevelMm: "", outflowLevelMm: "",
   influentPressure: from.influentPressure ?? "", effluentPressure: from.effluentPressure ?? "", cellPressure: from.cellPressure ?? "", temperatureC: from.temperatureC ?? "",
   influentEcMsPerM: "", effluentEcMsPerM: "", influentPh: from.influentPh ?? "", effluentPh: "",
 });
@@ -37,7 +39,7 @@ const blankRow = (from: Partial<Row>): Row => ({
  * cell adds a row (pressures and temperature carried over), Ctrl+Enter saves. Rows are checked with the
  * shared schema before sending; the server adds the checks across rows, and saves all rows or none.
  */
-export function ReadingsGrid({ runId, pressureUnit, withChemistry, carryOver }: ReadingsGridProps) {
+export function ReadingsGrid({ runId, pressureUnit, withChemistry, carryOver, zone }: ReadingsGridProps) {
   const router = useRouter();
   const columns = entryColumns(pressureUnit, withChemistry);
   const [notice, setNotice] = useState<{ ok: boolean; text: string } | null>(null);
@@ -106,20 +108,16 @@ export function ReadingsGrid({ runId, pressureUnit, withChemistry, carryOver }: 
               return (
                 <tr key={field.id} className={messages.length ? styles.badRow : undefined} data-row={index + 1}>
                   <td>{index + 1}</td>
-                  {columns.map((c, col) => (
-                    <td key={c.key}>
-                      <input
-                        {...register(`readings.${index}.${c.key}` as Path<FormInput>)}
-                        type={c.kind === "time" ? "datetime-local" : "text"}
-                        inputMode={c.kind === "number" ? "decimal" : undefined}
-                        aria-label={`Row ${index + 1} ${c.title}`}
-                        aria-invalid={errors?.[c.key] ? true : undefined}
-                        data-row={index}
-                        data-col={col}
-                        autoComplete="off"
-                      />
-                    </td>
-                  ))}
+                  {columns.map((c, col) => {
+                    const cell = { "aria-label": `Row ${index + 1} ${c.title}`, "aria-invalid": errors?.[c.key] ? true : undefined, "data-row": index, "data-col": col, autoComplete: "off" };
+                    return (
+                      <td key={c.key}>
+                        {c.kind === "time"
+                          ? <ZonedDateTimeInput control={control} name={`readings.${index}.${c.key}` as Path<FormInput>} zone={zone} {...cell} />
+                          : <input {...register(`readings.${index}.${c.key}` as Path<FormInput>)} type="text" inputMode="decimal" {...cell} />}
+                      </td>
+                    );
+                  })}
                   <td>
                     {rows.fields.length > 1 && <button type="button" className="button button-quiet" onClick={() => rows.remove(index)} aria-label={`Remove row ${index + 1}`}>×</button>}
                     {messages.length > 0 && <div className={`field-error ${styles.rowMessages}`} data-testid={`reading-row-${index + 1}-errors`}>{messages.map((m) => <div key={m}>{m}</div>)}</div>}

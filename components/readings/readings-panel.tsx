@@ -4,15 +4,15 @@ import { listRunReadings, type RunReadingView } from "@/lib/server/readings/list
 import { PRESSURE_UNIT_SYMBOLS, type PressureUnit } from "@/lib/units/pressure-entry";
 import { CorrectReadingForm } from "./correct-reading-form";
 import { CsvImport } from "./csv-import";
-import { dateTimeInputValue, elapsedHours, fixed, pressureCell, pressureInput } from "./reading-format";
+import { elapsedHours, fixed, pressureCell, pressureInput } from "./reading-format";
 import { ReadingsGrid } from "./readings-grid";
 import styles from "./readings.module.css";
 
 /** Props of the readings panel of the run page. `labNumber` is accepted for the page's convenience; the run is found by id. */
-export type ReadingsPanelProps = { runId: string; labNumber?: string; actor: CurrentUser };
+export type ReadingsPanelProps = { runId: string; labNumber?: string; actor: CurrentUser; zone?: string };
 
 const entryValues = (r: RunReadingView, unit: PressureUnit) => ({
-  takenAt: dateTimeInputValue(r.takenAt),
+  takenAt: new Date(r.takenAt).toISOString(),
   inflowLevelMm: r.inflowLevelMm === null ? "" : String(r.inflowLevelMm),
   outflowLevelMm: r.outflowLevelMm === null ? "" : String(r.outflowLevelMm),
   influentPressure: pressureInput(r.influentPressurePa, unit),
@@ -25,10 +25,10 @@ const entryValues = (r: RunReadingView, unit: PressureUnit) => ({
   effluentPh: r.effluentPh === null ? "" : String(r.effluentPh),
 });
 
-function versionText(v: RunReadingView, unit: PressureUnit, chemistry: boolean): string {
+function versionText(v: RunReadingView, unit: PressureUnit, chemistry: boolean, zone: string): string {
   const p = PRESSURE_UNIT_SYMBOLS[unit];
   const parts = [
-    `${formatDateTime(v.takenAt)} (${elapsedHours(v.elapsedS)} h)`,
+    `${formatDateTime(v.takenAt, zone)} (${elapsedHours(v.elapsedS)} h)`,
     `levels ${fixed(v.inflowLevelMm, 1)} / ${fixed(v.outflowLevelMm, 1)} mm`,
     `in ${pressureCell(v.influentPressurePa, unit)}, out ${pressureCell(v.effluentPressurePa, unit)}, cell ${pressureCell(v.cellPressurePa, unit)} ${p}`,
     `${v.temperatureC} °C`,
@@ -42,7 +42,7 @@ function versionText(v: RunReadingView, unit: PressureUnit, chemistry: boolean):
  * temperature (EC and pH for D6766), each corrected reading with its earlier versions beside it; for the
  * technician performing a permeating run, the entry grid, the data-logger import and "Correct…".
  */
-export async function ReadingsPanel({ runId, actor }: ReadingsPanelProps) {
+export async function ReadingsPanel({ runId, actor, zone = "UTC" }: ReadingsPanelProps) {
   const { run, current, history, canRecord, whyNot } = await listRunReadings({ actor, runId });
   const unit = actor.pressureUnit;
   const p = PRESSURE_UNIT_SYMBOLS[unit];
@@ -73,7 +73,7 @@ export async function ReadingsPanel({ runId, actor }: ReadingsPanelProps) {
                 const rowsOut = [
                   <tr key={r.id} data-sequence={r.sequence}>
                     <td>{r.sequence}{r.corrected && <span className={`state state-warn ${styles.correctedTag}`} data-testid="reading-corrected">corrected</span>}</td>
-                    <td className="mono">{formatDateTime(r.takenAt)}</td>
+                    <td className="mono">{formatDateTime(r.takenAt, zone)}</td>
                     <td className={styles.num}>{elapsedHours(r.elapsedS)}</td>
                     <td className={styles.num}>{fixed(r.inflowLevelMm, 1)}</td>
                     <td className={styles.num}>{fixed(r.outflowLevelMm, 1)}</td>
@@ -87,7 +87,7 @@ export async function ReadingsPanel({ runId, actor }: ReadingsPanelProps) {
                     {chemistry && <><td className={styles.num}>{fixed(r.influentEcMsPerM, 1)}</td><td className={styles.num}>{fixed(r.effluentEcMsPerM, 1)}</td><td className={styles.num}>{fixed(r.influentPh, 2)}</td><td className={styles.num}>{fixed(r.effluentPh, 2)}</td></>}
                     <td className={styles.recorded}>
                       <span className="muted">{r.recordedBy.name} · {r.source === "manual" ? "entered" : r.source}</span>
-                      {canRecord && <> <CorrectReadingForm readingId={r.id} sequence={r.sequence} pressureUnit={unit} withChemistry={chemistry} values={entryValues(r, unit)} /></>}
+                      {canRecord && <> <CorrectReadingForm readingId={r.id} sequence={r.sequence} pressureUnit={unit} withChemistry={chemistry} values={entryValues(r, unit)} zone={zone} /></>}
                     </td>
                   </tr>,
                 ];
@@ -99,9 +99,9 @@ export async function ReadingsPanel({ runId, actor }: ReadingsPanelProps) {
                         <ol className={styles.history}>
                           {[...earlier, r].map((v, i) => (
                             <li key={v.id}>
-                              <span className={v.id === r.id ? undefined : styles.struck}>{versionText(v, unit, chemistry)}</span>
+                              <span className={v.id === r.id ? undefined : styles.struck}>{versionText(v, unit, chemistry, zone)}</span>
                               {" — "}
-                              {i === 0 ? `original, recorded by ${v.recordedBy.name} on ${formatDateTime(v.createdAt)} (${v.source === "manual" ? "entered" : v.source})` : `corrected by ${v.recordedBy.name} on ${formatDateTime(v.createdAt)}: “${v.correctionReason}”`}
+                              {i === 0 ? `original, recorded by ${v.recordedBy.name} on ${formatDateTime(v.createdAt, zone)} (${v.source === "manual" ? "entered" : v.source})` : `corrected by ${v.recordedBy.name} on ${formatDateTime(v.createdAt, zone)}: “${v.correctionReason}”`}
                             </li>
                           ))}
                         </ol>
@@ -122,6 +122,7 @@ export async function ReadingsPanel({ runId, actor }: ReadingsPanelProps) {
               runId={run.id}
               pressureUnit={unit}
               withChemistry={chemistry}
+              zone={zone}
               carryOver={last ? { influentPressure: pressureInput(last.influentPressurePa, unit), effluentPressure: pressureInput(last.effluentPressurePa, unit), cellPressure: pressureInput(last.cellPressurePa, unit), temperatureC: last.temperatureC.toFixed(1) } : {}}
             />
           </div>

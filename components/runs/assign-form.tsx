@@ -9,6 +9,7 @@ import { assignSpecimenAction } from "@/app/(staff)/runs/actions";
 import { assignSpecimenSchema } from "@/lib/validation/runs";
 import { applyServerErrors } from "@/components/ui/apply-server-errors";
 import { Field } from "@/components/ui/field";
+import { ZonedDateTimeInput } from "@/components/ui/zoned-date-time-input";
 
 type Instrument = { id: string; assetTag: string; name: string; kind: string; calibration: { usable: boolean; message: string }; overrideUntil: Date | null; busyWith: string | null };
 type Specimen = { id: string; labNumber: string; intendedMethodCode: string; coupon: { roll: { labNumber: string; project: { name: string } } } };
@@ -19,13 +20,13 @@ function optionLabel(i: Instrument): string {
 }
 
 /** Mount a waiting specimen in a free cell with the instruments the run will use; the run starts here. */
-export function AssignForm({ specimens, instruments, pressureUnit, preselectedSpecimenId }: { specimens: Specimen[]; instruments: Instrument[]; pressureUnit: "KPA" | "PSI"; preselectedSpecimenId?: string }) {
+export function AssignForm({ specimens, instruments, pressureUnit, preselectedSpecimenId, zone }: { specimens: Specimen[]; instruments: Instrument[]; pressureUnit: "KPA" | "PSI"; preselectedSpecimenId?: string; zone: string }) {
   const router = useRouter();
   const [failure, setFailure] = useState<string | null>(null);
   const first = specimens.find((s) => s.id === preselectedSpecimenId) ?? specimens[0];
   const form = useForm<z.input<typeof assignSpecimenSchema>, unknown, z.output<typeof assignSpecimenSchema>>({
     resolver: zodResolver(assignSpecimenSchema),
-    defaultValues: { specimenId: first?.id ?? "", cellId: "", burettePanelId: "", transducerId: "", thermometerId: "", methodCode: (first?.intendedMethodCode as "D5887") ?? "D5887", pressureUnit, effectiveStress: "" },
+    defaultValues: { specimenId: first?.id ?? "", cellId: "", burettePanelId: "", transducerId: "", thermometerId: "", methodCode: (first?.intendedMethodCode as "D5887") ?? "D5887", pressureUnit, effectiveStress: "", mountedAt: new Date().toISOString() },
   });
   const { register, handleSubmit, formState, control } = form;
   const method = useWatch({ control, name: "methodCode" });
@@ -61,6 +62,7 @@ export function AssignForm({ specimens, instruments, pressureUnit, preselectedSp
       <Field label="Thermometer" hint="Optional." error={formState.errors.thermometerId?.message}>
         <select {...register("thermometerId")}><option value="">None</option>{of("THERMOMETER").map((i) => <option key={i.id} value={i.id}>{optionLabel(i)}</option>)}</select>
       </Field>
+      <Field label="Mounted at" hint="When the specimen went into the cell (lab time)." error={formState.errors.mountedAt?.message}><ZonedDateTimeInput control={control} name="mountedAt" zone={zone} /></Field>
       <Field label={`Effective stress (${unit})`} hint="Optional; as the project specification sets it." error={formState.errors.effectiveStress?.message}><input inputMode="decimal" {...register("effectiveStress")} /></Field>
       {method === "D6766" && (
         <fieldset className="card">

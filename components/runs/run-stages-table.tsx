@@ -4,7 +4,7 @@ import { formatPressure } from "@/lib/units/pressure-entry";
 type Stage = { id: string; sequence: number; kind: string; cellPressurePa: number; influentPressurePa: number; effluentPressurePa: number; startedAt: Date; endedAt: Date | null; marginAcknowledged: boolean; recordedBy: { name: string } };
 const KIND: Record<string, string> = { SATURATION: "Saturation", BACK_PRESSURE: "Back-pressure", EQUILIBRATION: "Equilibration", PERMEATION: "Permeation" };
 
-export function RunStagesTable({ stages, pressureUnit }: { stages: Stage[]; pressureUnit: "KPA" | "PSI" }) {
+export function RunStagesTable({ stages, pressureUnit, zone = "UTC" }: { stages: Stage[]; pressureUnit: "KPA" | "PSI"; zone?: string }) {
   if (stages.length === 0) return <p className="empty">No stage recorded yet: start with saturation.</p>;
   return (
     <div className="table-wrap">
@@ -16,7 +16,7 @@ export function RunStagesTable({ stages, pressureUnit }: { stages: Stage[]; pres
               <td>{s.sequence}</td>
               <td>{KIND[s.kind] ?? s.kind}{s.marginAcknowledged && <div className="state state-warn">margin warning acknowledged</div>}</td>
               <td>{formatPressure(s.cellPressurePa, pressureUnit)}</td><td>{formatPressure(s.influentPressurePa, pressureUnit)}</td><td>{formatPressure(s.effluentPressurePa, pressureUnit)}</td>
-              <td>{formatDateTime(s.startedAt)}</td><td>{s.endedAt ? formatDateTime(s.endedAt) : "running"}</td><td>{s.recordedBy.name}</td>
+              <td>{formatDateTime(s.startedAt, zone)}</td><td>{s.endedAt ? formatDateTime(s.endedAt, zone) : "running"}</td><td>{s.recordedBy.name}</td>
             </tr>
           ))}
         </tbody>

@@ -9,21 +9,21 @@ import { recordStageAction } from "@/app/(staff)/runs/actions";
 import { recordStageSchema } from "@/lib/validation/runs";
 import { applyServerErrors } from "@/components/ui/apply-server-errors";
 import { Field } from "@/components/ui/field";
-import { nowForDateTimeInput } from "@/components/ui/now-for-input";
+import { ZonedDateTimeInput } from "@/components/ui/zoned-date-time-input";
 
 type Kind = "SATURATION" | "BACK_PRESSURE" | "EQUILIBRATION" | "PERMEATION";
 const KIND_LABELS: Record<Kind, string> = { SATURATION: "Saturation", BACK_PRESSURE: "Back-pressure step", EQUILIBRATION: "Equilibration hold", PERMEATION: "Permeation" };
 
 /** Records a stage's three pressures; a broken confining margin shows its warning and needs an explicit tick. */
-export function StageForm({ runId, version, kinds, pressureUnit }: { runId: string; version: number; kinds: Kind[]; pressureUnit: "KPA" | "PSI" }) {
+export function StageForm({ runId, version, kinds, pressureUnit, zone }: { runId: string; version: number; kinds: Kind[]; pressureUnit: "KPA" | "PSI"; zone: string }) {
   const router = useRouter();
   const [warning, setWarning] = useState<string | null>(null);
   const [notice, setNotice] = useState<{ ok: boolean; text: string } | null>(null);
   const form = useForm<z.input<typeof recordStageSchema>, unknown, z.output<typeof recordStageSchema>>({
     resolver: zodResolver(recordStageSchema),
-    defaultValues: { runId, version, kind: kinds[0], pressureUnit, cellPressure: "", influentPressure: "", effluentPressure: "", startedAt: nowForDateTimeInput(), acknowledgeMargin: false },
+    defaultValues: { runId, version, kind: kinds[0], pressureUnit, cellPressure: "", influentPressure: "", effluentPressure: "", startedAt: new Date().toISOString(), acknowledgeMargin: false },
   });
-  const { register, handleSubmit, formState } = form;
+  const { register, handleSubmit, formState, control } = form;
   const unit = pressureUnit === "PSI" ? "psi" : "kPa";
   const onSubmit = handleSubmit(async (values) => {
     const result = await recordStageAction(values);
@@ -46,7 +46,7 @@ export function StageForm({ runId, version, kinds, pressureUnit }: { runId: stri
       <Field label={`Cell pressure (${unit})`} error={formState.errors.cellPressure?.message}><input inputMode="decimal" {...register("cellPressure")} /></Field>
       <Field label={`Influent pressure (${unit})`} error={formState.errors.influentPressure?.message}><input inputMode="decimal" {...register("influentPressure")} /></Field>
       <Field label={`Effluent pressure (${unit})`} error={formState.errors.effluentPressure?.message}><input inputMode="decimal" {...register("effluentPressure")} /></Field>
-      <Field label="Started at" error={formState.errors.startedAt?.message}><input type="datetime-local" {...register("startedAt")} /></Field>
+      <Field label="Started at" error={formState.errors.startedAt?.message}><ZonedDateTimeInput control={control} name="startedAt" zone={zone} /></Field>
       {warning && (
         <div className="notice notice-caution" role="alert" data-testid="margin-warning">
           <p><strong>Confining margin not kept.</strong> {warning}</p>

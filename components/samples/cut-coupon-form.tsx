@@ -10,18 +10,18 @@ import { cutCouponSchema } from "@/lib/validation/samples";
 import { applyServerErrors } from "@/components/ui/apply-server-errors";
 import { Field } from "@/components/ui/field";
 import { LabNumberLinks } from "@/components/intake/lab-number-links";
-import { nowForDateTimeInput } from "@/components/ui/now-for-input";
+import { ZonedDateTimeInput } from "@/components/ui/zoned-date-time-input";
 
 type Locations = Array<{ id: string; code: string; name: string }>;
 
-export function CutCouponForm({ rollId, rollVersion, locations }: { rollId: string; rollVersion: number; locations: Locations }) {
+export function CutCouponForm({ rollId, rollVersion, locations, zone }: { rollId: string; rollVersion: number; locations: Locations; zone: string }) {
   const router = useRouter();
   const [notice, setNotice] = useState<{ ok: boolean; text: string } | null>(null);
   const form = useForm<z.input<typeof cutCouponSchema>, unknown, z.output<typeof cutCouponSchema>>({
     resolver: zodResolver(cutCouponSchema),
-    defaultValues: { rollId, rollVersion, positionInSample: "", lengthMm: "", widthMm: "", cutAt: nowForDateTimeInput(), storageLocationId: locations[0]?.id ?? "" },
+    defaultValues: { rollId, rollVersion, positionInSample: "", lengthMm: "", widthMm: "", cutAt: new Date().toISOString(), storageLocationId: locations[0]?.id ?? "" },
   });
-  const { register, handleSubmit, formState } = form;
+  const { register, handleSubmit, formState, control } = form;
   const onSubmit = handleSubmit(async (values) => {
     const result = await cutCouponAction(values);
     setNotice({ ok: result.ok, text: result.ok ? `Coupon ${result.data.labNumber} recorded.` : result.message });
@@ -34,7 +34,7 @@ export function CutCouponForm({ rollId, rollVersion, locations }: { rollId: stri
       <Field label="Position in the roll sample" hint="e.g. centre, 300 mm from the leading edge" error={formState.errors.positionInSample?.message}><input {...register("positionInSample")} /></Field>
       <Field label="Length (mm)" error={formState.errors.lengthMm?.message}><input inputMode="decimal" {...register("lengthMm")} /></Field>
       <Field label="Width (mm)" error={formState.errors.widthMm?.message}><input inputMode="decimal" {...register("widthMm")} /></Field>
-      <Field label="Cut at" error={formState.errors.cutAt?.message}><input type="datetime-local" {...register("cutAt")} /></Field>
+      <Field label="Cut at" error={formState.errors.cutAt?.message}><ZonedDateTimeInput control={control} name="cutAt" zone={zone} /></Field>
       <Field label="Kept at" error={formState.errors.storageLocationId?.message}>
         <select {...register("storageLocationId")}>{locations.map((l) => <option key={l.id} value={l.id}>{l.code} · {l.name}</option>)}</select>
       </Field>

@@ -11,19 +11,19 @@ import { prepareSpecimenSchema } from "@/lib/validation/samples";
 import { applyServerErrors } from "@/components/ui/apply-server-errors";
 import { Field } from "@/components/ui/field";
 import { LabNumberLinks } from "@/components/intake/lab-number-links";
-import { nowForDateTimeInput } from "@/components/ui/now-for-input";
+import { ZonedDateTimeInput } from "@/components/ui/zoned-date-time-input";
 
 type Locations = Array<{ id: string; code: string; name: string }>;
 type Input = Omit<z.input<typeof prepareSpecimenSchema>, "checklist"> & { answers: Record<string, "yes" | "no" | ""> };
 
 /** Recording a specimen cut from a coupon, with the method's preparation checklist answered item by item. */
-export function PrepareSpecimenForm({ couponId, locations }: { couponId: string; locations: Locations }) {
+export function PrepareSpecimenForm({ couponId, locations, zone }: { couponId: string; locations: Locations; zone: string }) {
   const router = useRouter();
   const [notice, setNotice] = useState<{ ok: boolean; text: string } | null>(null);
   const form = useForm<Input>({
     defaultValues: {
       couponId, dieDiameterMm: "100", initialThicknessMm: "", initialMassG: "", moistureContentPct: "", intendedMethodCode: "D5887",
-      preparedAt: nowForDateTimeInput(), storageLocationId: locations[0]?.id ?? "", answers: {},
+      preparedAt: new Date().toISOString(), storageLocationId: locations[0]?.id ?? "", answers: {},
     },
     // The checklist is kept as yes/no radio answers in the form and turned into booleans for the schema.
     resolver: async (values, context, options) => {
@@ -61,7 +61,7 @@ export function PrepareSpecimenForm({ couponId, locations }: { couponId: string;
       <Field label="Initial thickness (mm)" error={formState.errors.initialThicknessMm?.message}><input inputMode="decimal" {...register("initialThicknessMm")} /></Field>
       <Field label="Initial mass (g)" error={formState.errors.initialMassG?.message}><input inputMode="decimal" {...register("initialMassG")} /></Field>
       <Field label="Moisture content (%)" hint="Optional." error={formState.errors.moistureContentPct?.message}><input inputMode="decimal" {...register("moistureContentPct")} /></Field>
-      <Field label="Prepared at" error={formState.errors.preparedAt?.message}><input type="datetime-local" {...register("preparedAt")} /></Field>
+      <Field label="Prepared at" error={formState.errors.preparedAt?.message}><ZonedDateTimeInput control={control} name="preparedAt" zone={zone} /></Field>
       <Field label="Kept at" error={formState.errors.storageLocationId?.message}>
         <select {...register("storageLocationId")}>{locations.map((l) => <option key={l.id} value={l.id}>{l.code} · {l.name}</option>)}</select>
       </Field>

@@ -1,7 +1,7 @@
 import { ITEM_STATE_LABELS, RUN_STATE_LABELS } from "@/lib/format/states";
 
 const TONE: Record<string, string> = {
-  RETURNED: "state-warn", SUBMITTED: "state-warn", APPROVED: "state-ok", TESTED: "state-ok", DISPOSED: "state-bad",
+  RETURNED: "state-warn", SUBMITTED: "state-warn", APPROVED: "state-ok", TESTED: "state-ok", DISPOSED: "state-bad", ABANDONED: "state-bad",
 };
 
 export function StateTag({ state, kind = "item" }: { state: string; kind?: "item" | "run" }) {

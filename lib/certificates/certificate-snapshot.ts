@@ -53,6 +53,8 @@ export type CertificateSample = {
   manufacturer: string;
   shipmentLabNumber: string;
   receivedAt: string;
+  /** The roll's condition on arrival as recorded at receipt (its own remarks, else the shipment's). */
+  condition?: string;
   /** The custody steps from receipt to test, oldest first. */
   custody: Array<{ at: string; action: string; item: string; by: string }>;
 };
@@ -65,7 +67,8 @@ export type CertificateSnapshot = {
   verificationCode: string;
   verificationUrl: string;
   issuedAt: string;
-  lab: { name: string; address: string; accreditation: string | null };
+  /** timeZone: the IANA zone every time on the certificate is written in (absent on older snapshots: UTC). */
+  lab: { name: string; address: string; accreditation: string | null; timeZone?: string };
   client: { name: string; address: string | null };
   project: { code: string; name: string; siteName: string; siteLocation: string | null };
   specification: { name: string } | null;

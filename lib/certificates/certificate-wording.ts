@@ -2,6 +2,7 @@
  * How the certificate writes units, custody steps, roles and numbers. Pure, so the document and its
  * tests say the same thing.
  */
+import { formatDate, formatDateTime } from "../format/dates";
 import { ROLE_LABELS, type RoleName } from "../policy/permissions";
 
 /** The two statements every certificate carries (DOMAIN.md, "Cautions the software must carry"). */
@@ -17,7 +18,7 @@ export function prettyUnit(unit: string): string {
 
 const CUSTODY_WORDS: Record<string, string> = {
   RECEIVED: "Received", STORED: "Stored", MOVED: "Moved", CUT: "Cut", PREPARED: "Prepared", ASSIGNED: "Mounted in cell",
-  TEST_STARTED: "Test started", TESTED: "Tested", RETAINED: "Retained", DISPOSED: "Disposed", CORRECTED: "Corrected",
+  TEST_STARTED: "Test started", TESTED: "Tested", RETAINED: "Retained", DISPOSED: "Disposed", CORRECTED: "Corrected", WITHDRAWN: "Taken out of cell",
 };
 
 /** Text with its first letter capitalised, for table cells ("received" -> "Received"). */
@@ -60,14 +61,16 @@ export function conditionValue(value: number | null, unit: string, decimals = 1)
   return `${text} ${unit}`;
 }
 
-/** The date part of an ISO time ("2026-12-01"), as the lab writes dates; "—" when missing. */
-export function isoDate(iso: string | null): string {
-  return iso ? iso.slice(0, 10) : "—";
-}
-
-/** "2026-12-01 14:05 UTC" from an ISO time; "—" when missing. */
-export function isoDateTime(iso: string | null): string {
+/** The date of an ISO time in the lab's time zone ("2026-12-01"), as the lab writes dates; "—" when missing. */
+export function isoDate(iso: string | null, zone = "UTC"): string {
   if (!iso) return "—";
   const date = new Date(iso);
-  return Number.isNaN(date.getTime()) ? iso : `${date.toISOString().slice(0, 16).replace("T", " ")} UTC`;
+  return Number.isNaN(date.getTime()) ? iso.slice(0, 10) : formatDate(date, zone);
+}
+
+/** "2026-12-01 14:05 UTC" (or "... CET" in the lab's zone) from an ISO time; "—" when missing. */
+export function isoDateTime(iso: string | null, zone = "UTC"): string {
+  if (!iso) return "—";
+  const date = new Date(iso);
+  return Number.isNaN(date.getTime()) ? iso : formatDateTime(date, zone);
 }

@@ -6,7 +6,7 @@
 export const ITEM_STATES = ["RECEIVED", "STORED", "CUT", "PREPARED", "ASSIGNED", "UNDER_TEST", "TESTED", "RETAINED", "DISPOSED"] as const;
 export type ItemStateName = (typeof ITEM_STATES)[number];
 
-export const CUSTODY_ACTIONS = ["RECEIVED", "STORED", "MOVED", "CUT", "PREPARED", "ASSIGNED", "TEST_STARTED", "TESTED", "RETAINED", "DISPOSED"] as const;
+export const CUSTODY_ACTIONS = ["RECEIVED", "STORED", "MOVED", "CUT", "PREPARED", "ASSIGNED", "TEST_STARTED", "TESTED", "RETAINED", "DISPOSED", "WITHDRAWN"] as const;
 export type CustodyActionName = (typeof CUSTODY_ACTIONS)[number];
 
 export type ItemKind = "roll" | "coupon" | "specimen";
@@ -30,10 +30,11 @@ const COUPON: Table = {
   DISPOSED: {},
 };
 
+// WITHDRAWN takes a specimen out of its cell when its run is abandoned; it is kept (retained) or then disposed of.
 const SPECIMEN: Table = {
   PREPARED: { MOVED: "PREPARED", ASSIGNED: "ASSIGNED", RETAINED: "RETAINED" },
-  ASSIGNED: { TEST_STARTED: "UNDER_TEST", PREPARED: "PREPARED" },
-  UNDER_TEST: { TESTED: "TESTED" },
+  ASSIGNED: { TEST_STARTED: "UNDER_TEST", PREPARED: "PREPARED", WITHDRAWN: "RETAINED" },
+  UNDER_TEST: { TESTED: "TESTED", WITHDRAWN: "RETAINED" },
   TESTED: { MOVED: "TESTED", RETAINED: "RETAINED" },
   RETAINED: { MOVED: "RETAINED", DISPOSED: "DISPOSED" },
   DISPOSED: {},
@@ -47,6 +48,7 @@ export const INITIAL_STATE: Record<ItemKind, ItemStateName> = { roll: "RECEIVED"
 export const ACTION_WORDS: Record<CustodyActionName, string> = {
   RECEIVED: "receive", STORED: "store", MOVED: "move", CUT: "cut a coupon from", PREPARED: "prepare a specimen from",
   ASSIGNED: "assign to a cell", TEST_STARTED: "start testing", TESTED: "finish testing", RETAINED: "retain", DISPOSED: "dispose of",
+  WITHDRAWN: "take out of its cell",
 };
 
 export const STATE_WORDS: Record<ItemStateName, string> = {

@@ -1,10 +1,22 @@
-/** Dates as the lab writes them: 2026-12-01, and 2026-12-01 14:05 with the time in UTC. */
-export function formatDate(date: Date | null | undefined): string {
-  return date ? date.toISOString().slice(0, 10) : "—";
+import { zoneAbbreviation } from "./time-zone";
+
+/**
+ * Dates as the lab writes them: 2026-12-01, and 2026-12-01 14:05 CET with the zone named. Times are stored
+ * as instants and shown in the lab's time zone (`zone`, an IANA name; UTC when none is given).
+ */
+export function formatDate(date: Date | null | undefined, zone = "UTC"): string {
+  if (!date) return "—";
+  if (zone === "UTC") return date.toISOString().slice(0, 10);
+  return new Intl.DateTimeFormat("en-CA", { timeZone: zone, year: "numeric", month: "2-digit", day: "2-digit" }).format(date);
 }
 
-export function formatDateTime(date: Date | null | undefined): string {
-  return date ? `${date.toISOString().slice(0, 16).replace("T", " ")} UTC` : "—";
+export function formatDateTime(date: Date | null | undefined, zone = "UTC"): string {
+  if (!date) return "—";
+  if (zone === "UTC") return `${date.toISOString().slice(0, 16).replace("T", " ")} UTC`;
+  const text = new Intl.DateTimeFormat("en-CA", { timeZone: zone, year: "numeric", month: "2-digit", day: "2-digit", hour: "2-digit", minute: "2-digit", hourCycle: "h23" })
+    .format(date)
+    .replace(",", "");
+  return `${text} ${zoneAbbreviation(date, zone)}`;
 }
 
 /** "3 d", "5 h", "40 min": how long ago, for queues. */

@@ -7,7 +7,7 @@ export const ITEM_STATE_LABELS: Record<string, string> = {
 export const RUN_STATE_LABELS: Record<string, string> = {
   SET_UP: "Set up", SATURATING: "Saturating", EQUILIBRATING: "Equilibrating", PERMEATING: "Permeating",
   TERMINATED: "Terminated", POST_TEST_RECORDED: "Post-test recorded", SUBMITTED: "Awaiting review",
-  RETURNED: "Returned for changes", APPROVED: "Approved",
+  RETURNED: "Returned for changes", APPROVED: "Approved", ABANDONED: "Abandoned",
 };
 
 export const EQUIPMENT_KIND_LABELS: Record<string, string> = {

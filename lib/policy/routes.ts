@@ -7,6 +7,8 @@ import type { Action } from "./permissions";
 const ROUTE_ACTIONS: ReadonlyArray<readonly [prefix: string, action: Action]> = [
   ["/admin/users", "user.manage"],
   ["/admin/audit", "audit.view"],
+  ["/admin/clients", "client.manage"],
+  ["/admin/lab", "lab.configure"],
   ["/intake", "shipment.view"],
   ["/intake/new", "shipment.create"],
   ["/search", "workspace.view"],

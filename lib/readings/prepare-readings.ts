@@ -5,6 +5,7 @@
  */
 import { cumulativeInflowMl, cumulativeOutflowMl } from "@/lib/hydraulics/burettes";
 import { checkReadingSequence, type NeighbourReading, type SequenceField } from "./check-reading-sequence";
+import { formatDateTime } from "@/lib/format/dates";
 import type { PressureUnit } from "@/lib/units/pressure-entry";
 import { FUTURE_TOLERANCE_MS, type ReadingDraft } from "./reading-draft";
 
@@ -39,6 +40,8 @@ export function prepareReadings(input: {
   drafts: ReadonlyArray<{ label: string; draft: ReadingDraft }>;
   permeationStartedAt: Date;
   now: Date;
+  /** The lab's time zone, for times named in messages (UTC when not given). */
+  timeZone?: string;
   /** Burette cross-section areas from the burette panel's calibration, mm^2. */
   areasMm2: { inflow: number; outflow: number };
   /** null when the run has no reading yet: the first draft becomes the reference. */
@@ -61,7 +64,7 @@ export function prepareReadings(input: {
     const takenAt = draft.takenAt ?? new Date(start + (draft.elapsedS ?? 0) * 1000);
     const elapsedS = draft.takenAt ? (draft.takenAt.getTime() - start) / 1000 : (draft.elapsedS ?? 0);
     if (takenAt.getTime() > input.now.getTime() + FUTURE_TOLERANCE_MS)
-      problems.push({ index, field: "time", message: `${label}, time: ${formatLocal(takenAt)} is in the future; a reading is recorded after it is taken.` });
+      problems.push({ index, field: "time", message: `${label}, time: ${formatDateTime(takenAt, input.timeZone)} is in the future; a reading is recorded after it is taken.` });
     return {
       takenAt,
       elapsedS,
@@ -91,9 +94,4 @@ export function prepareReadings(input: {
   );
   problems.sort((a, b) => a.index - b.index);
   return { rows, problems };
-}
-
-function formatLocal(d: Date): string {
-  const pad = (n: number) => String(n).padStart(2, "0");
-  return `${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())} ${pad(d.getHours())}:${pad(d.getMinutes())}`;
 }

@@ -6,6 +6,7 @@
  */
 import { enteredPressureToPa, type PressureUnit } from "@/lib/units/pressure-entry";
 import type { ReadingDraft } from "./reading-draft";
+import { fromWallTime } from "../format/time-zone";
 
 export const READING_CSV_TARGETS = [
   "takenAt", "elapsed", "inflowLevelMm", "outflowLevelMm", "influentPressure", "effluentPressure", "cellPressure",
@@ -197,10 +198,11 @@ export function parseDecimalCell(text: string, decimalComma: boolean): number | 
 
 /**
  * A date-time cell: ISO 8601 (2026-03-02 08:00[:00], with a T, optionally a Z or offset) or day-first
- * with dots (02.03.2026 08:00). A time without a zone is local time, as the app's datetime inputs are.
- * Slashed dates are refused: 03/04/2026 is the 3rd of April or the 4th of March depending on the logger.
+ * with dots (02.03.2026 08:00). A time without a zone is wall-clock time in `timeZone` (the lab's; the
+ * runtime's own zone when none is given). Slashed dates are refused: 03/04/2026 is the 3rd of April or the
+ * 4th of March depending on the logger.
  */
-export function parseDateTimeCell(text: string): Date | string {
+export function parseDateTimeCell(text: string, timeZone?: string): Date | string {
   const t = text.trim();
   if (/^\d{1,2}\/\d{1,2}\/\d{2,4}/.test(t)) return "dates with slashes are ambiguous (day/month or month/day); export them as YYYY-MM-DD hh:mm, or map the elapsed-time column instead";
   let m = /^(\d{4})-(\d{2})-(\d{2})[T ](\d{1,2}):(\d{2})(?::(\d{2})(?:\.(\d+))?)?\s*(Z|[+-]\d{2}:?\d{2})?$/i.exec(t);
@@ -216,6 +218,10 @@ export function parseDateTimeCell(text: string): Date | string {
   }
   if (!parts) return "is not a date and time (write it as YYYY-MM-DD hh:mm)";
   const [y, mo, d, h, mi, s] = parts as [number, number, number, number, number, number];
+  if (timeZone) {
+    const pad = (n: number, w = 2) => String(n).padStart(w, "0");
+    return fromWallTime(`${pad(y, 4)}-${pad(mo)}-${pad(d)}T${pad(h)}:${pad(mi)}:${pad(s)}`, timeZone) ?? "is not a real date and time";
+  }
   const date = new Date(y, mo - 1, d, h, mi, s);
   if (date.getFullYear() !== y || date.getMonth() !== mo - 1 || date.getDate() !== d || h > 23 || mi > 59 || s > 59) return "is not a real date and time";
   return date;
@@ -230,7 +236,7 @@ const CHEMISTRY = ["influentEcMsPerM", "effluentEcMsPerM", "influentPh", "efflue
  * exact psi factor), or the list of what is wrong with it. Order, volume and temperature checks across
  * rows are checkReadingSequence's job; this judges each cell on its own.
  */
-export function applyReadingsMapping(parsed: ParsedReadingsCsv, mapping: ReadingsCsvMapping): MappedCsvRow[] {
+export function applyReadingsMapping(parsed: ParsedReadingsCsv, mapping: ReadingsCsvMapping, options: { timeZone?: string } = {}): MappedCsvRow[] {
   const decimalComma = parsed.separator !== ",";
   const toPa = (value: number) => enteredPressureToPa(value, mapping.pressureUnit);
   return parsed.rows.map(({ row, cells }) => {
@@ -269,7 +275,7 @@ export function applyReadingsMapping(parsed: ParsedReadingsCsv, mapping: Reading
     const takenAtIndex = where("takenAt");
     if (takenAtIndex >= 0) {
       const cell = cells[takenAtIndex]!;
-      const parsedDate = cell === "" ? null : parseDateTimeCell(cell);
+      const parsedDate = cell === "" ? null : parseDateTimeCell(cell, options.timeZone);
       if (parsedDate instanceof Date) draft.takenAt = parsedDate;
       else if (parsedDate === null) errors.push({ row, field: "takenAt", message: `${at(takenAtIndex)} (date and time): the cell is empty; every reading needs its time.` });
       else errors.push({ row, field: "takenAt", message: `${at(takenAtIndex)} (date and time): "${cell}" ${parsedDate}.` });

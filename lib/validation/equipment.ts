@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { PRESSURE_UNITS, enteredPressureToPa, type PressureUnit } from "../units/pressure-entry";
-import { optionalMeasured, pastDateTime, requiredText, versionSchema } from "./common";
+import { optionalMeasured, pastDateTime, reasonSchema, requiredText, versionSchema } from "./common";
 
 // Mirrors the EquipmentKind and EquipmentStatus enums of prisma/schema.prisma (lib/ may not import Prisma).
 export const EQUIPMENT_KINDS = ["PERMEAMETER_CELL", "BURETTE_PANEL", "PRESSURE_TRANSDUCER", "THERMOMETER"] as const;
@@ -106,11 +106,12 @@ export const recordCalibrationSchema = z
   );
 export type RecordCalibrationInput = z.input<typeof recordCalibrationSchema>;
 
-/** Putting equipment in or out of service, or retiring it; `version` refuses a change made on a stale screen. */
+/** Putting equipment in or out of service, or retiring it, with the reason; `version` refuses a change made on a stale screen. */
 export const setEquipmentStatusSchema = z.object({
   equipmentId: z.string().min(1),
   version: versionSchema,
   status: z.enum(EQUIPMENT_STATUSES, { message: "Choose a status." }),
+  reason: reasonSchema,
 });
 export type SetEquipmentStatusInput = z.input<typeof setEquipmentStatusSchema>;
 

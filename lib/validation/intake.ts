@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { readYesNo, YES_NO_HINT } from "../custody/yes-no";
 import { optionalMeasured, pastDateTime, reasonSchema, requiredText, versionSchema } from "./common";
 
 /** One roll as logged on arrival; the same schema judges a form row and a pasted spreadsheet row. */
@@ -9,10 +10,9 @@ export const rollEntrySchema = z.object({
   manufacturer: requiredText("the manufacturer", 200),
   sampleLengthMm: optionalMeasured("the sample length (mm)", { positive: true, max: 100_000 }),
   sampleWidthMm: optionalMeasured("the sample width (mm)", { positive: true, max: 10_000 }),
-  machineDirectionMarked: z.preprocess(
-    (v) => (typeof v === "string" ? ["yes", "y", "true", "1", "x", "marked"].includes(v.trim().toLowerCase()) : v),
-    z.boolean().default(false),
-  ),
+  // Only the words readYesNo knows; anything else is refused, never read as "marked".
+  machineDirectionMarked: z.preprocess((v) => readYesNo(v) ?? v, z.boolean({ message: `Write whether the machine direction is marked as ${YES_NO_HINT}.` })),
+  conditionNotes: z.string().trim().max(500, "Keep the roll's condition to 500 characters.").default(""),
 });
 export type RollEntry = z.output<typeof rollEntrySchema>;
 
@@ -25,6 +25,7 @@ export const ROLL_PASTE_COLUMNS = [
   { key: "sampleLengthMm", labels: ["length", "length mm", "sample length", "sample length mm"] },
   { key: "sampleWidthMm", labels: ["width", "width mm", "sample width", "sample width mm"] },
   { key: "machineDirectionMarked", labels: ["md", "md marked", "machine direction", "machine direction marked"] },
+  { key: "conditionNotes", labels: ["condition", "condition on arrival", "roll condition", "remarks"] },
 ] as const;
 
 export const shipmentDetailsSchema = z.object({
@@ -45,7 +46,7 @@ export const acknowledgeShipmentSchema = z.object({ shipmentId: z.string().min(1
 
 /** A change to an acknowledged receipt: one field, its new value and why. */
 export const SHIPMENT_CORRECTABLE_FIELDS = ["deliveredBy", "receivedAt", "conditionNotes"] as const;
-export const ROLL_CORRECTABLE_FIELDS = ["rollNumber", "lotNumber", "product", "manufacturer", "sampleLengthMm", "sampleWidthMm", "machineDirectionMarked"] as const;
+export const ROLL_CORRECTABLE_FIELDS = ["rollNumber", "lotNumber", "product", "manufacturer", "sampleLengthMm", "sampleWidthMm", "machineDirectionMarked", "conditionNotes"] as const;
 
 export const correctReceiptSchema = z.object({
   target: z.enum(["shipment", "roll"]),

@@ -14,6 +14,8 @@ export const assignSpecimenSchema = z
     transducerId: z.string().min(1, "Choose the pressure transducer."),
     thermometerId: z.string().optional().transform((v) => v || undefined),
     methodCode: z.enum(["D5887", "D5084", "D6766"], { message: "Choose the test method." }),
+    // When the specimen actually went into the cell, not when the form was sent.
+    mountedAt: pastDateTime("when the specimen was mounted"),
     pressureUnit: pressureUnitSchema,
     effectiveStress: optionalMeasured("the effective stress", { min: 0, max: 5000 }),
     permeantName: z.string().trim().max(200).optional(),

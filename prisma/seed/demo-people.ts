@@ -8,6 +8,8 @@ export const DEMO_LAB = {
   name: "Quillfen Liner Laboratory",
   address: "Unit 7, Tarnwick Science Yard, Tarnwick",
   accreditation: "Demo accreditation no. 0000 (invented)",
+  // A zone an hour off UTC in winter, so that the demo shows times as the lab's clock reads them.
+  timeZone: "Europe/Berlin",
 };
 
 export type DemoUser = { key: string; name: string; email: string; role: Role; org?: string };
@@ -25,7 +27,9 @@ export const DEMO_CLIENTS = [
     code: "MWA",
     name: "Marrowdale Waste Authority",
     contactEmail: "liners@marrowdale.test",
-    user: { key: "clientA", name: "Hollis Reddaway", email: "portal@marrowdale.test" },
+    address: "Marrowdale Civic Offices, 2 Fenwater Row, Marrowdale",
+    user: { key: "clientA", name: "Hollis Reddaway", email: "portal@marrowdale.test", jobTitle: "Landfill engineer" },
+    otherContact: { name: "Ottilie Brackwood", email: "liners@marrowdale.test", jobTitle: "Contracts officer" },
     projects: [
       { code: "MWA-C4", name: "Cell 4 landfill expansion", siteName: "Marrowdale Tip, Cell 4" },
       { code: "MWA-LL", name: "Leachate lagoon relining", siteName: "Marrowdale Tip, lagoon 2" },
@@ -35,14 +39,18 @@ export const DEMO_CLIENTS = [
     code: "OMC",
     name: "Ostrel Mining Cooperative",
     contactEmail: "qa@ostrel.test",
-    user: { key: "clientB", name: "Junia Castellar", email: "portal@ostrel.test" },
+    address: "Ostrel Pit site office, Quarry Lane, Ostrel",
+    user: { key: "clientB", name: "Junia Castellar", email: "portal@ostrel.test", jobTitle: "Quality lead" },
+    otherContact: { name: "Dervla Ashcombe", email: "qa@ostrel.test", jobTitle: "Site manager" },
     projects: [{ code: "OMC-TPB", name: "Tailings pond B lining", siteName: "Ostrel Pit, pond B" }],
   },
   {
     code: "FVE",
     name: "Fennick & Vane Earthworks",
     contactEmail: "cqa@fennickvane.test",
-    user: { key: "clientC", name: "Piers Ambleford", email: "portal@fennickvane.test" },
+    address: "14 Millrace Yard, Quarnby",
+    user: { key: "clientC", name: "Piers Ambleford", email: "portal@fennickvane.test", jobTitle: "CQA inspector" },
+    otherContact: { name: "Rufus Tenterden", email: "cqa@fennickvane.test", jobTitle: "Project director" },
     projects: [{ code: "FVE-SP", name: "Stormwater pond cap", siteName: "Quarnby Flats pond" }],
   },
 ] as const;

@@ -1,5 +1,7 @@
 // Builds the invented demo scenario: rolls at every stage of the chain so that every screen shows something.
-import type { ItemState, Prisma } from "@/lib/generated/prisma/client";
+// Every record keeps one order of events (received <= cut <= prepared <= mounted <= stages <= readings <=
+// terminated <= reviewed), and every item's custody ledger leads step by step to the state it is in.
+import type { CustodyAction, ItemState, Prisma } from "@/lib/generated/prisma/client";
 import type { Tx } from "@/lib/server/db/transaction";
 import { allocateLabNumber } from "@/lib/server/db/allocate-lab-number";
 import { hashPassword } from "@/lib/server/auth/password";
@@ -8,13 +10,18 @@ import { DEMO_SPEC_LIMITS } from "./demo-method-defaults";
 import { makeDemoReadings } from "./demo-readings";
 
 const DAY = 86_400_000;
+const HOUR = 3_600_000;
 const SPECIMEN_AREA_M2 = (Math.PI * 0.1 ** 2) / 4; // 100 mm die, common practice
+// The burette panels' calibrated areas (m^2, as stored) and the same in mm^2 for the readings.
+const BURETTE_AREAS_M2 = { inflowBuretteAreaM2: 3.14e-5, outflowBuretteAreaM2: 3.12e-5 };
+const BURETTE_AREAS_MM2 = { inflow: 31.4, outflow: 31.2 };
 
 type Ids = Record<string, string>;
+type Item = { kind: "roll" | "coupon" | "specimen"; id: string };
 
 export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void> {
   const ago = (days: number) => new Date(now.getTime() - days * DAY);
-  await tx.laboratory.create({ data: { id: "lab", ...DEMO_LAB } });
+  await tx.laboratory.upsert({ where: { id: "lab" }, create: { id: "lab", ...DEMO_LAB }, update: DEMO_LAB });
 
   // People. One hash per distinct password is enough for the demo; each user still gets their own row.
   const passwordHash = await hashPassword(DEMO_PASSWORD);
@@ -24,11 +31,13 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
   const orgs: Ids = {};
   const projects: Ids = {};
   for (const c of DEMO_CLIENTS) {
-    const org = await tx.clientOrganization.create({ data: { code: c.code, name: c.name, contactEmail: c.contactEmail } });
+    const org = await tx.clientOrganization.create({ data: { code: c.code, name: c.name, address: c.address, contactEmail: c.contactEmail } });
     orgs[c.code] = org.id;
     users[c.user.key] = (await tx.user.create({
       data: { name: c.user.name, email: c.user.email, role: "CLIENT_USER", clientOrganizationId: org.id, passwordHash },
     })).id;
+    await tx.clientContact.create({ data: { clientOrganizationId: org.id, name: c.user.name, email: c.user.email, jobTitle: c.user.jobTitle, userId: users[c.user.key]! } });
+    await tx.clientContact.create({ data: { clientOrganizationId: org.id, name: c.otherContact.name, email: c.otherContact.email, jobTitle: c.otherContact.jobTitle } });
     for (const p of c.projects) {
       const project = await tx.project.create({ data: { ...p, clientOrganizationId: org.id } });
       projects[p.code] = project.id;
@@ -45,6 +54,10 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
 
   const equipment = await createEquipment(tx, users.admin!, now);
 
+  // One custody event: what happened to which item, from which state to which, who, when and where.
+  const custody = async (item: Item, action: CustodyAction, fromState: ItemState | null, toState: ItemState, actorId: string, at: Date, extra: { toLocationId?: string | null; note?: string } = {}) =>
+    tx.custodyEvent.create({ data: { action, [`${item.kind}Id`]: item.id, fromState, toState, actorId, occurredAt: at, toLocationId: extra.toLocationId ?? null, note: extra.note ?? "" } });
+
   // Shipments and rolls.
   const ship = async (projectCode: string, orgCode: string, daysAgo: number, acknowledged: boolean, deliveredBy: string, notes: string) => {
     const receivedAt = ago(daysAgo);
@@ -53,51 +66,62 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
         labNumber: await allocateLabNumber(tx, "shipment", receivedAt),
         clientOrganizationId: orgs[orgCode]!, projectId: projects[projectCode]!, deliveredBy, receivedAt,
         receivedById: users.clerk!, conditionNotes: notes,
-        ...(acknowledged ? { acknowledgedAt: new Date(receivedAt.getTime() + 3_600_000), acknowledgedById: users.clerk! } : {}),
+        ...(acknowledged ? { acknowledgedAt: new Date(receivedAt.getTime() + HOUR), acknowledgedById: users.clerk! } : {}),
       },
     });
   };
-  const roll = async (shipment: { id: string; projectId: string; receivedAt: Date }, n: number, state: ItemState, location: string) => {
+  // Logged as received, then stored a few minutes later; `condition` is the roll's own remark, if any.
+  const roll = async (shipment: { id: string; labNumber: string; projectId: string; receivedAt: Date }, n: number, location: string, condition = "") => {
     const created = await tx.roll.create({
       data: {
         labNumber: await allocateLabNumber(tx, "roll", shipment.receivedAt),
         shipmentId: shipment.id, projectId: shipment.projectId, rollNumber: `R-${4100 + n}`, lotNumber: `L${2260 + Math.floor(n / 3)}`,
         product: "Needle-punched GCL, powdered sodium bentonite, nominal 4.8 kg/m²", manufacturer: "Orrin Textile Works (invented)",
-        sampleLengthMm: 1000, sampleWidthMm: 1200, machineDirectionMarked: n % 2 === 0, state, storageLocationId: locations[location]!,
+        sampleLengthMm: 1000, sampleWidthMm: 1200, machineDirectionMarked: n % 2 === 0, conditionNotes: condition, state: "STORED", storageLocationId: locations[location]!,
       },
     });
-    await tx.custodyEvent.create({ data: { action: "RECEIVED", rollId: created.id, toState: "RECEIVED", actorId: users.clerk!, occurredAt: shipment.receivedAt } });
-    await tx.custodyEvent.create({ data: { action: "STORED", rollId: created.id, fromState: "RECEIVED", toState: "STORED", toLocationId: locations[location]!, actorId: users.clerk!, occurredAt: shipment.receivedAt } });
-    return created;
+    const item: Item = { kind: "roll", id: created.id };
+    await custody(item, "RECEIVED", null, "RECEIVED", users.clerk!, shipment.receivedAt, { note: `Shipment ${shipment.labNumber}` });
+    await custody(item, "STORED", "RECEIVED", "STORED", users.clerk!, new Date(shipment.receivedAt.getTime() + 10 * 60_000), { toLocationId: locations[location]! });
+    return { ...created, item, state: "STORED" as ItemState };
+  };
+  // A roll's state as the seed moves it on, and the event that moves it.
+  const moveRoll = async (r: { item: Item; state: ItemState }, action: CustodyAction, toState: ItemState, actorId: string, at: Date, note: string) => {
+    await custody(r.item, action, r.state, toState, actorId, at, { note });
+    r.state = toState;
+    await tx.roll.update({ where: { id: r.item.id }, data: { state: toState } });
   };
 
   const s1 = await ship("MWA-C4", "MWA", 21, true, "Carrier: Quernbeck Haulage (invented), driver signed", "Three rolls, wrapped, one corner of the outer film torn; liner undamaged.");
-  const certifiedRoll = await roll(s1, 1, "TESTED", "RETAIN-1");
-  const reviewRoll = await roll(s1, 2, "UNDER_TEST", "HUMID-1");
-  const testingRoll = await roll(s1, 3, "UNDER_TEST", "HUMID-1");
+  const certifiedRoll = await roll(s1, 1, "RETAIN-1", "Outer film torn at one corner; liner undamaged.");
+  const reviewRoll = await roll(s1, 2, "HUMID-1");
+  const testingRoll = await roll(s1, 3, "HUMID-1");
   const s2 = await ship("MWA-LL", "MWA", 1, false, "Client's site engineer, by van", "Two rolls, dry, wrapping intact.");
-  await roll(s2, 4, "RECEIVED", "RACK-A1");
-  await roll(s2, 5, "RECEIVED", "RACK-A1");
+  await roll(s2, 4, "RACK-A1");
+  await roll(s2, 5, "RACK-A1");
   const s3 = await ship("OMC-TPB", "OMC", 9, true, "Courier parcel 58-221 (invented)", "Samples cut on site, rolled on cores, labelled.");
-  const cutRoll = await roll(s3, 6, "CUT", "RACK-A2");
-  const preparedRoll = await roll(s3, 7, "CUT", "RACK-A2");
-  await roll(s3, 8, "STORED", "RACK-A2");
-  const s4 = await ship("FVE-SP", "FVE", 0, false, "Fennick & Vane site crew", "One roll sample, damp on one edge; noted to client.");
-  await roll(s4, 9, "RECEIVED", "RACK-A1");
+  const cutRoll = await roll(s3, 6, "RACK-A2");
+  const preparedRoll = await roll(s3, 7, "RACK-A2");
+  await roll(s3, 8, "RACK-A2");
+  const s4 = await ship("FVE-SP", "FVE", 0.1, false, "Fennick & Vane site crew", "One roll sample, damp on one edge; noted to client.");
+  await roll(s4, 9, "RACK-A1", "Damp along one long edge.");
 
-  // Coupons and specimens along the chain.
-  const cutCoupon = async (rollId: string, daysAgo: number, tech: string) => {
+  // Coupons and specimens along the chain: each cut is a step of its roll, each specimen a step of its coupon.
+  const cutCoupon = async (r: Awaited<ReturnType<typeof roll>>, daysAgo: number, tech: string) => {
+    const cutAt = ago(daysAgo);
     const coupon = await tx.coupon.create({
-      data: { labNumber: await allocateLabNumber(tx, "coupon", ago(daysAgo)), rollId, positionInSample: "Centre, 300 mm from leading edge", lengthMm: 300, widthMm: 300, cutById: tech, cutAt: ago(daysAgo), storageLocationId: locations["HUMID-1"]! },
+      data: { labNumber: await allocateLabNumber(tx, "coupon", cutAt), rollId: r.id, positionInSample: "Centre, 300 mm from leading edge", lengthMm: 300, widthMm: 300, cutById: tech, cutAt, storageLocationId: locations["HUMID-1"]! },
     });
-    await tx.custodyEvent.create({ data: { action: "CUT", couponId: coupon.id, toState: "CUT", actorId: tech, occurredAt: ago(daysAgo) } });
+    await moveRoll(r, "CUT", r.state === "STORED" ? "CUT" : r.state, tech, cutAt, `Coupon ${coupon.labNumber}`);
+    await custody({ kind: "coupon", id: coupon.id }, "CUT", null, "CUT", tech, cutAt, { toLocationId: locations["HUMID-1"]!, note: `From roll ${r.labNumber}` });
     return coupon;
   };
-  const prepare = async (couponId: string, daysAgo: number, tech: string, method: string, state: ItemState) => {
+  const prepare = async (coupon: { id: string; labNumber: string }, daysAgo: number, tech: string) => {
+    const preparedAt = ago(daysAgo);
     const specimen = await tx.specimen.create({
       data: {
-        labNumber: await allocateLabNumber(tx, "specimen", ago(daysAgo)), couponId, dieDiameterMm: 100, initialThicknessMm: 6.8, initialMassG: 46.2,
-        moistureContentPct: 11.4, intendedMethodCode: method, preparedById: tech, preparedAt: ago(daysAgo), state, storageLocationId: locations["HUMID-1"]!,
+        labNumber: await allocateLabNumber(tx, "specimen", preparedAt), couponId: coupon.id, dieDiameterMm: 100, initialThicknessMm: 6.8, initialMassG: 46.2,
+        moistureContentPct: 11.4, intendedMethodCode: "D5887", preparedById: tech, preparedAt, state: "PREPARED", storageLocationId: locations["HUMID-1"]!,
         checklist: { create: [
           { itemKey: "edges-sealed", question: "Specimen edges sealed with bentonite paste against side-wall leakage", answer: true },
           { itemKey: "no-bridging-fibres", question: "No fibres bridging the two geotextiles at the cut edge", answer: true },
@@ -105,33 +129,38 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
         ] },
       },
     });
-    await tx.custodyEvent.create({ data: { action: "PREPARED", specimenId: specimen.id, toState: "PREPARED", actorId: tech, occurredAt: ago(daysAgo) } });
+    await custody({ kind: "coupon", id: coupon.id }, "PREPARED", "CUT", "CUT", tech, preparedAt, { note: `Specimen ${specimen.labNumber}` });
+    await custody({ kind: "specimen", id: specimen.id }, "PREPARED", null, "PREPARED", tech, preparedAt, { toLocationId: locations["HUMID-1"]!, note: `From coupon ${coupon.labNumber}` });
     return specimen;
   };
 
-  await cutCoupon(cutRoll.id, 5, users.technician!);
-  const waitingCoupon = await cutCoupon(preparedRoll.id, 4, users.technician2!);
-  await prepare(waitingCoupon.id, 3, users.technician2!, "D5887", "PREPARED");
+  await cutCoupon(cutRoll, 5, users.technician!);
+  // The specimen that waits for a cell was prepared a week ago, so a run started on it may be dated back.
+  const waitingCoupon = await cutCoupon(preparedRoll, 8, users.technician2!);
+  await prepare(waitingCoupon, 7, users.technician2!);
 
-  const certifiedSpecimen = await prepare((await cutCoupon(certifiedRoll.id, 19, users.technician!)).id, 19, users.technician!, "D5887", "RETAINED");
-  const reviewCoupon = await cutCoupon(reviewRoll.id, 12, users.technician2!);
-  const reviewSpecimen = await prepare(reviewCoupon.id, 12, users.technician2!, "D5887", "TESTED");
-  const secondReviewSpecimen = await prepare(reviewCoupon.id, 12, users.technician!, "D5887", "TESTED");
-  const testingSpecimen = await prepare((await cutCoupon(testingRoll.id, 6, users.technician!)).id, 6, users.technician!, "D5887", "UNDER_TEST");
+  const certifiedSpecimen = await prepare(await cutCoupon(certifiedRoll, 20, users.technician!), 19.5, users.technician!);
+  const reviewCoupon = await cutCoupon(reviewRoll, 12.5, users.technician2!);
+  const reviewSpecimen = await prepare(reviewCoupon, 12.2, users.technician2!);
+  const secondReviewSpecimen = await prepare(reviewCoupon, 12.1, users.technician!);
+  const testingSpecimen = await prepare(await cutCoupon(testingRoll, 6.5, users.technician!), 6.2, users.technician!);
 
-  // Runs: one approved and certified, one awaiting review, one permeating now.
-  const makeRun = async (specimenId: string, cell: string, tech: string, daysAgo: number, state: Prisma.RunCreateInput["state"], readingCount: number) => {
+  // Runs: mounted, saturated, held, permeated (readings every 6 h); `ended` terminates them.
+  const makeRun = async (specimen: { id: string; labNumber: string }, r: Awaited<ReturnType<typeof roll>>, cell: string, tech: string, daysAgo: number, state: Prisma.RunCreateInput["state"], readingCount: number) => {
+    const mountedAt = ago(daysAgo);
     const run = await tx.run.create({
       data: {
-        labNumber: await allocateLabNumber(tx, "run", ago(daysAgo)), specimenId, cellId: equipment[cell]!, methodCode: "D5887", state,
-        performedById: tech, assignedAt: ago(daysAgo), effectiveStressPa: 34_500,
+        labNumber: await allocateLabNumber(tx, "run", mountedAt), specimenId: specimen.id, cellId: equipment[cell]!, methodCode: "D5887", state,
+        performedById: tech, assignedAt: mountedAt, effectiveStressPa: 34_500,
         equipment: { create: [
           { equipmentId: equipment["BP-01"]!, calibrationId: equipment["BP-01:cal"]!, role: "burette panel" },
           { equipmentId: equipment["PT-01"]!, calibrationId: equipment["PT-01:cal"]!, role: "pressure transducer" },
         ] },
       },
     });
-    await tx.custodyEvent.create({ data: { action: "ASSIGNED", specimenId, fromState: "PREPARED", toState: "ASSIGNED", actorId: tech, occurredAt: ago(daysAgo), note: `Mounted in ${cell}` } });
+    const specimenItem: Item = { kind: "specimen", id: specimen.id };
+    await custody(specimenItem, "ASSIGNED", "PREPARED", "ASSIGNED", tech, mountedAt, { note: `Run ${run.labNumber} in ${cell}` });
+    // Saturation from the mount, the equilibration hold a day later, permeation two days after that.
     const stages = [
       { kind: "SATURATION" as const, cell: 345_000, inf: 310_000, eff: 310_000, start: 0, end: 1 },
       { kind: "EQUILIBRATION" as const, cell: 552_000, inf: 517_000, eff: 517_000, start: 1, end: 3 },
@@ -140,33 +169,52 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
     for (const [i, st] of stages.entries())
       await tx.runStage.create({ data: { runId: run.id, sequence: i + 1, kind: st.kind, cellPressurePa: st.cell, influentPressurePa: st.inf, effluentPressurePa: st.eff, startedAt: ago(daysAgo - st.start), endedAt: st.end === null ? null : ago(daysAgo - st.end), recordedById: tech } });
     const start = ago(daysAgo - 3);
-    const readings = makeDemoReadings({ fluxM3PerM2PerS: 2.4e-9, areaM2: SPECIMEN_AREA_M2, count: readingCount, stepH: 6, headPa: 14_000 });
-    await tx.reading.createMany({
-      data: readings.map((r, i) => ({ runId: run.id, sequence: i + 1, takenAt: new Date(start.getTime() + r.elapsedS * 1000), ...r, recordedById: tech })),
+    await custody(specimenItem, "TEST_STARTED", "ASSIGNED", "UNDER_TEST", tech, start, { note: `Permeation of ${run.labNumber}` });
+    if (r.state !== "UNDER_TEST") await moveRoll(r, "TEST_STARTED", "UNDER_TEST", tech, start, `Specimen ${specimen.labNumber}`);
+    const readings = makeDemoReadings({
+      fluxM3PerM2PerS: 2.4e-9, areaM2: SPECIMEN_AREA_M2, count: readingCount, stepH: 6, headPa: 14_000,
+      buretteAreasMm2: BURETTE_AREAS_MM2, startLevelsMm: { inflow: 620, outflow: 95 },
     });
-    return run;
+    await tx.reading.createMany({
+      data: readings.map((r, i) => ({
+        runId: run.id, sequence: i + 1, takenAt: new Date(start.getTime() + r.elapsedS * 1000), ...r,
+        influentPressurePa: 531_000, effluentPressurePa: 517_000, cellPressurePa: 552_000, recordedById: tech,
+      })),
+    });
+    const ended = async (terminatedDaysAgo: number, submittedDaysAgo: number, post: { thicknessMm: number; massG: number; observations: string }) => {
+      const terminatedAt = ago(terminatedDaysAgo);
+      await tx.run.update({ where: { id: run.id }, data: { terminatedAt, terminationKind: "CRITERIA_MET", postTestThicknessMm: post.thicknessMm, postTestMassG: post.massG, postTestObservations: post.observations, postTestRecordedAt: terminatedAt, submittedAt: ago(submittedDaysAgo) } });
+      await tx.runStage.updateMany({ where: { runId: run.id, kind: "PERMEATION" }, data: { endedAt: terminatedAt } });
+      await custody(specimenItem, "TESTED", "UNDER_TEST", "TESTED", tech, terminatedAt, { note: "Termination criteria met" });
+      await tx.specimen.update({ where: { id: specimen.id }, data: { state: "TESTED" } });
+      return terminatedAt;
+    };
+    await tx.specimen.update({ where: { id: specimen.id }, data: { state: "UNDER_TEST" } });
+    return { run, ended };
   };
 
-  const approvedRun = await makeRun(certifiedSpecimen.id, "CELL-01", users.technician!, 18, "APPROVED", 12);
-  await tx.run.update({ where: { id: approvedRun.id }, data: { terminatedAt: ago(12), terminationKind: "CRITERIA_MET", postTestThicknessMm: 5.9, postTestMassG: 71.3, postTestObservations: "Uniform hydration; no channels seen on the cut section.", submittedAt: ago(12) } });
-  await tx.runStage.updateMany({ where: { runId: approvedRun.id, kind: "PERMEATION" }, data: { endedAt: ago(12) } });
-  await tx.review.create({ data: { runId: approvedRun.id, reviewerId: users.qa!, decision: "APPROVED", comments: "Criteria met; checklist complete.", createdAt: ago(11) } });
-  const result = await tx.result.create({ data: { runId: approvedRun.id, property: "INDEX_FLUX", value: 2.4e-9, unit: "m3/m2/s", expandedUncertainty: 0.2e-9, temperatureC: 20.6, unitWeightBasis: "conventional 9.81 kN/m3", approvedById: users.qa!, approvedAt: ago(11) } });
+  // One run approved and certified (its specimen then retained), two awaiting review, one permeating now.
+  const approved = await makeRun(certifiedSpecimen, certifiedRoll, "CELL-01", users.technician!, 18, "APPROVED", 12);
+  await approved.ended(12, 12, { thicknessMm: 5.9, massG: 71.3, observations: "Uniform hydration; no channels seen on the cut section." });
+  await moveRoll(certifiedRoll, "TESTED", "TESTED", users.technician!, ago(12), `Specimen ${certifiedSpecimen.labNumber} tested`);
+  await tx.review.create({ data: { runId: approved.run.id, reviewerId: users.qa!, decision: "APPROVED", comments: "Criteria met; checklist complete.", createdAt: ago(11) } });
+  const result = await tx.result.create({ data: { runId: approved.run.id, property: "INDEX_FLUX", value: 2.4e-9, unit: "m3/m2/s", expandedUncertainty: 0.2e-9, temperatureC: 20.6, unitWeightBasis: "conventional 9.81 kN/m3", approvedById: users.qa!, approvedAt: ago(11) } });
   const certificate = await tx.certificate.create({ data: { number: await allocateLabNumber(tx, "certificate", ago(10)), projectId: projects["MWA-C4"]!, clientOrganizationId: orgs.MWA! } });
   // Drafted with its results, then issued: the database keeps an issued revision's parts fixed.
   const revision = await tx.certificateRevision.create({ data: { certificateId: certificate.id, revision: 1, status: "DRAFT", verificationCode: "DEMO-7Q4K-2M9X", results: { create: [{ resultId: result.id }] } } });
   await tx.certificateRevision.update({ where: { id: revision.id }, data: { status: "ISSUED", issuedAt: ago(10) } });
   await tx.signature.create({ data: { revisionId: revision.id, signerId: users.qa!, signerRole: "QA_MANAGER", meaning: "Reviewed and approved for issue", signedAt: ago(10) } });
+  const retainedAt = ago(9.9);
+  await custody({ kind: "specimen", id: certifiedSpecimen.id }, "RETAINED", "TESTED", "RETAINED", users.technician!, retainedAt, { toLocationId: locations["RETAIN-1"]!, note: "Retained after certificate issue" });
+  await tx.specimen.update({ where: { id: certifiedSpecimen.id }, data: { state: "RETAINED", storageLocationId: locations["RETAIN-1"]!, retainUntil: new Date(retainedAt.getTime() + 90 * DAY) } });
 
-  const submittedRun = await makeRun(reviewSpecimen.id, "CELL-02", users.technician2!, 11, "SUBMITTED", 12);
-  await tx.run.update({ where: { id: submittedRun.id }, data: { terminatedAt: ago(5), terminationKind: "CRITERIA_MET", postTestThicknessMm: 6.1, postTestMassG: 70.8, postTestObservations: "Even swelling.", submittedAt: ago(4) } });
-  await tx.runStage.updateMany({ where: { runId: submittedRun.id, kind: "PERMEATION" }, data: { endedAt: ago(5) } });
+  const submitted = await makeRun(reviewSpecimen, reviewRoll, "CELL-02", users.technician2!, 11, "SUBMITTED", 12);
+  await submitted.ended(5, 4, { thicknessMm: 6.1, massG: 70.8, observations: "Even swelling." });
   // A second run of the same roll waits for review too, so QA has one to return and one to approve.
-  const secondSubmittedRun = await makeRun(secondReviewSpecimen.id, "CELL-05", users.technician!, 11, "SUBMITTED", 12);
-  await tx.run.update({ where: { id: secondSubmittedRun.id }, data: { terminatedAt: ago(5), terminationKind: "CRITERIA_MET", postTestThicknessMm: 6.0, postTestMassG: 71.0, postTestObservations: "Even swelling; no channels.", submittedAt: ago(4) } });
-  await tx.runStage.updateMany({ where: { runId: secondSubmittedRun.id, kind: "PERMEATION" }, data: { endedAt: ago(5) } });
+  const secondSubmitted = await makeRun(secondReviewSpecimen, reviewRoll, "CELL-05", users.technician!, 11, "SUBMITTED", 12);
+  await secondSubmitted.ended(5, 4, { thicknessMm: 6.0, massG: 71.0, observations: "Even swelling; no channels." });
 
-  await makeRun(testingSpecimen.id, "CELL-03", users.technician!, 5, "PERMEATING", 7);
+  await makeRun(testingSpecimen, testingRoll, "CELL-03", users.technician!, 5, "PERMEATING", 7);
 }
 
 async function createEquipment(tx: Tx, adminId: string, now: Date): Promise<Ids> {
@@ -181,7 +229,7 @@ async function createEquipment(tx: Tx, adminId: string, now: Date): Promise<Ids>
     ids[`${assetTag}:cal`] = cal.id;
   };
   for (let n = 1; n <= 6; n++) await add(`CELL-0${n}`, "PERMEAMETER_CELL", `Flexible-wall permeameter cell ${n}`, 1_000_000, n === 6 ? 400 : 60 + n * 20);
-  for (let n = 1; n <= 3; n++) await add(`BP-0${n}`, "BURETTE_PANEL", `Burette panel ${n}`, 1_000_000, 90, { inflowBuretteAreaM2: 3.14e-5, outflowBuretteAreaM2: 3.12e-5 });
+  for (let n = 1; n <= 3; n++) await add(`BP-0${n}`, "BURETTE_PANEL", `Burette panel ${n}`, 1_000_000, 90, BURETTE_AREAS_M2);
   await add("PT-01", "PRESSURE_TRANSDUCER", "Differential pressure transducer 0-100 kPa", 700_000, 120);
   await add("PT-02", "PRESSURE_TRANSDUCER", "Cell pressure transducer 0-1000 kPa", 1_000_000, 350);
   await add("TH-01", "THERMOMETER", "Laboratory thermometer", null, 200);

@@ -6,11 +6,13 @@ import { can } from "@/lib/policy/permissions";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getCellBoard } from "@/lib/server/runs/get-cell-board";
 import styles from "./cell-board.module.css";
+import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 
 export const metadata = { title: "Cell board" };
 
 export default async function CellBoardPage() {
   const actor = await requirePageUser("run.view");
+  const zone = await getLabTimeZone();
   const cells = await getCellBoard({ actor });
   const now = new Date();
   const free = cells.filter((c) => !c.run).length;
@@ -30,8 +32,8 @@ export default async function CellBoardPage() {
             {cell.run ? (
               <>
                 <p><Link className="mono" href={`/runs/${cell.run.labNumber}`}>{cell.run.labNumber}</Link> · specimen <span className="mono">{cell.run.specimen.labNumber}</span></p>
-                <p className="muted">{cell.run.performedBy.name} · ASTM {cell.run.methodCode} · since {formatDateTime(cell.run.assignedAt)} ({formatAge(cell.run.assignedAt, now)})</p>
-                <p data-testid="projected-end">{cell.run.criteriaMet ? <strong>Criteria met: ready to terminate.</strong> : cell.run.projectedEnd ? <>Projected end: <strong>{formatDateTime(cell.run.projectedEnd)}</strong></> : <span className="muted">{cell.run.projectionReason}</span>}</p>
+                <p className="muted">{cell.run.performedBy.name} · ASTM {cell.run.methodCode} · since {formatDateTime(cell.run.assignedAt, zone)} ({formatAge(cell.run.assignedAt, now)})</p>
+                <p data-testid="projected-end">{cell.run.criteriaMet ? <strong>Criteria met: ready to terminate.</strong> : cell.run.projectedEnd ? <>Projected end: <strong>{formatDateTime(cell.run.projectedEnd, zone)}</strong></> : <span className="muted">{cell.run.projectionReason}</span>}</p>
               </>
             ) : (
               <>

@@ -4,11 +4,13 @@ import { can } from "@/lib/policy/permissions";
 import { formatDate } from "@/lib/format/dates";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { listCertificates } from "@/lib/server/certificates/list-certificates";
+import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 
 export const metadata = { title: "Certificates" };
 
 export default async function CertificatesPage() {
   const actor = await requirePageUser("certificate.view");
+  const zone = await getLabTimeZone();
   const certificates = await listCertificates({ actor });
   return (
     <>
@@ -26,7 +28,7 @@ export default async function CertificatesPage() {
               return (
                 <tr key={c.id}>
                   <td><Link className="mono" href={`/certificates/${c.number}`}>{c.number}</Link></td><td>{c.clientOrganization.name}<div className="muted">{c.project.name}</div></td>
-                  <td>{latest?.revision ?? "—"}</td><td>{formatDate(latest?.issuedAt)}</td><td>{latest ? <span className="state">{latest.status.toLowerCase()}</span> : "—"}</td>
+                  <td>{latest?.revision ?? "—"}</td><td>{formatDate(latest?.issuedAt, zone)}</td><td>{latest ? <span className="state">{latest.status.toLowerCase()}</span> : "—"}</td>
                 </tr>
               );
             })}

@@ -3,6 +3,7 @@
 import { revalidatePath } from "next/cache";
 import { toActionResult } from "@/lib/server/actions/action-result";
 import { requireUser } from "@/lib/server/auth/require-permission";
+import { editEquipment } from "@/lib/server/equipment/edit-equipment";
 import { recordCalibration } from "@/lib/server/equipment/record-calibration";
 import { registerEquipment } from "@/lib/server/equipment/register-equipment";
 import { setEquipmentStatus } from "@/lib/server/equipment/set-equipment-status";
@@ -32,4 +33,12 @@ export async function setEquipmentStatusAction(input: unknown) {
     refresh();
     return equipment;
   }, "Status changed.");
+}
+
+export async function editEquipmentAction(input: unknown) {
+  return toActionResult(async () => {
+    const result = await editEquipment({ actor: await requireUser("equipment.manage"), input });
+    refresh();
+    return result;
+  }, "Register entry changed; the old values are kept in its history.");
 }

@@ -11,6 +11,7 @@ import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { listEquipment } from "@/lib/server/equipment/list-equipment";
 import { formatPressure } from "@/lib/units/pressure-entry";
 import { EQUIPMENT_KINDS, EQUIPMENT_STATUS_LABELS, type EquipmentKind } from "@/lib/validation/equipment";
+import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 
 export const metadata = { title: "Equipment" };
 
@@ -18,6 +19,7 @@ type Props = { searchParams: Promise<{ kind?: string | string[] }> };
 
 export default async function EquipmentPage({ searchParams }: Props) {
   const actor = await requirePageUser("equipment.view");
+  const zone = await getLabTimeZone();
   const asked = (await searchParams).kind;
   const kind = EQUIPMENT_KINDS.find((k) => k === asked) ?? null;
   const equipment = await listEquipment({ actor, kind: kind ?? undefined });
@@ -47,8 +49,8 @@ export default async function EquipmentPage({ searchParams }: Props) {
                 <td>{e.name}</td>
                 <td>{EQUIPMENT_STATUS_LABELS[e.status]}</td>
                 <td>{formatPressure(e.ratedMaxPressurePa, actor.pressureUnit)}</td>
-                <td>{formatDate(e.lastCalibration?.calibratedAt)}</td>
-                <td>{formatDate(e.lastCalibration?.dueAt)}</td>
+                <td>{formatDate(e.lastCalibration?.calibratedAt, zone)}</td>
+                <td>{formatDate(e.lastCalibration?.dueAt, zone)}</td>
                 <td><CalibrationTag status={e.calibration} retired={e.status === "RETIRED"} /></td>
               </tr>
             ))}

@@ -10,6 +10,7 @@ import { listFilterOptions } from "@/lib/server/lists/list-filter-options";
 import { listShipments } from "@/lib/server/lists/list-shipments";
 import { can } from "@/lib/policy/permissions";
 import { listQueryToFilterParts, parseListQuery, type RawSearchParams } from "@/lib/validation/list-query";
+import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 
 export const metadata = { title: "Intake" };
 
@@ -17,6 +18,7 @@ const BASE = "/intake";
 
 export default async function IntakePage({ searchParams }: { searchParams: Promise<RawSearchParams> }) {
   const actor = await requirePageUser("shipment.view");
+  const zone = await getLabTimeZone();
   const { query, ignored } = parseListQuery("shipments", await searchParams);
   const [list, options] = await Promise.all([listShipments({ actor, query }), listFilterOptions({ actor })]);
   const sort = { kind: "shipments" as const, query, basePath: BASE };
@@ -44,7 +46,7 @@ export default async function IntakePage({ searchParams }: { searchParams: Promi
               <tr key={s.id}>
                 <td className="mono"><Link href={`/intake/shipments/${s.labNumber}`}>{s.labNumber}</Link></td>
                 <td>{s.clientName}<div className="muted">{s.projectName}</div></td>
-                <td>{formatDateTime(s.receivedAt)}</td>
+                <td>{formatDateTime(s.receivedAt, zone)}</td>
                 <td>{s.deliveredBy}<div className="muted">{s.conditionNotes}</div></td>
                 <td>{s.rollCount}</td>
                 <td>{s.acknowledgedAt ? <span className="state state-ok">acknowledged</span> : <span className="state state-warn">to acknowledge</span>}</td>

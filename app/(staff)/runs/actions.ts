@@ -3,6 +3,7 @@
 import { revalidatePath } from "next/cache";
 import { toActionResult } from "@/lib/server/actions/action-result";
 import { requireUser } from "@/lib/server/auth/require-permission";
+import { abandonRun } from "@/lib/server/runs/abandon-run";
 import { assignSpecimenToCell } from "@/lib/server/runs/assign-specimen-to-cell";
 import { grantCalibrationOverride } from "@/lib/server/runs/grant-calibration-override";
 import { recordPostTest } from "@/lib/server/runs/record-post-test";
@@ -61,4 +62,12 @@ export async function grantOverrideAction(input: unknown) {
     refresh();
     return result;
   }, "Override recorded.");
+}
+
+export async function abandonRunAction(input: unknown) {
+  return toActionResult(async () => {
+    const result = await abandonRun({ actor: await requireUser("run.operate"), input });
+    refresh();
+    return result;
+  }, "Run abandoned; its cell is free.");
 }

@@ -4,12 +4,14 @@ import { QueueCard } from "@/components/ui/queue-card";
 import { can } from "@/lib/policy/permissions";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { listRuns } from "@/lib/server/runs/list-runs";
+import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 
 export const metadata = { title: "Runs" };
 
 // A technician sees their own runs first; QA and everyone else see all of them.
 export default async function RunsPage({ searchParams }: { searchParams: Promise<{ all?: string }> }) {
   const actor = await requirePageUser("run.view");
+  const zone = await getLabTimeZone();
   const operates = can(actor.role, "run.operate");
   const mine = operates && (await searchParams).all !== "1";
   const runs = await listRuns({ actor, mine });
@@ -22,7 +24,7 @@ export default async function RunsPage({ searchParams }: { searchParams: Promise
         </div>
         {operates && <div className="links"><Link className="button" href="/runs/new">Start a run</Link></div>}
       </div>
-      <QueueCard title={mine ? "My runs" : "Runs"} count={runs.length} empty="No run here yet." testId="run-list"><RunTable runs={runs} /></QueueCard>
+      <QueueCard title={mine ? "My runs" : "Runs"} count={runs.length} empty="No run here yet." testId="run-list"><RunTable zone={zone} runs={runs} /></QueueCard>
     </>
   );
 }

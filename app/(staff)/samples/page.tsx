@@ -11,6 +11,7 @@ import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { listFilterOptions } from "@/lib/server/lists/list-filter-options";
 import { listRolls } from "@/lib/server/lists/list-rolls";
 import { listQueryToFilterParts, parseListQuery, type RawSearchParams } from "@/lib/validation/list-query";
+import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 
 export const metadata = { title: "Samples: rolls" };
 
@@ -18,6 +19,7 @@ const BASE = "/samples";
 
 export default async function SamplesPage({ searchParams }: { searchParams: Promise<RawSearchParams> }) {
   const actor = await requirePageUser("sample.view");
+  const zone = await getLabTimeZone();
   const { query, ignored } = parseListQuery("rolls", await searchParams);
   const [list, options] = await Promise.all([listRolls({ actor, query }), listFilterOptions({ actor })]);
   const sort = { kind: "rolls" as const, query, basePath: BASE };
@@ -45,7 +47,7 @@ export default async function SamplesPage({ searchParams }: { searchParams: Prom
                 <td>{r.rollNumber}<div className="muted">lot {r.lotNumber}</div></td>
                 <td>{r.clientName}<div className="muted">{r.projectName}</div></td>
                 <td>{r.product}</td>
-                <td className="mono">{formatDate(r.receivedAt)}<div className="muted">{r.shipmentLabNumber}</div></td>
+                <td className="mono">{formatDate(r.receivedAt, zone)}<div className="muted">{r.shipmentLabNumber}</div></td>
                 <td>{r.couponCount}</td>
                 <td className="mono">{r.locationCode ?? "—"}</td>
                 <td><StateTag state={r.state} /></td>

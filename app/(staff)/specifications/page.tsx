@@ -5,11 +5,13 @@ import { formatDateTime } from "@/lib/format/dates";
 import { can } from "@/lib/policy/permissions";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { listSpecifications } from "@/lib/server/specifications/list-specifications";
+import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 
 export const metadata = { title: "Specifications" };
 
 export default async function SpecificationsPage() {
   const actor = await requirePageUser("certificate.view");
+  const zone = await getLabTimeZone();
   const { templates, projects } = await listSpecifications({ actor });
   const manage = can(actor.role, "specification.manage");
   return (
@@ -48,7 +50,7 @@ export default async function SpecificationsPage() {
                   <p>
                     <Link href={`/specifications/${s.id}`}>{s.name}</Link>{" "}
                     {i === 0 ? <span className="state state-ok">In use</span> : <span className="state state-warn">Superseded by a newer one</span>}{" "}
-                    <span className="muted">created {formatDateTime(s.createdAt)}</span>
+                    <span className="muted">created {formatDateTime(s.createdAt, zone)}</span>
                   </p>
                   {i === 0 && <LimitsTable limits={s.limits} testId={`limits-${p.code}`} />}
                 </div>

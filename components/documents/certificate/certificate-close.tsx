@@ -17,7 +17,7 @@ export function CertificateClose({ snapshot, qrSvg }: { snapshot: CertificateSna
           <div className="cert-sign-name">{signatory.name}</div>
           <div>{roleLabel(signatory.role)}</div>
           <p style={{ margin: "4pt 0 2pt" }}>{signatory.meaning}</p>
-          <div className="doc-small">Signed electronically {isoDateTime(signatory.signedAt)}, the signatory confirming with their password.</div>
+          <div className="doc-small">Signed electronically {isoDateTime(signatory.signedAt, snapshot.lab.timeZone)}, the signatory confirming with their password.</div>
         </div>
         <div className="doc-box cert-verify" data-testid="certificate-verification">
           {/* The SVG comes from the qrcode package (our own lib/server/labels/qr-code-svg), never from user text. */}

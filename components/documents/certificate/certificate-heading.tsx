@@ -21,7 +21,7 @@ export function CertificateHeading({ snapshot }: { snapshot: CertificateSnapshot
         <div className="cert-identity" data-testid="certificate-identity">
           <div><div className="cert-label">Certificate</div><div className="cert-value cert-number">{snapshot.number}</div></div>
           <div><div className="cert-label">Revision</div><div className="cert-value">{snapshot.revision}</div></div>
-          <div><div className="cert-label">Issued</div><div className="cert-value">{isoDate(snapshot.issuedAt)}</div></div>
+          <div><div className="cert-label">Issued</div><div className="cert-value">{isoDate(snapshot.issuedAt, snapshot.lab.timeZone)}</div></div>
         </div>
       </div>
       {snapshot.supersedes ? (

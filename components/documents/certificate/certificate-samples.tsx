@@ -6,14 +6,15 @@ function idClass(text: string): string | undefined {
   return text.length <= 24 ? "nowrap" : undefined;
 }
 
-/** The roll samples the results come from, and each one's custody from receipt to test. */
-export function CertificateSamples({ samples }: { samples: CertificateSample[] }) {
+/** The roll samples the results come from, their condition on arrival, and each one's custody from receipt to test. */
+export function CertificateSamples({ samples, zone = "UTC" }: { samples: CertificateSample[]; zone?: string }) {
+  const withCondition = samples.some((s) => s.condition !== undefined);
   return (
     <section>
       <h2>Samples and custody</h2>
       <table data-testid="certificate-samples">
         <thead>
-          <tr><th className="nowrap">Lab number</th><th>Roll</th><th>Lot</th><th>Product</th><th>Manufacturer</th><th className="nowrap">Shipment</th><th className="nowrap">Received</th></tr>
+          <tr><th className="nowrap">Lab number</th><th>Roll</th><th>Lot</th><th>Product</th><th>Manufacturer</th><th className="nowrap">Shipment</th><th className="nowrap">Received</th>{withCondition ? <th>Condition on arrival</th> : null}</tr>
         </thead>
         <tbody>
           {samples.map((s) => (
@@ -24,7 +25,8 @@ export function CertificateSamples({ samples }: { samples: CertificateSample[] }
               <td>{s.product}</td>
               <td>{s.manufacturer}</td>
               <td className="mono nowrap">{s.shipmentLabNumber}</td>
-              <td className="nowrap">{isoDate(s.receivedAt)}</td>
+              <td className="nowrap">{isoDate(s.receivedAt, zone)}</td>
+              {withCondition ? <td data-testid="certificate-roll-condition">{s.condition || "No remarks recorded"}</td> : null}
             </tr>
           ))}
         </tbody>
@@ -38,7 +40,7 @@ export function CertificateSamples({ samples }: { samples: CertificateSample[] }
           <tbody>
             {s.custody.map((c, i) => (
               <tr key={i}>
-                <td className="nowrap">{isoDateTime(c.at)}</td>
+                <td className="nowrap">{isoDateTime(c.at, zone)}</td>
                 <td>{custodyActionLabel(c.action)}</td>
                 <td className="mono nowrap">{c.item}</td>
                 <td>{c.by}</td>

@@ -21,15 +21,16 @@ export type CertificateSheetProps = {
  * can show it as the PDF shows it. No hooks and no client components: it is rendered to static HTML.
  */
 export function CertificateSheet({ snapshot, qrSvg, watermark }: CertificateSheetProps) {
+  const zone = snapshot.lab.timeZone ?? "UTC";
   return (
     <article className="doc cert" data-testid="certificate">
       <style dangerouslySetInnerHTML={{ __html: DOCUMENT_CSS + CERTIFICATE_CSS }} />
       {watermark ? <div className="doc-watermark" aria-hidden="true">{watermark}</div> : null}
-      <Letterhead lab={snapshot.lab} />
+      <Letterhead lab={snapshot.lab} at={new Date(snapshot.issuedAt)} />
       <CertificateHeading snapshot={snapshot} />
       <CertificateSummary snapshot={snapshot} />
-      <CertificateSamples samples={snapshot.samples} />
-      {snapshot.tests.map((test, i) => <CertificateTestSection key={`${test.runLabNumber}-${i}`} test={test} index={i} count={snapshot.tests.length} />)}
+      <CertificateSamples samples={snapshot.samples} zone={zone} />
+      {snapshot.tests.map((test, i) => <CertificateTestSection key={`${test.runLabNumber}-${i}`} test={test} index={i} count={snapshot.tests.length} zone={zone} />)}
       <CertificateClose snapshot={snapshot} qrSvg={qrSvg} />
     </article>
   );

@@ -21,7 +21,7 @@ function Decision({ result }: { result: CertificateResultLine }) {
 }
 
 /** One test: method, conditions, results with uncertainty, the conformance decisions, chart and deviations. */
-export function CertificateTestSection({ test, index, count }: { test: CertificateTest; index: number; count: number }) {
+export function CertificateTestSection({ test, index, count, zone = "UTC" }: { test: CertificateTest; index: number; count: number; zone?: string }) {
   const c = test.conditions;
   return (
     <section className="cert-test" data-testid="certificate-test">
@@ -48,11 +48,11 @@ export function CertificateTestSection({ test, index, count }: { test: Certifica
         <div>
           <h3 style={{ marginTop: 0 }}>Test record</h3>
           <dl className="cert-conditions">
-            <dt>Ended</dt><dd>{isoDateTime(test.terminatedAt)}</dd>
+            <dt>Ended</dt><dd>{isoDateTime(test.terminatedAt, zone)}</dd>
             <dt>Termination</dt><dd>{test.termination ? capitalise(test.termination) : "not recorded"}</dd>
             <dt>Performed by</dt><dd>{test.performedBy}</dd>
             <dt>Approved by</dt><dd>{test.approvedBy}</dd>
-            <dt>Approved</dt><dd>{isoDateTime(test.approvedAt)}</dd>
+            <dt>Approved</dt><dd>{isoDateTime(test.approvedAt, zone)}</dd>
           </dl>
         </div>
       </div>

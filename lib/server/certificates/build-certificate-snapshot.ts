@@ -99,6 +99,7 @@ export async function buildCertificateSnapshot(tx: Tx, options: { revisionId: st
       samples.set(roll.id, {
         rollLabNumber: roll.labNumber, rollNumber: roll.rollNumber, lotNumber: roll.lotNumber, product: roll.product, manufacturer: roll.manufacturer,
         shipmentLabNumber: roll.shipment.labNumber, receivedAt: roll.shipment.receivedAt.toISOString(),
+        condition: roll.conditionNotes || roll.shipment.conditionNotes,
         custody: events.map((e) => ({ at: e.occurredAt.toISOString(), action: ACTION_WORDS[e.action] ?? e.action.toLowerCase(), item: e.roll?.labNumber ?? e.coupon?.labNumber ?? e.specimen?.labNumber ?? "", by: e.actor.name })),
       });
     }
@@ -111,7 +112,7 @@ export async function buildCertificateSnapshot(tx: Tx, options: { revisionId: st
     verificationCode: revision.verificationCode,
     verificationUrl: verificationUrl(options.baseUrl, revision.verificationCode),
     issuedAt: options.now.toISOString(),
-    lab: { name: lab?.name ?? "Laboratory", address: lab?.address ?? "", accreditation: lab?.accreditation ?? null },
+    lab: { name: lab?.name ?? "Laboratory", address: lab?.address ?? "", accreditation: lab?.accreditation ?? null, timeZone: lab?.timeZone ?? "UTC" },
     client: { name: certificate.clientOrganization.name, address: certificate.clientOrganization.address },
     project: { code: certificate.project.code, name: certificate.project.name, siteName: certificate.project.siteName, siteLocation: certificate.project.siteLocation },
     specification: limits ? { name: limits.specificationName } : null,

@@ -21,11 +21,12 @@ export async function logShipment(options: { actor: CurrentUser; input: unknown 
   const db = getDb();
 
   const [project, location] = await Promise.all([
-    db.project.findUnique({ where: { id: input.projectId }, select: { id: true, clientOrganizationId: true } }),
+    db.project.findUnique({ where: { id: input.projectId }, select: { id: true, clientOrganizationId: true, active: true, clientOrganization: { select: { active: true } } } }),
     db.storageLocation.findUnique({ where: { id: input.storageLocationId }, select: { id: true, active: true } }),
   ]);
   const fieldErrors: FieldErrors = {};
   if (!project || project.clientOrganizationId !== input.clientOrganizationId) fieldErrors.projectId = "Choose a project of this client.";
+  else if (!project.active || !project.clientOrganization.active) fieldErrors.projectId = "This project (or its client) is deactivated; choose an active one, or ask the lab administrator.";
   if (!location?.active) fieldErrors.storageLocationId = "Choose a storage location in use.";
   const existing = await db.roll.findMany({
     where: { projectId: input.projectId, rollNumber: { in: input.rolls.map((r) => r.rollNumber) } },

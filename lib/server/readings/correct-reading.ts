@@ -34,12 +34,13 @@ export async function correctReading(options: { actor: CurrentUser; input: unkno
     const original = ctx.readings.find((r) => r.id === input.readingId)!;
     const label = readingLabel(original.sequence);
     if (original.correctedBy)
-      throw new AppError("CONFLICT", `${label} was already corrected by ${original.correctedBy.recordedBy.name} on ${formatDateTime(original.correctedBy.createdAt)}; correct the latest version instead.`);
+      throw new AppError("CONFLICT", `${label} was already corrected by ${original.correctedBy.recordedBy.name} on ${formatDateTime(original.correctedBy.createdAt, ctx.timeZone)}; correct the latest version instead.`);
 
     const index = ctx.current.findIndex((r) => r.id === original.id);
     const { rows, problems } = prepareReadings({
       drafts: [{ label, draft: readingEntryToDraft(input.values, input.pressureUnit) }],
       permeationStartedAt: ctx.permeationStartedAt,
+      timeZone: ctx.timeZone,
       now: options.now ?? new Date(),
       areasMm2: ctx.areasMm2,
       reference: ctx.reference,

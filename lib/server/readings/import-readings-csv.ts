@@ -51,11 +51,12 @@ export async function importReadingsCsv(options: { actor: CurrentUser; input: un
 
   return withActor(options.actor, async (tx) => {
     const ctx = await loadReadingContext(tx, { actor: options.actor, runId: input.runId });
-    const mapped = mappingErrors.length ? [] : applyReadingsMapping(parsed, mapping);
+    const mapped = mappingErrors.length ? [] : applyReadingsMapping(parsed, mapping, { timeZone: ctx.timeZone });
     const good = mapped.filter((m) => m.values);
     const { rows: prepared, problems } = prepareReadings({
       drafts: good.map((m) => ({ label: `Row ${m.row}`, draft: m.values! })),
       permeationStartedAt: ctx.permeationStartedAt,
+      timeZone: ctx.timeZone,
       now: options.now ?? new Date(),
       areasMm2: ctx.areasMm2,
       reference: ctx.reference,

@@ -7,6 +7,7 @@ import type { PrepareProblem, PreparedReading, VolumeReference } from "@/lib/rea
 import { runTransition, type RunStateName } from "@/lib/runs/run-state-machine";
 import type { CurrentUser } from "../auth/current-user";
 import type { Tx } from "../db/transaction";
+import { readLabTimeZone } from "../lab/read-lab-time-zone";
 
 /** The role of the RunEquipment row whose calibration holds the burette areas. */
 export const BURETTE_PANEL_ROLE = "burette panel";
@@ -72,7 +73,9 @@ export async function loadReadingContext(tx: Tx, options: { actor: CurrentUser; 
   if (readings.length > 0 && !reference)
     throw new AppError("INVALID_INPUT", `The readings of ${run.labNumber} so far were saved as volumes without burette levels, so new levels cannot be continued from them.`);
   const nextSequence = readings.reduce((max, r) => Math.max(max, r.sequence), 0) + 1;
-  return { run, permeationStartedAt, areasMm2, readings, current, reference, nextSequence };
+  // The lab's time zone: logger times without a zone are its wall-clock times, and messages name times in it.
+  const timeZone = await readLabTimeZone(tx);
+  return { run, permeationStartedAt, areasMm2, readings, current, reference, nextSequence, timeZone };
 }
 export type ReadingContext = Awaited<ReturnType<typeof loadReadingContext>>;
 

@@ -26,6 +26,7 @@ export async function recordReadings(options: { actor: CurrentUser; input: unkno
     const { rows, problems } = prepareReadings({
       drafts: input.readings.map((entry, i) => ({ label: `Row ${i + 1}`, draft: readingEntryToDraft(entry, input.pressureUnit) })),
       permeationStartedAt: ctx.permeationStartedAt,
+      timeZone: ctx.timeZone,
       now: options.now ?? new Date(),
       areasMm2: ctx.areasMm2,
       reference: ctx.reference,

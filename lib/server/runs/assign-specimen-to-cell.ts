@@ -9,6 +9,8 @@ import { requirePermission } from "../auth/require-permission";
 import { allocateLabNumber } from "../db/allocate-lab-number";
 import { withActor } from "../db/transaction";
 import { applyCustodyAction } from "../custody/apply-custody-action";
+import { requireEventOrder } from "../custody/require-event-order";
+import { readLabTimeZone } from "../lab/read-lab-time-zone";
 import { findEquipmentStatuses } from "../equipment/find-usable-equipment";
 import { parseOrThrow } from "../validation/parse";
 
@@ -17,13 +19,20 @@ const ACTIVE_STATES = RUN_STATES.filter((s) => holdsCell(s as RunStateName));
 /**
  * The technician mounts a prepared specimen in a free cell: the run starts, with the instruments it uses
  * and the calibration each was under. Equipment that is due or out of calibration is refused unless a
- * QA manager has granted an override for it, which the run then records.
+ * QA manager has granted an override for it, which the run then records. The mount time is the one the
+ * technician enters: not before the specimen was prepared, not in the future.
  */
 export async function assignSpecimenToCell(options: { actor: CurrentUser; input: unknown; now?: Date }) {
   requirePermission(options.actor, "run.operate");
   const input = parseOrThrow(assignSpecimenSchema, options.input);
   const now = options.now ?? new Date();
   return withActor(options.actor, async (tx) => {
+    const specimen = await tx.specimen.findUnique({ where: { id: input.specimenId }, select: { labNumber: true, preparedAt: true } });
+    if (!specimen) throw new AppError("INVALID_INPUT", undefined, { fieldErrors: { specimenId: "Choose a prepared specimen." } });
+    requireEventOrder("mountedAt", {
+      label: "The mount time", at: input.mountedAt, now, zone: await readLabTimeZone(tx),
+      after: [{ at: specimen.preparedAt, what: `specimen ${specimen.labNumber} was prepared` }],
+    });
     const roles: Array<[id: string | undefined, role: string, kind: string, field: string]> = [
       [input.cellId, "permeameter cell", "PERMEAMETER_CELL", "cellId"],
       [input.burettePanelId, "burette panel", "BURETTE_PANEL", "burettePanelId"],
@@ -53,10 +62,10 @@ export async function assignSpecimenToCell(options: { actor: CurrentUser; input:
       throw new AppError("INVALID_INPUT", `${burette.assetTag} has no calibrated burette areas; record its calibration first.`, { fieldErrors: { burettePanelId: "No burette areas." } });
 
     const labNumber = await allocateLabNumber(tx, "run", now);
-    await applyCustodyAction(tx, { actor: options.actor, kind: "specimen", id: input.specimenId, action: "ASSIGNED", at: now, note: `Run ${labNumber} in ${statuses.get(input.cellId)!.assetTag}` });
+    await applyCustodyAction(tx, { actor: options.actor, kind: "specimen", id: input.specimenId, action: "ASSIGNED", at: input.mountedAt, note: `Run ${labNumber} in ${statuses.get(input.cellId)!.assetTag}` });
     const run = await tx.run.create({
       data: {
-        labNumber, specimenId: input.specimenId, cellId: input.cellId, methodCode: input.methodCode, performedById: options.actor.id, assignedAt: now,
+        labNumber, specimenId: input.specimenId, cellId: input.cellId, methodCode: input.methodCode, performedById: options.actor.id, assignedAt: input.mountedAt,
         effectiveStressPa: input.effectiveStress === undefined ? null : enteredPressureToPa(input.effectiveStress, input.pressureUnit),
         permeantName: input.permeantName || null, permeantSalt: input.permeantSalt || null, permeantMolarityMolPerL: input.permeantMolarityMolPerL ?? null,
         permeantEcMsPerM: input.permeantEcMsPerM ?? null, permeantPh: input.permeantPh ?? null,

@@ -17,6 +17,7 @@ export async function getRun(options: { actor: CurrentUser; labNumber: string })
       cell: { select: { assetTag: true, name: true, ratedMaxPressurePa: true } },
       method: { select: { code: true, title: true, defaults: true } },
       performedBy: { select: { id: true, name: true } },
+      abandonedBy: { select: { name: true } },
       calibrationOverrideBy: { select: { name: true } },
       equipment: { select: { role: true, equipment: { select: { assetTag: true, name: true, ratedMaxPressurePa: true } }, calibration: { select: { reference: true, dueAt: true } } } },
       stages: { orderBy: { sequence: "asc" }, include: { recordedBy: { select: { name: true } } } },

@@ -8,6 +8,8 @@ import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
 import { withActor } from "../db/transaction";
 import { applyCustodyAction } from "../custody/apply-custody-action";
+import { requireEventOrder } from "../custody/require-event-order";
+import { readLabTimeZone } from "../lab/read-lab-time-zone";
 import { parseOrThrow } from "../validation/parse";
 import { advanceRun, loadRunForStep } from "./run-guards";
 
@@ -41,8 +43,14 @@ export async function recordStage(options: { actor: CurrentUser; input: unknown 
       throw new AppError("INVALID_INPUT", check.warnings[0]!, { fieldErrors: { acknowledgeMargin: "Tick to confirm you have read this warning and the lab's procedure allows it." }, details: { marginWarning: true } });
 
     const previous = await tx.runStage.findFirst({ where: { runId: run.id }, orderBy: { sequence: "desc" } });
-    if (previous && input.startedAt < previous.startedAt)
-      throw new AppError("INVALID_INPUT", undefined, { fieldErrors: { startedAt: `A stage cannot start before the previous one (${previous.startedAt.toISOString().slice(0, 16).replace("T", " ")} UTC).` } });
+    // Order of events: a stage starts after the specimen was mounted and after the previous stage started.
+    requireEventOrder("startedAt", {
+      label: "The stage start", at: input.startedAt, now: new Date(), zone: await readLabTimeZone(tx),
+      after: [
+        { at: run.assignedAt, what: `the specimen was mounted in the cell for ${run.labNumber}` },
+        previous ? { at: previous.startedAt, what: `stage ${previous.sequence} started` } : null,
+      ],
+    });
     if (previous && !previous.endedAt) await tx.runStage.update({ where: { id: previous.id }, data: { endedAt: input.startedAt } });
     const stage = await tx.runStage.create({
       data: {

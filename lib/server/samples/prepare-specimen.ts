@@ -8,13 +8,16 @@ import { allocateLabNumber } from "../db/allocate-lab-number";
 import { withActor } from "../db/transaction";
 import { applyCustodyAction } from "../custody/apply-custody-action";
 import { recordNewItemEvent } from "../custody/record-new-item-event";
+import { requireEventOrder } from "../custody/require-event-order";
+import { readLabTimeZone } from "../lab/read-lab-time-zone";
 import { parseOrThrow } from "../validation/parse";
 
 /**
  * The technician prepares a specimen from a coupon, answering every item of the method's preparation
- * checklist; the answers are kept with the specimen as recorded, yes or no.
+ * checklist; the answers are kept with the specimen as recorded, yes or no. It cannot be prepared before its
+ * coupon was cut, nor in the future.
  */
-export async function prepareSpecimen(options: { actor: CurrentUser; input: unknown }) {
+export async function prepareSpecimen(options: { actor: CurrentUser; input: unknown; now?: Date }) {
   requirePermission(options.actor, "sample.cut");
   const input = parseOrThrow(prepareSpecimenSchema, options.input);
   const checklist = checklistFor(input.intendedMethodCode);
@@ -25,6 +28,12 @@ export async function prepareSpecimen(options: { actor: CurrentUser; input: unkn
     });
 
   return withActor(options.actor, async (tx) => {
+    const source = await tx.coupon.findUnique({ where: { id: input.couponId }, select: { labNumber: true, cutAt: true } });
+    if (!source) throw new AppError("NOT_FOUND", "That coupon does not exist.");
+    requireEventOrder("preparedAt", {
+      label: "The preparation time", at: input.preparedAt, now: options.now ?? new Date(), zone: await readLabTimeZone(tx),
+      after: [{ at: source.cutAt, what: `coupon ${source.labNumber} was cut` }],
+    });
     const location = await tx.storageLocation.findUnique({ where: { id: input.storageLocationId }, select: { active: true } });
     if (!location?.active) throw new AppError("INVALID_INPUT", undefined, { fieldErrors: { storageLocationId: "Choose a storage location in use." } });
     const labNumber = await allocateLabNumber(tx, "specimen", input.preparedAt);

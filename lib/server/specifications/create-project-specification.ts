@@ -1,11 +1,11 @@
 import "server-only";
 import { AppError } from "@/lib/errors/app-error";
-import type { Prisma } from "@/lib/generated/prisma/client";
 import { createProjectSpecificationSchema } from "@/lib/validation/specifications";
 import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
 import { withActor } from "../db/transaction";
 import { parseOrThrow } from "../validation/parse";
+import { readTemplateLimits } from "./read-template-limits";
 
 /**
  * A new specification for a project: empty, or with a copy of a lab template's limits (a copy, so later
@@ -18,15 +18,7 @@ export async function createProjectSpecification(options: { actor: CurrentUser; 
   return withActor(options.actor, async (tx) => {
     const project = await tx.project.findUnique({ where: { id: input.projectId }, select: { id: true } });
     if (!project) throw new AppError("NOT_FOUND", "That project does not exist.", { fieldErrors: { projectId: "Choose a project from the list." } });
-    let limits: Prisma.SpecificationLimitCreateWithoutSpecificationInput[] = [];
-    if (input.templateId) {
-      const template = await tx.specification.findUnique({
-        where: { id: input.templateId },
-        select: { isTemplate: true, limits: { select: { property: true, limitText: true, unit: true, direction: true, significantDigits: true, conformanceMethod: true, testMethodCode: true } } },
-      });
-      if (!template?.isTemplate) throw new AppError("INVALID_INPUT", "Choose one of the lab's templates.", { fieldErrors: { templateId: "Choose one of the lab's templates, or none." } });
-      limits = template.limits;
-    }
+    const limits = input.templateId ? await readTemplateLimits(tx, input.templateId, "templateId") : [];
     return tx.specification.create({
       data: { name: input.name, projectId: project.id, isTemplate: false, limits: { create: limits } },
       select: { id: true, name: true, projectId: true, _count: { select: { limits: true } } },

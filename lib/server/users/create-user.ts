@@ -16,8 +16,8 @@ export async function createUser(options: { actor: CurrentUser; input: unknown }
     if (await tx.user.findUnique({ where: { email: input.email }, select: { id: true } }))
       throw new AppError("CONFLICT", "A user with this e-mail already exists.", { fieldErrors: { email: "Already in use." } });
     if (input.clientOrganizationId) {
-      const org = await tx.clientOrganization.findUnique({ where: { id: input.clientOrganizationId }, select: { id: true } });
-      if (!org) throw new AppError("INVALID_INPUT", undefined, { fieldErrors: { clientOrganizationId: "Choose an existing organisation." } });
+      const org = await tx.clientOrganization.findUnique({ where: { id: input.clientOrganizationId }, select: { id: true, active: true } });
+      if (!org?.active) throw new AppError("INVALID_INPUT", undefined, { fieldErrors: { clientOrganizationId: "Choose an active organisation." } });
     }
     return tx.user.create({
       data: {

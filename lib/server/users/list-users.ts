@@ -9,7 +9,7 @@ export async function listUsers(options: { actor: CurrentUser }) {
   return getDb().user.findMany({
     orderBy: [{ role: "asc" }, { name: "asc" }],
     select: {
-      id: true, name: true, email: true, role: true, active: true, version: true, createdAt: true,
+      id: true, name: true, email: true, role: true, active: true, version: true, createdAt: true, clientOrganizationId: true,
       clientOrganization: { select: { name: true } },
     },
   });
@@ -17,5 +17,5 @@ export async function listUsers(options: { actor: CurrentUser }) {
 
 export async function listClientOrganizationsForSelect(options: { actor: CurrentUser }) {
   requirePermission(options.actor, "user.manage");
-  return getDb().clientOrganization.findMany({ orderBy: { name: "asc" }, select: { id: true, name: true } });
+  return getDb().clientOrganization.findMany({ where: { active: true }, orderBy: { name: "asc" }, select: { id: true, name: true } });
 }

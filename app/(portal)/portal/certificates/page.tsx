@@ -1,11 +1,13 @@
 import { CertificateTable } from "@/components/portal/certificate-table";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { listPortalCertificates } from "@/lib/server/portal/list-portal-certificates";
+import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 
 export const metadata = { title: "Certificates" };
 
 export default async function PortalCertificatesPage() {
   const actor = await requirePageUser("portal.view");
+  const zone = await getLabTimeZone();
   const certificates = await listPortalCertificates({ actor });
   return (
     <>
@@ -16,7 +18,7 @@ export default async function PortalCertificatesPage() {
       </p>
       <section className="card">
         <h2>Issued certificates <span className="count">{certificates.length === 0 ? "none yet" : certificates.length}</span></h2>
-        {certificates.length === 0 ? <p className="empty">No certificate has been issued to your organisation yet.</p> : <CertificateTable certificates={certificates} showProject />}
+        {certificates.length === 0 ? <p className="empty">No certificate has been issued to your organisation yet.</p> : <CertificateTable zone={zone} certificates={certificates} showProject />}
       </section>
     </>
   );

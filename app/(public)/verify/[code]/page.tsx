@@ -5,6 +5,7 @@ import { formatDate } from "@/lib/format/dates";
 import { normaliseVerificationCode } from "@/lib/certificates/verification-code";
 import { verifyCertificate, type CertificateVerification } from "@/lib/server/certificates/verify-certificate";
 import { getLabName } from "@/lib/server/lab/get-lab-name";
+import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 
 export const metadata = { title: "Certificate verification", robots: { index: false } };
 export const dynamic = "force-dynamic";
@@ -46,7 +47,7 @@ export default async function VerificationPage({ params }: { params: Promise<{ c
         <dl className="facts" style={{ marginTop: "0.75rem" }}>
           <div><dt>Certificate</dt><dd className="mono" data-testid="verify-number">{result.number}</dd></div>
           <div><dt>Revision</dt><dd data-testid="verify-revision">{result.revision}</dd></div>
-          <div><dt>Issued</dt><dd data-testid="verify-issued">{formatDate(result.issuedAt)}</dd></div>
+          <div><dt>Issued</dt><dd data-testid="verify-issued">{formatDate(result.issuedAt, await getLabTimeZone())}</dd></div>
         </dl>
         <h2 style={{ marginTop: "0.75rem" }}>SHA-256 digest of the issued PDF</h2>
         {result.pdfSha256 ? (

@@ -1,14 +1,17 @@
 import { CreateUserForm } from "@/components/users/create-user-form";
+import { ChangeRoleForm } from "@/components/users/change-role-form";
 import { UserRowActions } from "@/components/users/user-row-actions";
 import { formatDate } from "@/lib/format/dates";
 import { ROLE_LABELS } from "@/lib/policy/permissions";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { listClientOrganizationsForSelect, listUsers } from "@/lib/server/users/list-users";
+import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 
 export const metadata = { title: "People" };
 
 export default async function UsersPage() {
   const actor = await requirePageUser("user.manage");
+  const zone = await getLabTimeZone();
   const [users, organizations] = await Promise.all([listUsers({ actor }), listClientOrganizationsForSelect({ actor })]);
   return (
     <>
@@ -25,9 +28,9 @@ export default async function UsersPage() {
                   <tr key={u.id} data-email={u.email}>
                     <td>{u.name}<div className="muted">{u.email}</div></td>
                     <td>{ROLE_LABELS[u.role]}{u.clientOrganization && <div className="muted">{u.clientOrganization.name}</div>}</td>
-                    <td>{formatDate(u.createdAt)}</td>
+                    <td>{formatDate(u.createdAt, zone)}</td>
                     <td>{u.active ? <span className="state state-ok">active</span> : <span className="state state-bad">deactivated</span>}</td>
-                    <td>{u.id !== actor.id && <UserRowActions userId={u.id} active={u.active} version={u.version} name={u.name} />}</td>
+                    <td>{u.id !== actor.id && <><UserRowActions userId={u.id} active={u.active} version={u.version} name={u.name} /><ChangeRoleForm userId={u.id} version={u.version} name={u.name} role={u.role} clientOrganizationId={u.clientOrganizationId} organizations={organizations} /></>}</td>
                   </tr>
                 ))}
               </tbody>

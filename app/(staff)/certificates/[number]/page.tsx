@@ -7,6 +7,7 @@ import { can } from "@/lib/policy/permissions";
 import { formatResultValue } from "@/lib/results/format-result";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getCertificate } from "@/lib/server/certificates/get-certificate";
+import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 
 type Props = { params: Promise<{ number: string }> };
 
@@ -18,6 +19,7 @@ const STATUS_TONE: Record<string, string> = { ISSUED: "state-ok", SUPERSEDED: "s
 
 export default async function CertificatePage({ params }: Props) {
   const actor = await requirePageUser("certificate.view");
+  const zone = await getLabTimeZone();
   const { number } = await params;
   const certificate = await getCertificate({ actor, number }).catch((error) => {
     if (isAppError(error) && error.code === "NOT_FOUND") notFound();
@@ -39,7 +41,7 @@ export default async function CertificatePage({ params }: Props) {
             </ul>
             {r.issuedAt && (
               <p className="muted">
-                Issued {formatDateTime(r.issuedAt)} · signed by {r.signatures.map((s) => `${s.signer.name} (${s.meaning})`).join(", ")} · verification code <span className="mono" data-testid={`revision-${r.revision}-code`}>{r.verificationCode}</span> · {r.pdfSha256 ? <>SHA-256 <span className="mono" title={r.pdfSha256}>{r.pdfSha256.slice(0, 16)}…</span></> : "no PDF stored (a demo record; issue a new revision to produce one)"}
+                Issued {formatDateTime(r.issuedAt, zone)} · signed by {r.signatures.map((s) => `${s.signer.name} (${s.meaning})`).join(", ")} · verification code <span className="mono" data-testid={`revision-${r.revision}-code`}>{r.verificationCode}</span> · {r.pdfSha256 ? <>SHA-256 <span className="mono" title={r.pdfSha256}>{r.pdfSha256.slice(0, 16)}…</span></> : "no PDF stored (a demo record; issue a new revision to produce one)"}
               </p>
             )}
             {r.status !== "DRAFT" && r.pdfSha256 && <p><a className="button button-quiet" href={`/api/certificates/${certificate.number}/pdf?revision=${r.revision}`} data-testid={`revision-${r.revision}-pdf`}>Download PDF</a> <a href={`/verify/${r.verificationCode}`}>Verification page</a></p>}

@@ -2,7 +2,9 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { CalibrationHistory } from "@/components/equipment/calibration-history";
 import { CalibrationTag } from "@/components/equipment/calibration-tag";
+import { EditEquipmentForm } from "@/components/equipment/edit-equipment-form";
 import { EquipmentStatusForm } from "@/components/equipment/equipment-status-form";
+import { CorrectionHistory } from "@/components/custody/correction-history";
 import { PressureCaution } from "@/components/equipment/pressure-caution";
 import { RecordCalibrationForm } from "@/components/equipment/record-calibration-form";
 import { RecordFacts } from "@/components/samples/record-facts";
@@ -13,8 +15,10 @@ import { EQUIPMENT_KIND_LABELS } from "@/lib/format/states";
 import { can } from "@/lib/policy/permissions";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getEquipment } from "@/lib/server/equipment/get-equipment";
-import { formatPressure } from "@/lib/units/pressure-entry";
+import { listEquipmentChanges } from "@/lib/server/equipment/list-equipment-changes";
+import { formatPressure, paToEnteredPressure } from "@/lib/units/pressure-entry";
 import { EQUIPMENT_STATUS_LABELS } from "@/lib/validation/equipment";
+import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 
 type Props = { params: Promise<{ assetTag: string }> };
 
@@ -24,12 +28,14 @@ export async function generateMetadata({ params }: Props) {
 
 export default async function EquipmentItemPage({ params }: Props) {
   const actor = await requirePageUser("equipment.view");
+  const zone = await getLabTimeZone();
   const assetTag = decodeURIComponent((await params).assetTag);
   const equipment = await getEquipment({ actor, assetTag }).catch((error) => {
     if (isAppError(error) && error.code === "NOT_FOUND") notFound();
     throw error;
   });
   const manage = can(actor.role, "equipment.manage");
+  const changes = await listEquipmentChanges({ actor, equipmentId: equipment.id });
   const otherUnit = actor.pressureUnit === "PSI" ? "KPA" : "PSI";
   return (
     <>
@@ -47,8 +53,8 @@ export default async function EquipmentItemPage({ params }: Props) {
             ["Serial number", equipment.serialNumber ?? "—"],
             ["Status", EQUIPMENT_STATUS_LABELS[equipment.status]],
             ["Rated maximum", equipment.ratedMaxPressurePa === null ? "—" : <>{formatPressure(equipment.ratedMaxPressurePa, actor.pressureUnit)} <span className="muted">({formatPressure(equipment.ratedMaxPressurePa, otherUnit)})</span></>],
-            ["Calibration due", formatDate(equipment.calibrations[0]?.dueAt)],
-            ["Registered", formatDateTime(equipment.createdAt)],
+            ["Calibration due", formatDate(equipment.calibrations[0]?.dueAt, zone)],
+            ["Registered", formatDateTime(equipment.createdAt, zone)],
           ]} />
           <p className={equipment.calibration.usable ? "muted" : "notice notice-error"} data-testid="calibration-message">
             {equipment.calibration.message} {usability(equipment.calibration.state)}
@@ -57,7 +63,7 @@ export default async function EquipmentItemPage({ params }: Props) {
         </section>
         <section className="card">
           <h2>Calibrations <span className="count">{equipment.calibrations.length}</span></h2>
-          <CalibrationHistory kind={equipment.kind} calibrations={equipment.calibrations} />
+          <CalibrationHistory zone={zone} kind={equipment.kind} calibrations={equipment.calibrations} />
         </section>
         {manage && (
           <div className="grid">
@@ -65,8 +71,15 @@ export default async function EquipmentItemPage({ params }: Props) {
               {equipment.status === "RETIRED" ? <p className="empty">Retired equipment takes no new calibrations; put it back in service first.</p> : <RecordCalibrationForm equipmentId={equipment.id} kind={equipment.kind} />}
             </section>
             <section className="card"><h2>Status</h2><EquipmentStatusForm equipmentId={equipment.id} version={equipment.version} status={equipment.status} /></section>
+            <section className="card"><h2>Register entry</h2>
+              <EditEquipmentForm
+                equipmentId={equipment.id} version={equipment.version} name={equipment.name} serialNumber={equipment.serialNumber}
+                ratedMaxPressure={equipment.ratedMaxPressurePa === null ? "" : String(+paToEnteredPressure(equipment.ratedMaxPressurePa, actor.pressureUnit).toFixed(3))} pressureUnit={actor.pressureUnit}
+              />
+            </section>
           </div>
         )}
+        <section className="card"><h2>Changes <span className="count">{changes.length}</span></h2><CorrectionHistory zone={zone} corrections={changes} /></section>
         <section className="card">
           <h2>Runs that used it <span className="count">{equipment.runs.length}</span></h2>
           {equipment.runs.length === 0 ? <p className="empty">No run has used it yet.</p> : (
@@ -76,7 +89,7 @@ export default async function EquipmentItemPage({ params }: Props) {
                 <tbody>{equipment.runs.map((r) => (
                   <tr key={`${r.id}-${r.role}`}>
                     <td><Link className="mono" href={`/runs/${r.labNumber}`}>{r.labNumber}</Link></td><td>{r.role}</td><td>ASTM {r.methodCode}</td>
-                    <td className="mono">{r.specimen.labNumber}</td><td>{formatDate(r.assignedAt)}</td>
+                    <td className="mono">{r.specimen.labNumber}</td><td>{formatDate(r.assignedAt, zone)}</td>
                     <td>{r.calibrationId ? equipment.calibrations.find((c) => c.id === r.calibrationId)?.reference ?? "—" : "—"}</td>
                     <td><StateTag state={r.state} kind="run" /></td>
                   </tr>

@@ -13,6 +13,7 @@ import { canApproveRun } from "@/lib/policy/permissions";
 import { toChartPoints } from "@/lib/runs/chart-points";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getRun } from "@/lib/server/runs/get-run";
+import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 
 type Props = { params: Promise<{ labNumber: string }> };
 
@@ -22,6 +23,7 @@ export async function generateMetadata({ params }: Props) {
 
 export default async function ReviewRunPage({ params }: Props) {
   const actor = await requirePageUser("run.review");
+  const zone = await getLabTimeZone();
   const { labNumber } = await params;
   const { run, evaluation, reason, deviations, inputReadings } = await getRun({ actor, labNumber }).catch((error) => {
     if (isAppError(error) && error.code === "NOT_FOUND") notFound();
@@ -40,9 +42,9 @@ export default async function ReviewRunPage({ params }: Props) {
         <section className="card">
           <RecordFacts facts={[
             ["Cell", run.cell.assetTag], ["Instruments", run.equipment.map((e) => `${e.equipment.assetTag} (${e.calibration?.reference ?? "no calibration"})`).join("; ")],
-            ["Terminated", run.terminatedAt ? `${formatDateTime(run.terminatedAt)} · ${run.terminationKind === "EARLY_END" ? `early: ${run.terminationReason}` : "criteria met"}` : "—"],
+            ["Terminated", run.terminatedAt ? `${formatDateTime(run.terminatedAt, zone)} · ${run.terminationKind === "EARLY_END" ? `early: ${run.terminationReason}` : "criteria met"}` : "—"],
             ["Bentonite thickness after test (mm)", run.postTestThicknessMm ?? "—"], ["Final mass (g)", run.postTestMassG ?? "—"], ["Observations", run.postTestObservations || "—"],
-            ["Submitted", formatDateTime(run.submittedAt)],
+            ["Submitted", formatDateTime(run.submittedAt, zone)],
           ]} />
         </section>
         <section className="card" data-testid="deviations">
@@ -57,7 +59,7 @@ export default async function ReviewRunPage({ params }: Props) {
             <RunCharts points={toChartPoints(evaluation.intervals, inputReadings)} ratioBand={[evaluation.settings.ratioMin, evaluation.settings.ratioMax]} />
           </>
         ) : <p className="notice notice-caution">{reason}</p>}
-        {run.reviews.length > 0 && <section className="card"><h2>Earlier reviews</h2><ul>{run.reviews.map((r) => <li key={r.id}>{formatDateTime(r.createdAt)} · {r.reviewer.name}: {r.decision.toLowerCase()} {r.comments && `— ${r.comments}`}</li>)}</ul></section>}
+        {run.reviews.length > 0 && <section className="card"><h2>Earlier reviews</h2><ul>{run.reviews.map((r) => <li key={r.id}>{formatDateTime(r.createdAt, zone)} · {r.reviewer.name}: {r.decision.toLowerCase()} {r.comments && `— ${r.comments}`}</li>)}</ul></section>}
         {run.state === "SUBMITTED" && (
           <section className="card">
             <h2>Decision</h2>

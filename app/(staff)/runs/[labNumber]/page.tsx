@@ -5,6 +5,7 @@ import { CriteriaPanel } from "@/components/runs/criteria-panel";
 import { PressureCaution } from "@/components/runs/pressure-caution";
 import { RunCharts } from "@/components/runs/run-charts";
 import { RunStagesTable } from "@/components/runs/run-stages-table";
+import { AbandonRunForm } from "@/components/runs/abandon-run-form";
 import { PostTestForm, SubmitRunButton, TerminateForm } from "@/components/runs/run-step-forms";
 import { StageForm } from "@/components/runs/stage-form";
 import { ReadingsPanel } from "@/components/readings/readings-panel";
@@ -17,6 +18,8 @@ import { allowedRunSteps, type RunStateName } from "@/lib/runs/run-state-machine
 import { can } from "@/lib/policy/permissions";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getRun } from "@/lib/server/runs/get-run";
+import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
+import { listStorageLocations } from "@/lib/server/samples/list-storage-locations";
 
 type Props = { params: Promise<{ labNumber: string }> };
 
@@ -24,9 +27,9 @@ export async function generateMetadata({ params }: Props) {
   return { title: `Run ${(await params).labNumber}` };
 }
 
-function projectedText(permeationStart: Date | null, projectedAtS: number | null, reason: string): string {
+function projectedText(permeationStart: Date | null, projectedAtS: number | null, reason: string, zone: string): string {
   if (projectedAtS === null || !permeationStart) return reason;
-  return `Probably met about ${formatDateTime(new Date(permeationStart.getTime() + projectedAtS * 1000))}. ${reason}`;
+  return `Probably met about ${formatDateTime(new Date(permeationStart.getTime() + projectedAtS * 1000), zone)}. ${reason}`;
 }
 
 export default async function RunPage({ params }: Props) {
@@ -38,6 +41,7 @@ export default async function RunPage({ params }: Props) {
   });
   const steps = allowedRunSteps(run.state as RunStateName);
   const mine = can(actor.role, "run.operate") && run.performedById === actor.id;
+  const [zone, locations] = await Promise.all([getLabTimeZone(), mine && steps.includes("abandon") ? listStorageLocations({ actor, activeOnly: true }) : []]);
   const permeation = run.stages.find((s) => s.kind === "PERMEATION") ?? null;
   const stageKinds = (["SATURATION", "BACK_PRESSURE", "EQUILIBRATION", "PERMEATION"] as const).filter((k) =>
     k === "EQUILIBRATION" ? steps.includes("start-equilibration") : k === "PERMEATION" ? steps.includes("start-permeation") : steps.includes("add-stage"),
@@ -58,31 +62,32 @@ export default async function RunPage({ params }: Props) {
         <PressureCaution />
         <section className="card">
           <RecordFacts facts={[
-            ["Cell", `${run.cell.assetTag} · ${run.cell.name}`], ["Technician", run.performedBy.name], ["Assigned", formatDateTime(run.assignedAt)],
+            ["Cell", `${run.cell.assetTag} · ${run.cell.name}`], ["Technician", run.performedBy.name], ["Mounted", formatDateTime(run.assignedAt, zone)],
             ["Effective stress", formatPressure(run.effectiveStressPa, actor.pressureUnit)],
             ["Instruments", run.equipment.map((e) => `${e.equipment.assetTag} (${e.role}${e.calibration ? `, cal. ${e.calibration.reference}` : ""})`).join("; ")],
             ["Calibration override", run.calibrationOverrideReason ? `${run.calibrationOverrideReason} — allowed by ${run.calibrationOverrideBy?.name}` : "none"],
             ...(run.permeantName ? ([["Permeant", `${run.permeantName}${run.permeantSalt ? `, ${run.permeantSalt}` : ""}${run.permeantMolarityMolPerL ? ` ${run.permeantMolarityMolPerL} mol/L` : ""}`]] as Array<[string, string]>) : []),
-            ["Termination", run.terminatedAt ? `${formatDateTime(run.terminatedAt)} · ${run.terminationKind === "EARLY_END" ? `ended early: ${run.terminationReason}` : "criteria met"}` : "—"],
+            ...(run.abandonedAt ? ([["Abandoned", `${formatDateTime(run.abandonedAt, zone)} by ${run.abandonedBy?.name ?? "—"}: ${run.abandonmentReason}`]] as Array<[string, string]>) : []),
+            ["Termination", run.terminatedAt ? `${formatDateTime(run.terminatedAt, zone)} · ${run.terminationKind === "EARLY_END" ? `ended early: ${run.terminationReason}` : "criteria met"}` : "—"],
             ["Post-test thickness (mm)", run.postTestThicknessMm ?? "—"], ["Final mass (g)", run.postTestMassG ?? "—"], ["Observations", run.postTestObservations || "—"],
           ]} />
         </section>
         <div className="grid">
           <section className="card">
             <h2>Stages</h2>
-            <RunStagesTable stages={run.stages} pressureUnit={actor.pressureUnit} />
+            <RunStagesTable stages={run.stages} pressureUnit={actor.pressureUnit} zone={zone} />
           </section>
           {mine && stageKinds.length > 0 && (
-            <section className="card"><h2>Record a stage</h2><StageForm key={run.version} runId={run.id} version={run.version} kinds={[...stageKinds]} pressureUnit={actor.pressureUnit} /></section>
+            <section className="card"><h2>Record a stage</h2><StageForm key={run.version} runId={run.id} version={run.version} kinds={[...stageKinds]} pressureUnit={actor.pressureUnit} zone={zone} /></section>
           )}
         </div>
-        {permeation && <ReadingsPanel runId={run.id} labNumber={run.labNumber} actor={actor} />}
+        {permeation && <ReadingsPanel runId={run.id} labNumber={run.labNumber} actor={actor} zone={zone} />}
         {evaluation ? (
           <>
             <CriteriaPanel met={evaluation.termination.met} criteria={evaluation.termination.criteria} />
             <section className="card" data-testid="projection">
               <h2>Projected end</h2>
-              <p>{evaluation.termination.met ? "The criteria are met now." : projectedText(permeation?.startedAt ?? null, evaluation.projection.projectedAtS, evaluation.projection.reason)}</p>
+              <p>{evaluation.termination.met ? "The criteria are met now." : projectedText(permeation?.startedAt ?? null, evaluation.projection.projectedAtS, evaluation.projection.reason, zone)}</p>
               <p className="muted">Gradient from the {thicknessBasis === "post-test" ? "post-test bentonite layer thickness" : "initial specimen thickness (until the post-test thickness is recorded)"}; unit weight of water: {evaluation.unitWeightBasis}.</p>
               {evaluation.warnings.map((w) => <p key={w} className="notice notice-caution">{w}</p>)}
             </section>
@@ -92,8 +97,11 @@ export default async function RunPage({ params }: Props) {
         {mine && steps.includes("terminate") && <section className="card"><h2>End permeation</h2><TerminateForm runId={run.id} version={run.version} criteriaMet={evaluation?.termination.met ?? false} /></section>}
         {mine && steps.includes("record-post-test") && <section className="card"><h2>Post-test measurements</h2><PostTestForm runId={run.id} version={run.version} /></section>}
         {mine && steps.includes("submit") && run.postTestThicknessMm && <section className="card"><h2>Review</h2><SubmitRunButton runId={run.id} version={run.version} /></section>}
+        {mine && steps.includes("abandon") && (
+          <section className="card" data-testid="abandon-run"><h2>Abandon the run</h2><AbandonRunForm runId={run.id} version={run.version} locations={locations} /></section>
+        )}
         {run.reviews.length > 0 && (
-          <section className="card"><h2>Reviews</h2><ul>{run.reviews.map((r) => <li key={r.id}>{formatDateTime(r.createdAt)} · {r.reviewer.name}: {r.decision.toLowerCase()} {r.comments && `— ${r.comments}`}</li>)}</ul></section>
+          <section className="card"><h2>Reviews</h2><ul>{run.reviews.map((r) => <li key={r.id}>{formatDateTime(r.createdAt, zone)} · {r.reviewer.name}: {r.decision.toLowerCase()} {r.comments && `— ${r.comments}`}</li>)}</ul></section>
         )}
       </div>
     </>

@@ -11,6 +11,7 @@ import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { listCoupons } from "@/lib/server/lists/list-coupons";
 import { listFilterOptions } from "@/lib/server/lists/list-filter-options";
 import { listQueryToFilterParts, parseListQuery, type RawSearchParams } from "@/lib/validation/list-query";
+import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 
 export const metadata = { title: "Samples: coupons" };
 
@@ -18,6 +19,7 @@ const BASE = "/samples/coupons";
 
 export default async function CouponsPage({ searchParams }: { searchParams: Promise<RawSearchParams> }) {
   const actor = await requirePageUser("sample.view");
+  const zone = await getLabTimeZone();
   const { query, ignored } = parseListQuery("coupons", await searchParams);
   const [list, options] = await Promise.all([listCoupons({ actor, query }), listFilterOptions({ actor })]);
   const sort = { kind: "coupons" as const, query, basePath: BASE };
@@ -46,7 +48,7 @@ export default async function CouponsPage({ searchParams }: { searchParams: Prom
                 <td>{c.positionInSample}</td>
                 <td>{c.lengthMm} × {c.widthMm}</td>
                 <td>{c.cutByName}</td>
-                <td>{formatDateTime(c.cutAt)}</td>
+                <td>{formatDateTime(c.cutAt, zone)}</td>
                 <td>{c.specimenCount}</td>
                 <td className="mono">{c.locationCode ?? "—"}</td>
                 <td><StateTag state={c.state} /></td>

@@ -11,6 +11,7 @@ import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { listFilterOptions } from "@/lib/server/lists/list-filter-options";
 import { listSpecimens } from "@/lib/server/lists/list-specimens";
 import { listQueryToFilterParts, parseListQuery, type RawSearchParams } from "@/lib/validation/list-query";
+import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 
 export const metadata = { title: "Samples: specimens" };
 
@@ -18,6 +19,7 @@ const BASE = "/samples/specimens";
 
 export default async function SpecimensPage({ searchParams }: { searchParams: Promise<RawSearchParams> }) {
   const actor = await requirePageUser("sample.view");
+  const zone = await getLabTimeZone();
   const { query, ignored } = parseListQuery("specimens", await searchParams);
   const [list, options] = await Promise.all([listSpecimens({ actor, query }), listFilterOptions({ actor })]);
   const sort = { kind: "specimens" as const, query, basePath: BASE };
@@ -50,7 +52,7 @@ export default async function SpecimensPage({ searchParams }: { searchParams: Pr
                 <td>{s.dieDiameterMm}</td>
                 <td>{s.initialThicknessMm}</td>
                 <td>{s.preparedByName}</td>
-                <td>{formatDateTime(s.preparedAt)}</td>
+                <td>{formatDateTime(s.preparedAt, zone)}</td>
                 <td className="mono">{s.locationCode ?? "—"}</td>
                 <td><StateTag state={s.state} /></td>
               </tr>

@@ -10,6 +10,7 @@ import { formatDateTime } from "@/lib/format/dates";
 import { can } from "@/lib/policy/permissions";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getSpecification } from "@/lib/server/specifications/get-specification";
+import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 
 type Props = { params: Promise<{ id: string }> };
 
@@ -17,6 +18,7 @@ export const metadata = { title: "Specification" };
 
 export default async function SpecificationPage({ params }: Props) {
   const actor = await requirePageUser("certificate.view");
+  const zone = await getLabTimeZone();
   const { id } = await params;
   const spec = await getSpecification({ actor, id }).catch((error) => {
     if (isAppError(error) && error.code === "NOT_FOUND") notFound();
@@ -39,7 +41,7 @@ export default async function SpecificationPage({ params }: Props) {
       </div>
       <div className="stack-gap">
         <section className="card">
-          <RecordFacts facts={[["Limits", String(spec.limits.length)], ["Created", formatDateTime(spec.createdAt)], ["Last changed", formatDateTime(spec.updatedAt)]]} />
+          <RecordFacts facts={[["Limits", String(spec.limits.length)], ["Created", formatDateTime(spec.createdAt, zone)], ["Last changed", formatDateTime(spec.updatedAt, zone)]]} />
           {!spec.isTemplate && !spec.inUse && <p className="notice notice-caution">This project has a newer specification; certificates apply that one, not this.</p>}
         </section>
         <section className="card">

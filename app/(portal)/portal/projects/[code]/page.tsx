@@ -6,6 +6,7 @@ import { ProjectShipments } from "@/components/portal/project-shipments";
 import { isAppError } from "@/lib/errors/app-error";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getPortalProject } from "@/lib/server/portal/get-portal-project";
+import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 
 type Props = { params: Promise<{ code: string }> };
 
@@ -13,6 +14,7 @@ export const metadata = { title: "Project" };
 
 export default async function PortalProjectPage({ params }: Props) {
   const actor = await requirePageUser("portal.view");
+  const zone = await getLabTimeZone();
   const { code } = await params;
   // Another organisation's project is not found, exactly like one that does not exist.
   const project = await getPortalProject({ actor, projectCode: code }).catch((error) => {
@@ -31,19 +33,19 @@ export default async function PortalProjectPage({ params }: Props) {
       <div className="stack-gap">
         <section className="card">
           <h2>Rolls <span className="count">{project.rolls.length}</span></h2>
-          <ProjectRolls rolls={project.rolls} />
+          <ProjectRolls zone={zone} rolls={project.rolls} />
         </section>
         <section className="card">
           <h2>Certificates <span className="count">{project.certificates.length === 0 ? "none yet" : project.certificates.length}</span></h2>
           {project.certificates.length === 0 ? (
             <p className="empty">No certificate has been issued for this project yet.</p>
           ) : (
-            <CertificateTable certificates={project.certificates} />
+            <CertificateTable zone={zone} certificates={project.certificates} />
           )}
         </section>
         <section className="card">
           <h2>Shipments received <span className="count">{project.shipments.length}</span></h2>
-          <ProjectShipments shipments={project.shipments} />
+          <ProjectShipments zone={zone} shipments={project.shipments} />
         </section>
       </div>
     </>

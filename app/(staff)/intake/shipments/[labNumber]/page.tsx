@@ -12,6 +12,7 @@ import { can } from "@/lib/policy/permissions";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getGenealogy } from "@/lib/server/samples/get-genealogy";
 import { getShipment } from "@/lib/server/samples/get-sample-item";
+import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 
 type Props = { params: Promise<{ labNumber: string }> };
 
@@ -21,6 +22,7 @@ export async function generateMetadata({ params }: Props) {
 
 export default async function ShipmentPage({ params }: Props) {
   const actor = await requirePageUser("shipment.view");
+  const zone = await getLabTimeZone();
   const { labNumber } = await params;
   const [shipment, genealogy] = await Promise.all([getShipment({ actor, labNumber }), getGenealogy({ actor, shipmentLabNumber: labNumber })]).catch((error) => {
     if (isAppError(error) && error.code === "NOT_FOUND") notFound();
@@ -44,10 +46,10 @@ export default async function ShipmentPage({ params }: Props) {
       <div className="stack-gap">
         <section className="card">
           <RecordFacts facts={[
-            ["Received", formatDateTime(shipment.receivedAt)],
+            ["Received", formatDateTime(shipment.receivedAt, zone)],
             ["Received by", shipment.receivedBy.name],
             ["Delivered by", shipment.deliveredBy],
-            ["Receipt", shipment.acknowledgedAt ? <span data-testid="receipt-status">acknowledged {formatDateTime(shipment.acknowledgedAt)} by {shipment.acknowledgedBy?.name}</span> : <span data-testid="receipt-status" className="state state-warn">not yet acknowledged</span>],
+            ["Receipt", shipment.acknowledgedAt ? <span data-testid="receipt-status">acknowledged {formatDateTime(shipment.acknowledgedAt, zone)} by {shipment.acknowledgedBy?.name}</span> : <span data-testid="receipt-status" className="state state-warn">not yet acknowledged</span>],
             ["Condition on arrival", shipment.conditionNotes || "—"],
           ]} />
         </section>
@@ -74,7 +76,7 @@ export default async function ShipmentPage({ params }: Props) {
           </section>
           <section className="card">
             <h2>Corrections</h2>
-            <CorrectionHistory corrections={shipment.corrections.map((c) => ({ ...c, itemLabel: c.entity === "Roll" ? (rollLabel.get(c.entityId) ?? "roll") : "shipment" }))} />
+            <CorrectionHistory zone={zone} corrections={shipment.corrections.map((c) => ({ ...c, itemLabel: c.entity === "Roll" ? (rollLabel.get(c.entityId) ?? "roll") : "shipment" }))} />
             {can(actor.role, "shipment.correct") && (
               <>
                 <h2 style={{ marginTop: "1rem" }}>Correct this receipt</h2>

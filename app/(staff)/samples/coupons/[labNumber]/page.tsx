@@ -12,6 +12,7 @@ import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getItemHistory } from "@/lib/server/samples/get-item-history";
 import { getCoupon } from "@/lib/server/samples/get-sample-item";
 import { listStorageLocations } from "@/lib/server/samples/list-storage-locations";
+import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 
 type Props = { params: Promise<{ labNumber: string }> };
 
@@ -21,6 +22,7 @@ export async function generateMetadata({ params }: Props) {
 
 export default async function CouponPage({ params }: Props) {
   const actor = await requirePageUser("sample.view");
+  const zone = await getLabTimeZone();
   const { labNumber } = await params;
   const coupon = await getCoupon({ actor, labNumber }).catch((error) => {
     if (isAppError(error) && error.code === "NOT_FOUND") notFound();
@@ -40,8 +42,8 @@ export default async function CouponPage({ params }: Props) {
         <section className="card">
           <RecordFacts facts={[
             ["Position in the roll sample", coupon.positionInSample], ["Size (mm)", `${coupon.lengthMm} × ${coupon.widthMm}`],
-            ["Cut by", coupon.cutBy.name], ["Cut at", formatDateTime(coupon.cutAt)],
-            ["Kept at", coupon.storageLocation ? `${coupon.storageLocation.code} · ${coupon.storageLocation.name}` : "—"], ["Retained until", formatDate(coupon.retainUntil)],
+            ["Cut by", coupon.cutBy.name], ["Cut at", formatDateTime(coupon.cutAt, zone)],
+            ["Kept at", coupon.storageLocation ? `${coupon.storageLocation.code} · ${coupon.storageLocation.name}` : "—"], ["Retained until", formatDate(coupon.retainUntil, zone)],
           ]} />
           {can(actor.role, "sample.move") && <ItemCustodyActions kind="coupon" id={coupon.id} version={coupon.version} labNumber={coupon.labNumber} currentLocationId={coupon.storageLocationId} locations={locations} />}
         </section>
@@ -52,16 +54,16 @@ export default async function CouponPage({ params }: Props) {
               <table className="list" data-testid="coupon-specimens">
                 <thead><tr><th>Specimen</th><th>Method</th><th>Prepared</th><th>State</th></tr></thead>
                 <tbody>{coupon.specimens.map((s) => (
-                  <tr key={s.id}><td><Link className="mono" href={`/samples/specimens/${s.labNumber}`}>{s.labNumber}</Link></td><td>ASTM {s.intendedMethodCode}</td><td>{formatDate(s.preparedAt)}</td><td><StateTag state={s.state} /></td></tr>
+                  <tr key={s.id}><td><Link className="mono" href={`/samples/specimens/${s.labNumber}`}>{s.labNumber}</Link></td><td>ASTM {s.intendedMethodCode}</td><td>{formatDate(s.preparedAt, zone)}</td><td><StateTag state={s.state} /></td></tr>
                 ))}</tbody>
               </table>
             )}
           </section>
           {can(actor.role, "sample.cut") && coupon.state === "CUT" && (
-            <section className="card"><h2>Prepare a specimen</h2><PrepareSpecimenForm couponId={coupon.id} locations={locations} /></section>
+            <section className="card"><h2>Prepare a specimen</h2><PrepareSpecimenForm zone={zone} couponId={coupon.id} locations={locations} /></section>
           )}
         </div>
-        <section className="card"><h2>Custody ledger</h2><CustodyLedger events={history.events} /></section>
+        <section className="card"><h2>Custody ledger</h2><CustodyLedger zone={zone} events={history.events} /></section>
       </div>
     </>
   );

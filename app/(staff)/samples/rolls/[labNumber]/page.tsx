@@ -13,6 +13,7 @@ import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getItemHistory } from "@/lib/server/samples/get-item-history";
 import { getRoll } from "@/lib/server/samples/get-sample-item";
 import { listStorageLocations } from "@/lib/server/samples/list-storage-locations";
+import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 
 type Props = { params: Promise<{ labNumber: string }> };
 
@@ -22,6 +23,7 @@ export async function generateMetadata({ params }: Props) {
 
 export default async function RollPage({ params }: Props) {
   const actor = await requirePageUser("sample.view");
+  const zone = await getLabTimeZone();
   const { labNumber } = await params;
   const roll = await getRoll({ actor, labNumber }).catch((error) => {
     if (isAppError(error) && error.code === "NOT_FOUND") notFound();
@@ -42,9 +44,9 @@ export default async function RollPage({ params }: Props) {
           <RecordFacts facts={[
             ["Roll number", roll.rollNumber], ["Lot number", roll.lotNumber], ["Product", roll.product], ["Manufacturer", roll.manufacturer],
             ["Sample size (mm)", roll.sampleLengthMm && roll.sampleWidthMm ? `${roll.sampleLengthMm} × ${roll.sampleWidthMm}` : "—"],
-            ["Machine direction marked", roll.machineDirectionMarked ? "yes" : "no"], ["Received", formatDateTime(roll.shipment.receivedAt)],
+            ["Machine direction marked", roll.machineDirectionMarked ? "yes" : "no"], ["Received", formatDateTime(roll.shipment.receivedAt, zone)],
             ["Kept at", roll.storageLocation ? `${roll.storageLocation.code} · ${roll.storageLocation.name}` : "—"],
-            ["Retained until", formatDate(roll.retainUntil)],
+            ["Retained until", formatDate(roll.retainUntil, zone)],
           ]} />
           {can(actor.role, "sample.move") && <ItemCustodyActions kind="roll" id={roll.id} version={roll.version} labNumber={roll.labNumber} currentLocationId={roll.storageLocationId} locations={locations} />}
         </section>
@@ -55,17 +57,17 @@ export default async function RollPage({ params }: Props) {
               <table className="list" data-testid="roll-coupons">
                 <thead><tr><th>Coupon</th><th>Position</th><th>Cut</th><th>Specimens</th><th>State</th></tr></thead>
                 <tbody>{roll.coupons.map((c) => (
-                  <tr key={c.id}><td><Link className="mono" href={`/samples/coupons/${c.labNumber}`}>{c.labNumber}</Link></td><td>{c.positionInSample}</td><td>{formatDate(c.cutAt)}</td><td>{c._count.specimens}</td><td><StateTag state={c.state} /></td></tr>
+                  <tr key={c.id}><td><Link className="mono" href={`/samples/coupons/${c.labNumber}`}>{c.labNumber}</Link></td><td>{c.positionInSample}</td><td>{formatDate(c.cutAt, zone)}</td><td>{c._count.specimens}</td><td><StateTag state={c.state} /></td></tr>
                 ))}</tbody>
               </table>
             )}
           </section>
           {can(actor.role, "sample.cut") && (
-            <section className="card"><h2>Cut a coupon</h2><CutCouponForm rollId={roll.id} rollVersion={roll.version} locations={locations} /></section>
+            <section className="card"><h2>Cut a coupon</h2><CutCouponForm zone={zone} rollId={roll.id} rollVersion={roll.version} locations={locations} /></section>
           )}
         </div>
-        <section className="card"><h2>Custody ledger</h2><CustodyLedger events={history.events} /></section>
-        <section className="card"><h2>Corrections</h2><CorrectionHistory corrections={history.corrections} /></section>
+        <section className="card"><h2>Custody ledger</h2><CustodyLedger zone={zone} events={history.events} /></section>
+        <section className="card"><h2>Corrections</h2><CorrectionHistory zone={zone} corrections={history.corrections} /></section>
       </div>
     </>
   );

@@ -11,6 +11,7 @@ import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getItemHistory } from "@/lib/server/samples/get-item-history";
 import { getSpecimen } from "@/lib/server/samples/get-sample-item";
 import { listStorageLocations } from "@/lib/server/samples/list-storage-locations";
+import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 
 type Props = { params: Promise<{ labNumber: string }> };
 
@@ -20,6 +21,7 @@ export async function generateMetadata({ params }: Props) {
 
 export default async function SpecimenPage({ params }: Props) {
   const actor = await requirePageUser("sample.view");
+  const zone = await getLabTimeZone();
   const { labNumber } = await params;
   const specimen = await getSpecimen({ actor, labNumber }).catch((error) => {
     if (isAppError(error) && error.code === "NOT_FOUND") notFound();
@@ -43,8 +45,8 @@ export default async function SpecimenPage({ params }: Props) {
           <RecordFacts facts={[
             ["Intended method", `ASTM ${specimen.intendedMethodCode}`], ["Die diameter (mm)", specimen.dieDiameterMm], ["Initial thickness (mm)", specimen.initialThicknessMm],
             ["Initial mass (g)", specimen.initialMassG], ["Moisture content (%)", specimen.moistureContentPct ?? "—"], ["Prepared by", specimen.preparedBy.name],
-            ["Prepared at", formatDateTime(specimen.preparedAt)], ["Kept at", specimen.storageLocation ? `${specimen.storageLocation.code} · ${specimen.storageLocation.name}` : "—"],
-            ["Retained until", formatDate(specimen.retainUntil)],
+            ["Prepared at", formatDateTime(specimen.preparedAt, zone)], ["Kept at", specimen.storageLocation ? `${specimen.storageLocation.code} · ${specimen.storageLocation.name}` : "—"],
+            ["Retained until", formatDate(specimen.retainUntil, zone)],
           ]} />
           {can(actor.role, "sample.move") && <ItemCustodyActions kind="specimen" id={specimen.id} version={specimen.version} labNumber={specimen.labNumber} currentLocationId={specimen.storageLocationId} locations={locations} />}
         </section>
@@ -64,7 +66,7 @@ export default async function SpecimenPage({ params }: Props) {
             )}
           </section>
         </div>
-        <section className="card"><h2>Custody ledger</h2><CustodyLedger events={history.events} /></section>
+        <section className="card"><h2>Custody ledger</h2><CustodyLedger zone={zone} events={history.events} /></section>
       </div>
     </>
   );
