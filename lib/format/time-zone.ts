@@ -27,10 +27,14 @@ export function isTimeZone(zone: string): boolean {
   }
 }
 
-/** The time zones to offer in a list: the runtime's IANA names, with UTC first. */
-export function listTimeZones(): string[] {
+/**
+ * The time zones to offer in a list: the runtime's IANA names, with UTC first, and `current` (the zone
+ * saved now) even where the runtime lists it under another name (e.g. Asia/Kolkata as Asia/Calcutta).
+ */
+export function listTimeZones(current?: string): string[] {
   const names = typeof Intl.supportedValuesOf === "function" ? Intl.supportedValuesOf("timeZone") : [];
-  return ["UTC", ...names.filter((n) => n !== "UTC")];
+  const zones = ["UTC", ...names.filter((n) => n !== "UTC")];
+  return current && !zones.includes(current) && isTimeZone(current) ? [current, ...zones] : zones;
 }
 
 type WallParts = { year: number; month: number; day: number; hour: number; minute: number; second: number };

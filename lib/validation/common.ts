@@ -16,7 +16,7 @@ export function optionalMeasured(label: string, options: { min?: number; max?: n
 export const requiredText = (label: string, max = 200) =>
   z.string({ message: `Enter ${label}.` }).trim().min(1, `Enter ${label}.`).max(max, `${capitalise(label)} is longer than ${max} characters.`);
 
-export const reasonSchema = z.string().trim().min(5, "Say why, in a few words (at least 5 characters).").max(500);
+export const reasonSchema = z.string({ message: "Say why, in a few words (at least 5 characters)." }).trim().min(5, "Say why, in a few words (at least 5 characters).").max(500);
 
 /** A date-time from a datetime-local input or ISO text; not in the future by more than a few minutes. */
 export const pastDateTime = (label: string) =>

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { withActor, type Tx } from "@/lib/server/db/transaction";
 import { transition, type CustodyActionName, type ItemKind, type ItemStateName } from "@/lib/custody/state-machine";
+import { DEMO_CLIENTS } from "../../prisma/seed/demo-people";
 import { buildDemoScenario } from "../../prisma/seed/demo-scenario";
 
 class RolledBack extends Error {}
@@ -38,7 +39,9 @@ async function demoProblems(tx: Tx, now: Date): Promise<string[]> {
     if (a && b && a > b) problems.push(`${what}: ${a.toISOString()} is after ${b.toISOString()}`);
   };
   const events = { select: { action: true, fromState: true, toState: true, occurredAt: true } } as const;
+  // The demo's own shipments only: the shared test database holds other tests' records too.
   const shipments = await tx.shipment.findMany({
+    where: { clientOrganization: { code: { in: DEMO_CLIENTS.map((c) => c.code) } } },
     include: {
       rolls: {
         include: {

@@ -95,7 +95,7 @@ describe("equipment register", () => {
     await recordCalibration({ actor: admin, input: calibration(failed.id, 1, 365, { passed: false }) });
     const parked = await register(admin);
     await recordCalibration({ actor: admin, input: calibration(parked.id, 1) });
-    await setEquipmentStatus({ actor: admin, input: { equipmentId: parked.id, version: parked.version, status: "OUT_OF_SERVICE" } });
+    await setEquipmentStatus({ actor: admin, input: { equipmentId: parked.id, version: parked.version, status: "OUT_OF_SERVICE", reason: "Checked by the administrator" } });
 
     const statuses = await findEquipmentStatuses({ ids: [overdue.id, failed.id, parked.id, "no-such-id"], now: new Date() });
     expect(statuses.get(overdue.id)?.status).toMatchObject({ usable: false, state: "overdue" });
@@ -146,7 +146,7 @@ describe("equipment register", () => {
     expect(await db().equipment.findUnique({ where: { assetTag } })).toBeNull();
     const cell = await register(admin);
     expect(await codeOf(recordCalibration({ actor: technician, input: calibration(cell.id, 1) }))).toBe("FORBIDDEN");
-    expect(await codeOf(setEquipmentStatus({ actor: technician, input: { equipmentId: cell.id, version: 1, status: "RETIRED" } }))).toBe("FORBIDDEN");
+    expect(await codeOf(setEquipmentStatus({ actor: technician, input: { equipmentId: cell.id, version: 1, status: "RETIRED", reason: "Checked by the administrator" } }))).toBe("FORBIDDEN");
   });
 
   it("refuses a duplicate asset tag with a message on the field", async () => {
@@ -167,10 +167,10 @@ describe("equipment register", () => {
   it("refuses a status change made on a stale version, and a calibration for retired equipment", async () => {
     const admin = await makeUser("LAB_ADMIN");
     const cell = await register(admin);
-    await setEquipmentStatus({ actor: admin, input: { equipmentId: cell.id, version: cell.version, status: "OUT_OF_SERVICE" } });
-    expect(await codeOf(setEquipmentStatus({ actor: admin, input: { equipmentId: cell.id, version: cell.version, status: "IN_SERVICE" } }))).toBe("CONFLICT");
-    expect(await codeOf(setEquipmentStatus({ actor: admin, input: { equipmentId: "no-such-id", version: 1, status: "IN_SERVICE" } }))).toBe("NOT_FOUND");
-    const retired = await setEquipmentStatus({ actor: admin, input: { equipmentId: cell.id, version: cell.version + 1, status: "RETIRED" } });
+    await setEquipmentStatus({ actor: admin, input: { equipmentId: cell.id, version: cell.version, status: "OUT_OF_SERVICE", reason: "Checked by the administrator" } });
+    expect(await codeOf(setEquipmentStatus({ actor: admin, input: { equipmentId: cell.id, version: cell.version, status: "IN_SERVICE", reason: "Checked by the administrator" } }))).toBe("CONFLICT");
+    expect(await codeOf(setEquipmentStatus({ actor: admin, input: { equipmentId: "no-such-id", version: 1, status: "IN_SERVICE", reason: "Checked by the administrator" } }))).toBe("NOT_FOUND");
+    const retired = await setEquipmentStatus({ actor: admin, input: { equipmentId: cell.id, version: cell.version + 1, status: "RETIRED", reason: "Checked by the administrator" } });
     expect(retired).toMatchObject({ status: "RETIRED", version: cell.version + 2 });
     expect(await codeOf(recordCalibration({ actor: admin, input: calibration(cell.id, 1) }))).toBe("ILLEGAL_TRANSITION");
   });

@@ -86,7 +86,7 @@ describe("entering readings in the grid", () => {
     const equilibrating = await makeRun({ state: "EQUILIBRATING" });
     const notYet = await failure(recordReadings({ actor: equilibrating.technician, input: { runId: equilibrating.run.id, pressureUnit: "KPA", readings: [gridRow(at(equilibrating.permeationStartedAt, 1), "452", "18")] } }));
     expect(notYet.code).toBe("ILLEGAL_TRANSITION");
-    expect(notYet.message).toBe(`${equilibrating.run.labNumber}: A run that is equilibrating cannot record readings; from here you can record a back-pressure stage, start permeation.`);
+    expect(notYet.message).toBe(`${equilibrating.run.labNumber}: A run that is equilibrating cannot record readings; from here you can record a back-pressure stage, start permeation, abandon it.`);
 
     const { other, qa, run, permeationStartedAt } = await makeRun();
     const input = { runId: run.id, pressureUnit: "KPA", readings: [gridRow(at(permeationStartedAt, 1), "452", "18")] };

@@ -8,28 +8,21 @@ import { submitRun } from "@/lib/server/runs/submit-run";
 import { terminateRun } from "@/lib/server/runs/terminate-run";
 import { failure } from "../support/refusals";
 import { db, makeProject, makeUser, unique } from "../support/factories";
+import { makeInstrument } from "../support/make-instrument";
 
 const DAY = 86_400_000;
 const SYSTEM = { id: "system:test" };
 
 
-async function makeInstrument(kind: "PERMEAMETER_CELL" | "BURETTE_PANEL" | "PRESSURE_TRANSDUCER", options: { calibratedDaysAgo?: number; ratedMaxPressurePa?: number; values?: object } = {}) {
-  return withActor(SYSTEM, async (tx) => {
-    const admin = await tx.user.findFirst({ select: { id: true } });
-    const equipment = await tx.equipment.create({ data: { assetTag: unique(kind.slice(0, 4)).toUpperCase(), kind, name: `Test ${kind}`, ratedMaxPressurePa: options.ratedMaxPressurePa ?? 1_000_000 } });
-    const calibratedAt = new Date(Date.now() - (options.calibratedDaysAgo ?? 30) * DAY);
-    await tx.calibration.create({ data: { equipmentId: equipment.id, calibratedAt, dueAt: new Date(calibratedAt.getTime() + 365 * DAY), reference: unique("CAL"), performedBy: "Test metrology", values: options.values ?? {}, recordedById: admin!.id } });
-    return equipment;
-  });
-}
-
+/** A specimen prepared 8 days ago from a roll received 10 days ago, so its run may be dated back a week. */
 async function makePreparedSpecimen(technicianId: string) {
   const project = await makeProject();
+  const ago = (days: number) => new Date(Date.now() - days * DAY);
   return withActor(SYSTEM, async (tx) => {
-    const shipment = await tx.shipment.create({ data: { labNumber: unique("S"), clientOrganizationId: project.clientOrganizationId, projectId: project.id, deliveredBy: "x", receivedAt: new Date(), receivedById: technicianId } });
+    const shipment = await tx.shipment.create({ data: { labNumber: unique("S"), clientOrganizationId: project.clientOrganizationId, projectId: project.id, deliveredBy: "x", receivedAt: ago(10), receivedById: technicianId } });
     const roll = await tx.roll.create({ data: { labNumber: unique("R"), shipmentId: shipment.id, projectId: project.id, rollNumber: unique("r"), lotNumber: "L", product: "GCL", manufacturer: "M", state: "CUT" } });
-    const coupon = await tx.coupon.create({ data: { labNumber: unique("C"), rollId: roll.id, positionInSample: "centre", lengthMm: 300, widthMm: 300, cutById: technicianId, cutAt: new Date() } });
-    return tx.specimen.create({ data: { labNumber: unique("P"), couponId: coupon.id, dieDiameterMm: 100, initialThicknessMm: 6, initialMassG: 45, intendedMethodCode: "D5887", preparedById: technicianId, preparedAt: new Date() } });
+    const coupon = await tx.coupon.create({ data: { labNumber: unique("C"), rollId: roll.id, positionInSample: "centre", lengthMm: 300, widthMm: 300, cutById: technicianId, cutAt: ago(9) } });
+    return tx.specimen.create({ data: { labNumber: unique("P"), couponId: coupon.id, dieDiameterMm: 100, initialThicknessMm: 6, initialMassG: 45, intendedMethodCode: "D5887", preparedById: technicianId, preparedAt: ago(8) } });
   });
 }
 
@@ -42,7 +35,7 @@ async function setUp() {
     makeInstrument("PRESSURE_TRANSDUCER", { ratedMaxPressurePa: 700_000 }),
     makePreparedSpecimen(technician.id),
   ]);
-  const assignInput = (cellId: string) => ({ specimenId: specimen.id, cellId, burettePanelId: panel.id, transducerId: transducer.id, methodCode: "D5887", pressureUnit: "KPA", effectiveStress: "34.5" });
+  const assignInput = (cellId: string) => ({ specimenId: specimen.id, cellId, burettePanelId: panel.id, transducerId: transducer.id, methodCode: "D5887", pressureUnit: "KPA", effectiveStress: "34.5", mountedAt: new Date(Date.now() - 7 * DAY).toISOString() });
   return { technician, other, qa, cell, staleCell, panel, transducer, specimen, assignInput };
 }
 

@@ -23,7 +23,7 @@ export async function cutCoupon(options: { actor: CurrentUser; input: unknown; n
     if (!source) throw new AppError("NOT_FOUND", "That roll does not exist.");
     requireEventOrder("cutAt", {
       label: "The cut time", at: input.cutAt, now: options.now ?? new Date(), zone: await readLabTimeZone(tx),
-      after: [{ at: source.shipment.receivedAt, what: `roll ${source.labNumber} was received (shipment ${source.shipment.labNumber})` }],
+      after: [{ at: source.shipment.receivedAt, what: `roll ${source.labNumber} was received with shipment ${source.shipment.labNumber}` }],
     });
     const location = await tx.storageLocation.findUnique({ where: { id: input.storageLocationId }, select: { active: true } });
     if (!location?.active) throw new AppError("INVALID_INPUT", undefined, { fieldErrors: { storageLocationId: "Choose a storage location in use." } });

@@ -40,5 +40,8 @@ describe("certificate wording", () => {
     expect(isoDateTime("2026-12-14T09:30:00.000Z")).toBe("2026-12-14 09:30 UTC");
     expect(isoDateTime("2026-12-14T10:30:00+01:00")).toBe("2026-12-14 09:30 UTC");
     expect(isoDateTime(null)).toBe("—");
+    // In the lab's zone when the certificate names one (Europe/Berlin is UTC+1 in December; IANA tz database).
+    expect(isoDateTime("2026-12-14T23:30:00.000Z", "Europe/Berlin")).toBe("2026-12-15 00:30 CET");
+    expect(isoDate("2026-12-14T23:30:00.000Z", "Europe/Berlin")).toBe("2026-12-15");
   });
 });

@@ -57,6 +57,14 @@ describe("custody state machine", () => {
     expect(transition("specimen", "ASSIGNED", "MOVED").ok).toBe(false);
   });
 
+  it("takes a specimen out of its cell only when its run is given up, into retention, from where it may be disposed of", () => {
+    expect(transition("specimen", "ASSIGNED", "WITHDRAWN")).toEqual({ ok: true, toState: "RETAINED" });
+    expect(transition("specimen", "UNDER_TEST", "WITHDRAWN")).toEqual({ ok: true, toState: "RETAINED" });
+    for (const state of ITEM_STATES.filter((s) => s !== "ASSIGNED" && s !== "UNDER_TEST")) expect(transition("specimen", state, "WITHDRAWN").ok, state).toBe(false);
+    for (const state of ITEM_STATES) expect(transition("roll", state, "WITHDRAWN").ok).toBe(false);
+    expect(transition("specimen", "RETAINED", "DISPOSED").ok).toBe(true);
+  });
+
   it("has an answer for every kind, state and action without throwing", () => {
     for (const kind of ["roll", "coupon", "specimen"] as ItemKind[])
       for (const state of ITEM_STATES) for (const action of CUSTODY_ACTIONS) expect(typeof transition(kind, state, action).ok).toBe("boolean");

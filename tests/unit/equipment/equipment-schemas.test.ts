@@ -61,9 +61,12 @@ describe("recording a calibration", () => {
 });
 
 describe("status and stored values", () => {
-  it("needs a version for the concurrent-edit check", () => {
-    expect(setEquipmentStatusSchema.safeParse({ equipmentId: "e1", status: "RETIRED" }).success).toBe(false);
-    expect(setEquipmentStatusSchema.parse({ equipmentId: "e1", status: "RETIRED", version: "3" }).version).toBe(3);
+  it("needs a version for the concurrent-edit check, and the reason for the change", () => {
+    expect(setEquipmentStatusSchema.safeParse({ equipmentId: "e1", status: "RETIRED", reason: "Cracked cell body" }).success).toBe(false);
+    expect(setEquipmentStatusSchema.parse({ equipmentId: "e1", status: "RETIRED", version: "3", reason: "Cracked cell body" }).version).toBe(3);
+    const noReason = setEquipmentStatusSchema.safeParse({ equipmentId: "e1", status: "RETIRED", version: "3", reason: " " });
+    expect(noReason.success).toBe(false);
+    if (!noReason.success) expect(noReason.error.issues[0]?.path).toEqual(["reason"]);
   });
 
   it("converts mm² and m² exactly and reads stored burette areas", () => {

@@ -27,10 +27,20 @@ describe("run state machine", () => {
   it("refuses skipping steps and says what can be done instead", () => {
     const result = runTransition("SATURATING", "terminate");
     expect(result.ok).toBe(false);
-    if (!result.ok) expect(result.message).toBe("A run that is saturating cannot terminate the run; from here you can record a back-pressure stage, start the equilibration hold.");
+    if (!result.ok) expect(result.message).toBe("A run that is saturating cannot terminate the run; from here you can record a back-pressure stage, start the equilibration hold, abandon it.");
     expect(runTransition("PERMEATING", "submit").ok).toBe(false);
     expect(runTransition("TERMINATED", "record-reading").ok).toBe(false);
     expect(runTransition("SUBMITTED", "record-reading").ok).toBe(false);
+  });
+
+  it("lets a run be abandoned in every state before approval, and nothing after", () => {
+    const before = RUN_STATES.filter((s) => s !== "APPROVED" && s !== "ABANDONED");
+    for (const state of before) expect(runTransition(state, "abandon"), state).toEqual({ ok: true, toState: "ABANDONED" });
+    expect(runTransition("APPROVED", "abandon").ok).toBe(false);
+    expect(allowedRunSteps("ABANDONED")).toEqual([]);
+    // An abandoned run can never be submitted, so it never reaches review.
+    expect(RUN_STATES.filter((s) => runTransition(s, "submit").ok)).not.toContain("ABANDONED");
+    expect(holdsCell("ABANDONED")).toBe(false);
   });
 
   it("frees the cell once permeation is terminated", () => {

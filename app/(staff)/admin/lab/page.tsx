@@ -10,7 +10,7 @@ export default async function LabDetailsPage() {
   const actor = await requirePageUser("lab.configure");
   const lab = await getLabDetails({ actor });
   const now = new Date();
-  const zones = listTimeZones().map((zone) => ({ zone, label: `${zone} (${formatOffset(now, zone)})` }));
+  const zones = listTimeZones(lab.timeZone).map((zone) => ({ zone, label: `${zone} (${formatOffset(now, zone)})` }));
   return (
     <>
       <h1>Lab details</h1>
