@@ -1,6 +1,6 @@
 import path from "node:path";
 import type { Browser, ElementHandle, Page } from "puppeteer";
-import { chooseByName, fill, localDateTime, setValue } from "./support/forms";
+import { chooseByName, fill, labDateTime, setValue } from "./support/forms";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { baseUrl, browserAvailable, launchBrowser, pageSignedInAs, textOf } from "./support/session";
 
@@ -11,7 +11,7 @@ async function recordStage(page: Page, kind: string, pressures: [string, string,
   await fill(page, "Cell pressure (kPa)", pressures[0]);
   await fill(page, "Influent pressure (kPa)", pressures[1]);
   await fill(page, "Effluent pressure (kPa)", pressures[2]);
-  await setValue(page, "Started at", localDateTime(startedAt));
+  await setValue(page, "Started at", labDateTime(startedAt));
   await page.click("button::-p-text(Record stage)");
 }
 
@@ -40,6 +40,9 @@ describe.skipIf(!browserAvailable())("a run from cell assignment to submission (
     expect(await textOf(tech, '[data-testid="assign-error"]')).toMatch(/CELL-06 was due for calibration on \d{4}-\d{2}-\d{2}\./);
 
     await chooseByName(tech, "cellId", "CELL-04");
+    // The demo's waiting specimen was prepared a week ago; the run is dated back to when it went into the cell.
+    const now = Date.now();
+    await setValue(tech, "Mounted at", labDateTime(new Date(now - 6.5 * DAY)));
     await tech.click("button::-p-text(Start the run)");
     await tech.waitForFunction(() => /^\/runs\/T\d{2}-\d{5}$/.test(location.pathname), { timeout: 30_000 });
     const runNumber = tech.url().split("/").pop()!;
@@ -47,7 +50,6 @@ describe.skipIf(!browserAvailable())("a run from cell assignment to submission (
     expect(await textOf(tech, '[data-testid="pressure-caution"]')).toMatch(/does not replace those procedures/);
 
     // --- Saturation with too small a confining margin: warned, then acknowledged.
-    const now = Date.now();
     await recordStage(tech, "Saturation", ["330", "310", "310"], new Date(now - 6 * DAY));
     await tech.waitForSelector('[data-testid="margin-warning"]');
     expect(await textOf(tech, '[data-testid="margin-warning"]')).toMatch(/by 20\.0 kPa, less than the 35 kPa confining margin/);

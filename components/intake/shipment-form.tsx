@@ -11,6 +11,7 @@ import { YES_NO_HINT } from "@/lib/custody/yes-no";
 import { logShipmentSchema } from "@/lib/validation/intake";
 import { applyServerErrors } from "@/components/ui/apply-server-errors";
 import { Field } from "@/components/ui/field";
+import { nowToTheMinute } from "@/components/ui/now-for-input";
 import { ZonedDateTimeInput } from "@/components/ui/zoned-date-time-input";
 import { LabNumberLinks } from "./lab-number-links";
 import styles from "./shipment-form.module.css";
@@ -29,7 +30,7 @@ export function ShipmentForm({ options, zone }: { options: Options; zone: string
   const [notice, setNotice] = useState<string | null>(null);
   const form = useForm<FormInput, unknown, FormOutput>({
     resolver: zodResolver(logShipmentSchema),
-    defaultValues: { clientOrganizationId: "", projectId: "", deliveredBy: "", receivedAt: new Date().toISOString(), conditionNotes: "", storageLocationId: "", rolls: [] },
+    defaultValues: { clientOrganizationId: "", projectId: "", deliveredBy: "", receivedAt: nowToTheMinute(), conditionNotes: "", storageLocationId: "", rolls: [] },
   });
   const { register, handleSubmit, formState, control, trigger } = form;
   const rolls = useFieldArray({ control, name: "rolls" });

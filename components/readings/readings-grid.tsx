@@ -7,6 +7,7 @@ import { useFieldArray, useForm, type Path } from "react-hook-form";
 import type { z } from "zod";
 import { recordReadingsAction } from "@/app/(staff)/runs/[labNumber]/readings-actions";
 import { applyServerErrors } from "@/components/ui/apply-server-errors";
+import { nowToTheMinute } from "@/components/ui/now-for-input";
 import { ZonedDateTimeInput } from "@/components/ui/zoned-date-time-input";
 import type { PressureUnit } from "@/lib/units/pressure-entry";
 import { recordReadingsSchema, type ReadingEntryInput } from "@/lib/validation/readings";
@@ -29,7 +30,7 @@ export type ReadingsGridProps = {
 };
 
 const blankRow = (from: Partial<Row>): Row => ({
-  takenAt: new Date(Math.floor(Date.now() / 60_000) * 60_000).toISOString(), inflowLevelMm: "", outflowLevelMm: "",
+  takenAt: nowToTheMinute(), inflowLevelMm: "", outflowLevelMm: "",
   influentPressure: from.influentPressure ?? "", effluentPressure: from.effluentPressure ?? "", cellPressure: from.cellPressure ?? "", temperatureC: from.temperatureC ?? "",
   influentEcMsPerM: "", effluentEcMsPerM: "", influentPh: from.influentPh ?? "", effluentPh: "",
 });

@@ -9,6 +9,7 @@ import { assignSpecimenAction } from "@/app/(staff)/runs/actions";
 import { assignSpecimenSchema } from "@/lib/validation/runs";
 import { applyServerErrors } from "@/components/ui/apply-server-errors";
 import { Field } from "@/components/ui/field";
+import { nowToTheMinute } from "@/components/ui/now-for-input";
 import { ZonedDateTimeInput } from "@/components/ui/zoned-date-time-input";
 
 type Instrument = { id: string; assetTag: string; name: string; kind: string; calibration: { usable: boolean; message: string }; overrideUntil: Date | null; busyWith: string | null };
@@ -26,7 +27,7 @@ export function AssignForm({ specimens, instruments, pressureUnit, preselectedSp
   const first = specimens.find((s) => s.id === preselectedSpecimenId) ?? specimens[0];
   const form = useForm<z.input<typeof assignSpecimenSchema>, unknown, z.output<typeof assignSpecimenSchema>>({
     resolver: zodResolver(assignSpecimenSchema),
-    defaultValues: { specimenId: first?.id ?? "", cellId: "", burettePanelId: "", transducerId: "", thermometerId: "", methodCode: (first?.intendedMethodCode as "D5887") ?? "D5887", pressureUnit, effectiveStress: "", mountedAt: new Date().toISOString() },
+    defaultValues: { specimenId: first?.id ?? "", cellId: "", burettePanelId: "", transducerId: "", thermometerId: "", methodCode: (first?.intendedMethodCode as "D5887") ?? "D5887", pressureUnit, effectiveStress: "", mountedAt: nowToTheMinute() },
   });
   const { register, handleSubmit, formState, control } = form;
   const method = useWatch({ control, name: "methodCode" });

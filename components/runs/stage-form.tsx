@@ -9,6 +9,7 @@ import { recordStageAction } from "@/app/(staff)/runs/actions";
 import { recordStageSchema } from "@/lib/validation/runs";
 import { applyServerErrors } from "@/components/ui/apply-server-errors";
 import { Field } from "@/components/ui/field";
+import { nowToTheMinute } from "@/components/ui/now-for-input";
 import { ZonedDateTimeInput } from "@/components/ui/zoned-date-time-input";
 
 type Kind = "SATURATION" | "BACK_PRESSURE" | "EQUILIBRATION" | "PERMEATION";
@@ -21,7 +22,7 @@ export function StageForm({ runId, version, kinds, pressureUnit, zone }: { runId
   const [notice, setNotice] = useState<{ ok: boolean; text: string } | null>(null);
   const form = useForm<z.input<typeof recordStageSchema>, unknown, z.output<typeof recordStageSchema>>({
     resolver: zodResolver(recordStageSchema),
-    defaultValues: { runId, version, kind: kinds[0], pressureUnit, cellPressure: "", influentPressure: "", effluentPressure: "", startedAt: new Date().toISOString(), acknowledgeMargin: false },
+    defaultValues: { runId, version, kind: kinds[0], pressureUnit, cellPressure: "", influentPressure: "", effluentPressure: "", startedAt: nowToTheMinute(), acknowledgeMargin: false },
   });
   const { register, handleSubmit, formState, control } = form;
   const unit = pressureUnit === "PSI" ? "psi" : "kPa";

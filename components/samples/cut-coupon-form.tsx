@@ -10,6 +10,7 @@ import { cutCouponSchema } from "@/lib/validation/samples";
 import { applyServerErrors } from "@/components/ui/apply-server-errors";
 import { Field } from "@/components/ui/field";
 import { LabNumberLinks } from "@/components/intake/lab-number-links";
+import { nowToTheMinute } from "@/components/ui/now-for-input";
 import { ZonedDateTimeInput } from "@/components/ui/zoned-date-time-input";
 
 type Locations = Array<{ id: string; code: string; name: string }>;
@@ -19,7 +20,7 @@ export function CutCouponForm({ rollId, rollVersion, locations, zone }: { rollId
   const [notice, setNotice] = useState<{ ok: boolean; text: string } | null>(null);
   const form = useForm<z.input<typeof cutCouponSchema>, unknown, z.output<typeof cutCouponSchema>>({
     resolver: zodResolver(cutCouponSchema),
-    defaultValues: { rollId, rollVersion, positionInSample: "", lengthMm: "", widthMm: "", cutAt: new Date().toISOString(), storageLocationId: locations[0]?.id ?? "" },
+    defaultValues: { rollId, rollVersion, positionInSample: "", lengthMm: "", widthMm: "", cutAt: nowToTheMinute(), storageLocationId: locations[0]?.id ?? "" },
   });
   const { register, handleSubmit, formState, control } = form;
   const onSubmit = handleSubmit(async (values) => {

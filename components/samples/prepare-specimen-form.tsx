@@ -11,6 +11,7 @@ import { prepareSpecimenSchema } from "@/lib/validation/samples";
 import { applyServerErrors } from "@/components/ui/apply-server-errors";
 import { Field } from "@/components/ui/field";
 import { LabNumberLinks } from "@/components/intake/lab-number-links";
+import { nowToTheMinute } from "@/components/ui/now-for-input";
 import { ZonedDateTimeInput } from "@/components/ui/zoned-date-time-input";
 
 type Locations = Array<{ id: string; code: string; name: string }>;
@@ -23,7 +24,7 @@ export function PrepareSpecimenForm({ couponId, locations, zone }: { couponId: s
   const form = useForm<Input>({
     defaultValues: {
       couponId, dieDiameterMm: "100", initialThicknessMm: "", initialMassG: "", moistureContentPct: "", intendedMethodCode: "D5887",
-      preparedAt: new Date().toISOString(), storageLocationId: locations[0]?.id ?? "", answers: {},
+      preparedAt: nowToTheMinute(), storageLocationId: locations[0]?.id ?? "", answers: {},
     },
     // The checklist is kept as yes/no radio answers in the form and turned into booleans for the schema.
     resolver: async (values, context, options) => {

@@ -1,3 +1,5 @@
+import { toWallTime } from "../../lib/format/time-zone";
+import { DEMO_LAB } from "../../prisma/seed/demo-people";
 import type { ElementHandle, Page } from "puppeteer";
 
 /** The form control whose accessible name (its label) is `label`. */
@@ -42,7 +44,7 @@ export async function setValue(page: Page, label: string, value: string): Promis
   }, value);
 }
 
-/** A datetime-local value for `date` in the browser's local time. */
-export function localDateTime(date: Date): string {
-  return new Date(date.getTime() - date.getTimezoneOffset() * 60_000).toISOString().slice(0, 16);
+/** A datetime-local value for `date` as the demo lab's clock reads it: the app's time inputs are in the lab's zone. */
+export function labDateTime(date: Date): string {
+  return toWallTime(date, DEMO_LAB.timeZone);
 }

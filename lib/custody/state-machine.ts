@@ -70,7 +70,9 @@ export function transition(kind: ItemKind, state: ItemStateName, action: Custody
   const toState = TABLES[kind][state]?.[action];
   if (toState) return { ok: true, toState };
   const allowed = allowedActions(kind, state);
-  const allowedText = allowed.length === 0 ? "nothing more can happen to it" : `from here it can only ${allowed.map((a) => ACTION_WORDS[a]).join(", ")}`;
+  // Taking a specimen out of its cell is not a step of its own: abandoning the run does it, so it is not offered.
+  const offered = allowed.filter((a) => a !== "WITHDRAWN");
+  const allowedText = offered.length === 0 ? "nothing more can happen to it" : `from here it can only ${offered.map((a) => ACTION_WORDS[a]).join(", ")}`;
   return {
     ok: false,
     allowed,

@@ -79,7 +79,7 @@ export default async function EquipmentItemPage({ params }: Props) {
             </section>
           </div>
         )}
-        <section className="card"><h2>Changes <span className="count">{changes.length}</span></h2><CorrectionHistory zone={zone} corrections={changes} /></section>
+        <section className="card"><h2>Changes <span className="count">{changes.length}</span></h2><CorrectionHistory zone={zone} corrections={changes.map((c) => ({ ...c, field: CHANGE_LABELS[c.field] ?? c.field, oldValue: changeValue(c.field, c.oldValue, actor.pressureUnit), newValue: changeValue(c.field, c.newValue, actor.pressureUnit) }))} /></section>
         <section className="card">
           <h2>Runs that used it <span className="count">{equipment.runs.length}</span></h2>
           {equipment.runs.length === 0 ? <p className="empty">No run has used it yet.</p> : (
@@ -101,6 +101,15 @@ export default async function EquipmentItemPage({ params }: Props) {
       </div>
     </>
   );
+}
+
+const CHANGE_LABELS: Record<string, string> = { status: "Status", name: "Name", serialNumber: "Serial number", ratedMaxPressurePa: "Rated maximum" };
+
+/** A changed value as stored (text) for reading: statuses in words, pressures in the person's unit. */
+function changeValue(field: string, value: string, unit: "KPA" | "PSI"): string {
+  if (field === "status") return EQUIPMENT_STATUS_LABELS[value as keyof typeof EQUIPMENT_STATUS_LABELS] ?? value;
+  if (field === "ratedMaxPressurePa" && value !== "") return formatPressure(Number(value), unit);
+  return value;
 }
 
 function usability(state: string): string {

@@ -65,8 +65,7 @@ export default async function ClientPage({ params }: Props) {
           )}
           {org.users.length > 0 && <p className="muted">Portal users not listed as contacts: {org.users.map((u) => `${u.name} (${u.email}${u.active ? "" : ", deactivated"})`).join("; ")}.</p>}
         </section>
-        <div className="grid">
-          <section className="card">
+        <section className="card">
             <h2>Projects <span className="count">{org.projects.length}</span></h2>
             {org.projects.length === 0 ? <p className="empty">No project yet.</p> : (
               <div className="table-wrap">
@@ -92,9 +91,8 @@ export default async function ClientPage({ params }: Props) {
                 </table>
               </div>
             )}
-          </section>
-          <section className="card"><h2>New project</h2>{org.active ? <AddProjectForm clientOrganizationId={org.id} templates={org.templates} /> : <p className="empty">Reactivate the client to add projects.</p>}</section>
-        </div>
+        </section>
+        <section className="card"><h2>New project</h2>{org.active ? <AddProjectForm clientOrganizationId={org.id} templates={org.templates} /> : <p className="empty">Reactivate the client to add projects.</p>}</section>
       </div>
     </>
   );
