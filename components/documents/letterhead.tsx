@@ -4,9 +4,10 @@ type LetterheadData = { name: string; address: string; accreditation: string | n
 
 /**
  * The lab's name and address at the top of every printed document, and the time zone its times are in
- * (`at` is the document's own date, for the zone's offset on that day).
+ * (`at` is the document's own date, for the zone's offset on that day). `zoneStated` is set where the
+ * document says it elsewhere (the certificate, in its closing statements).
  */
-export function Letterhead({ lab, at }: { lab: LetterheadData; at?: Date }) {
+export function Letterhead({ lab, at, zoneStated = false }: { lab: LetterheadData; at?: Date; zoneStated?: boolean }) {
   return (
     <header className="doc-letterhead">
       <div>
@@ -15,7 +16,7 @@ export function Letterhead({ lab, at }: { lab: LetterheadData; at?: Date }) {
       </div>
       <div className="doc-lab-accreditation">
         {lab.accreditation ? <div>{lab.accreditation}</div> : null}
-        <div className="doc-small" data-testid="document-time-zone">{timeZoneStatement(lab.timeZone ?? "UTC", at)}</div>
+        {zoneStated ? null : <div className="doc-small" data-testid="document-time-zone">{timeZoneStatement(lab.timeZone ?? "UTC", at)}</div>}
       </div>
     </header>
   );

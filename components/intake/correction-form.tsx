@@ -6,17 +6,17 @@ import { useState } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
 import { correctReceiptAction } from "@/app/(staff)/intake/actions";
+import { YES_NO_HINT } from "@/lib/custody/yes-no";
+import { RECEIPT_FIELD_LABELS } from "@/lib/format/receipt-fields";
 import { correctReceiptSchema, ROLL_CORRECTABLE_FIELDS, SHIPMENT_CORRECTABLE_FIELDS } from "@/lib/validation/intake";
 import { applyServerErrors } from "@/components/ui/apply-server-errors";
 import { Field } from "@/components/ui/field";
 
 type Target = { key: string; target: "shipment" | "roll"; id: string; version: number; label: string };
 
-const FIELD_LABELS: Record<string, string> = {
-  deliveredBy: "Delivered by", receivedAt: "Received at (YYYY-MM-DD HH:MM)", conditionNotes: "Condition on arrival",
-  rollNumber: "Roll number", lotNumber: "Lot number", product: "Product", manufacturer: "Manufacturer",
-  sampleLengthMm: "Sample length (mm)", sampleWidthMm: "Sample width (mm)", machineDirectionMarked: "Machine direction marked (yes/no)",
-};
+// How to type the fields whose form is not obvious.
+const FIELD_HINTS: Record<string, string> = { receivedAt: " (YYYY-MM-DD HH:MM, lab time)", machineDirectionMarked: ` (${YES_NO_HINT})` };
+const fieldLabel = (field: string) => `${RECEIPT_FIELD_LABELS[field] ?? field}${FIELD_HINTS[field] ?? ""}`;
 
 /** A correction of one field of a receipt, with the reason; the old value stays in the history. */
 export function CorrectionForm({ targets }: { targets: Target[] }) {
@@ -58,7 +58,7 @@ export function CorrectionForm({ targets }: { targets: Target[] }) {
         </select>
       </Field>
       <Field label="Field" error={formState.errors.field?.message}>
-        <select {...register("field")}>{fields.map((f) => <option key={f} value={f}>{FIELD_LABELS[f] ?? f}</option>)}</select>
+        <select {...register("field")}>{fields.map((f) => <option key={f} value={f}>{fieldLabel(f)}</option>)}</select>
       </Field>
       <Field label="New value" error={formState.errors.value?.message}><input {...register("value")} /></Field>
       <Field label="Reason for the correction" error={formState.errors.reason?.message}><input {...register("reason")} /></Field>

@@ -8,7 +8,13 @@ import type { CertificateResultLine, CertificateSnapshot, CertificateTest } from
  * lab and client, 1-3 tests (index flux that conforms, hydraulic conductivity that conforms, and one with a
  * salt solution that does not), and charts of any length. Deterministic for a given seed.
  */
-export type SnapshotOptions = { tests?: number; chartPoints?: number; seed?: number; supersedes?: boolean; deviations?: boolean };
+export type SnapshotOptions = {
+  tests?: number; chartPoints?: number; seed?: number; supersedes?: boolean; deviations?: boolean;
+  /** The lab's time zone written into the snapshot (older snapshots have none: UTC). */
+  timeZone?: string;
+  /** Give each roll its condition on arrival, as snapshots from receipts with per-roll remarks carry. */
+  conditions?: boolean;
+};
 
 function random(seed: number) {
   let s = seed >>> 0 || 1;
@@ -98,13 +104,14 @@ export function makeCertificateSnapshot(options: SnapshotOptions = {}): Certific
     verificationCode: code,
     verificationUrl: `https://lab.example.test/verify/${code}`,
     issuedAt: new Date(issuedAt).toISOString(),
-    lab: { name: "Quillfen Liner Laboratory (invented)", address: "Unit 4, Quarry Lane\nTarnwick TW7 0QL", accreditation: "Accredited to ISO/IEC 17025 (invented accreditation no. 0000)" },
+    lab: { name: "Quillfen Liner Laboratory (invented)", address: "Unit 4, Quarry Lane\nTarnwick TW7 0QL", accreditation: "Accredited to ISO/IEC 17025 (invented accreditation no. 0000)", ...(options.timeZone ? { timeZone: options.timeZone } : {}) },
     client: { name: "Marrowdale Waste Authority (invented)", address: "12 Tipyard Road, Marrowdale" },
     project: { code: "MWA-C4", name: "Landfill cell 4 basal liner", siteName: "Marrowdale Tip", siteLocation: "Cell 4, east bench" },
     specification: { name: "MWA cell 4 GCL specification, rev. B (GRI-GCL3 limits)" },
     samples: usedRolls.map((roll, i) => ({
       rollLabNumber: roll, rollNumber: `GCL-44${71 + i}-A`, lotNumber: `L-2209-${i + 1}`, product: "Needle-punched GCL, sodium bentonite, 4.0 kg/m²",
       manufacturer: "Invented Mills", shipmentLabNumber: "S26-00031", receivedAt: new Date(receivedAt).toISOString(),
+      ...(options.conditions ? { condition: i === 0 ? "Outer wrapping torn at one end; liner dry." : "" } : {}),
       custody: tests
         .filter((t) => t.rollLabNumber === roll)
         .flatMap((t, j) => custody(roll, Number(t.specimenLabNumber.slice(-1))).slice(j ? 2 : 0))

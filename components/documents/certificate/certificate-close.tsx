@@ -1,5 +1,6 @@
 import { CERTIFICATE_CAUTIONS, isoDateTime, roleLabel } from "@/lib/certificates/certificate-wording";
 import type { CertificateSnapshot } from "@/lib/certificates/certificate-snapshot";
+import { timeZoneStatement } from "@/lib/format/time-zone";
 
 // A long address wraps after a slash rather than inside the code.
 function breakableUrl(url: string) {
@@ -34,7 +35,7 @@ export function CertificateClose({ snapshot, qrSvg }: { snapshot: CertificateSna
       </div>
       <div className="cert-statements">
         {CERTIFICATE_CAUTIONS.map((text) => <p key={text}><strong>{text}</strong></p>)}
-        <p>This certificate may be reproduced only in full. Times are in UTC. The laboratory keeps the original observations and the full record of each test.</p>
+        <p>This certificate may be reproduced only in full. {timeZoneStatement(snapshot.lab.timeZone ?? "UTC", new Date(snapshot.issuedAt))} The laboratory keeps the original observations and the full record of each test.</p>
       </div>
     </section>
   );

@@ -26,7 +26,7 @@ export function CertificateSheet({ snapshot, qrSvg, watermark }: CertificateShee
     <article className="doc cert" data-testid="certificate">
       <style dangerouslySetInnerHTML={{ __html: DOCUMENT_CSS + CERTIFICATE_CSS }} />
       {watermark ? <div className="doc-watermark" aria-hidden="true">{watermark}</div> : null}
-      <Letterhead lab={snapshot.lab} at={new Date(snapshot.issuedAt)} />
+      <Letterhead lab={snapshot.lab} zoneStated />
       <CertificateHeading snapshot={snapshot} />
       <CertificateSummary snapshot={snapshot} />
       <CertificateSamples samples={snapshot.samples} zone={zone} />

@@ -12,7 +12,7 @@ export async function getRoll(options: { actor: CurrentUser; labNumber: string }
   const roll = await getDb().roll.findUnique({
     where: { labNumber: options.labNumber },
     include: {
-      shipment: { select: { labNumber: true, receivedAt: true, acknowledgedAt: true } },
+      shipment: { select: { labNumber: true, receivedAt: true, acknowledgedAt: true, conditionNotes: true } },
       project: { select: { name: true, code: true, clientOrganization: { select: { name: true } } } },
       storageLocation: place,
       coupons: { orderBy: { labNumber: "asc" }, select: { id: true, labNumber: true, positionInSample: true, state: true, cutAt: true, _count: { select: { specimens: true } } } },
@@ -65,7 +65,7 @@ export async function getShipment(options: { actor: CurrentUser; labNumber: stri
       project: { select: { name: true, siteName: true } },
       receivedBy: { select: { name: true } },
       acknowledgedBy: { select: { name: true } },
-      rolls: { orderBy: { labNumber: "asc" }, select: { id: true, labNumber: true, rollNumber: true, lotNumber: true, product: true, manufacturer: true, sampleLengthMm: true, sampleWidthMm: true, machineDirectionMarked: true, state: true, version: true } },
+      rolls: { orderBy: { labNumber: "asc" }, select: { id: true, labNumber: true, rollNumber: true, lotNumber: true, product: true, manufacturer: true, sampleLengthMm: true, sampleWidthMm: true, machineDirectionMarked: true, conditionNotes: true, state: true, version: true } },
     },
   });
   if (!shipment) throw new AppError("NOT_FOUND");

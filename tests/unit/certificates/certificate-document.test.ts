@@ -10,7 +10,7 @@ import { makeCertificateSnapshot } from "../../support/make-certificate-snapshot
 // checked in tests/integration/certificate-document.test.ts.
 const QR = '<svg viewBox="0 0 29 29" data-qr="1"></svg>';
 const html = (snapshot: CertificateSnapshot) => renderToStaticMarkup(createElement(CertificateDocument, { snapshot, qrSvg: QR }));
-const text = (snapshot: CertificateSnapshot) => html(snapshot).replace(/<style[\s\S]*?<\/style>/g, "").replace(/<[^>]+>/g, " ").replace(/&amp;/g, "&").replace(/\s+/g, " ");
+const text = (snapshot: CertificateSnapshot) => html(snapshot).replace(/<style[\s\S]*?<\/style>/g, "").replace(/<[^>]+>/g, " ").replace(/&amp;/g, "&").replace(/&#x27;/g, "'").replace(/\s+/g, " ");
 
 describe("certificate document", () => {
   it("carries the number, revision, issue date, both cautions and the verification code with its 2D code", () => {
@@ -22,6 +22,21 @@ describe("certificate document", () => {
     expect(t).toContain("7Q4K-2M9X-HT3B");
     expect(html(s)).toContain('data-qr="1"');
     expect(t).not.toContain("supersedes");
+  });
+
+  it("writes its times in the lab's time zone, says which, and carries each roll's condition on arrival", () => {
+    const s = makeCertificateSnapshot({ tests: 2, timeZone: "Europe/Berlin", conditions: true });
+    const t = text(s);
+    // Issued 2026-12-14 09:30 UTC, which is 10:30 in Berlin (UTC+1 in winter; IANA tz database).
+    expect(t).toContain("Times are given in the laboratory's time zone, Europe/Berlin (UTC+01:00 on the date of this document).");
+    expect(t).toMatch(/Signed electronically 2026-12-14 10:30 CET/);
+    expect(t).toContain("Condition on arrival");
+    expect(t).toContain("Outer wrapping torn at one end; liner dry.");
+    expect(t).toContain("No remarks recorded");
+    // A snapshot from before either existed prints as it did: UTC, and no condition column.
+    const older = text(makeCertificateSnapshot({ tests: 1 }));
+    expect(older).toContain("reproduced only in full. Times are given in UTC.");
+    expect(older).not.toContain("Condition on arrival");
   });
 
   it("shows each test's conditions, results with uncertainty, verdicts with their numbers, and a chart", () => {

@@ -8,6 +8,7 @@ import { RecordFacts } from "@/components/samples/record-facts";
 import { StateTag } from "@/components/ui/state-tag";
 import { isAppError } from "@/lib/errors/app-error";
 import { formatDateTime } from "@/lib/format/dates";
+import { RECEIPT_FIELD_LABELS, receiptFieldValue } from "@/lib/format/receipt-fields";
 import { can } from "@/lib/policy/permissions";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getGenealogy } from "@/lib/server/samples/get-genealogy";
@@ -57,12 +58,12 @@ export default async function ShipmentPage({ params }: Props) {
           <h2>Rolls <span className="count">{shipment.rolls.length}</span></h2>
           <div className="table-wrap">
             <table className="list" data-testid="shipment-rolls">
-              <thead><tr><th>Lab number</th><th>Roll</th><th>Lot</th><th>Product</th><th>Manufacturer</th><th>Size (mm)</th><th>MD marked</th><th>State</th></tr></thead>
+              <thead><tr><th>Lab number</th><th>Roll</th><th>Lot</th><th>Product</th><th>Manufacturer</th><th>Size (mm)</th><th>MD marked</th><th>Condition</th><th>State</th></tr></thead>
               <tbody>
                 {shipment.rolls.map((r) => (
                   <tr key={r.id}>
                     <td><Link className="mono" href={`/samples/rolls/${r.labNumber}`}>{r.labNumber}</Link></td><td>{r.rollNumber}</td><td>{r.lotNumber}</td><td>{r.product}</td><td>{r.manufacturer}</td>
-                    <td>{r.sampleLengthMm && r.sampleWidthMm ? `${r.sampleLengthMm} × ${r.sampleWidthMm}` : "—"}</td><td>{r.machineDirectionMarked ? "yes" : "no"}</td><td><StateTag state={r.state} /></td>
+                    <td>{r.sampleLengthMm && r.sampleWidthMm ? `${r.sampleLengthMm} × ${r.sampleWidthMm}` : "—"}</td><td>{r.machineDirectionMarked ? "yes" : "no"}</td><td>{r.conditionNotes || <span className="muted">as the shipment</span>}</td><td><StateTag state={r.state} /></td>
                   </tr>
                 ))}
               </tbody>
@@ -76,7 +77,10 @@ export default async function ShipmentPage({ params }: Props) {
           </section>
           <section className="card">
             <h2>Corrections</h2>
-            <CorrectionHistory zone={zone} corrections={shipment.corrections.map((c) => ({ ...c, itemLabel: c.entity === "Roll" ? (rollLabel.get(c.entityId) ?? "roll") : "shipment" }))} />
+            <CorrectionHistory zone={zone} corrections={shipment.corrections.map((c) => ({
+              ...c, itemLabel: c.entity === "Roll" ? (rollLabel.get(c.entityId) ?? "roll") : "shipment", field: RECEIPT_FIELD_LABELS[c.field] ?? c.field,
+              oldValue: receiptFieldValue(c.field, c.oldValue, zone), newValue: receiptFieldValue(c.field, c.newValue, zone),
+            }))} />
             {can(actor.role, "shipment.correct") && (
               <>
                 <h2 style={{ marginTop: "1rem" }}>Correct this receipt</h2>

@@ -45,6 +45,7 @@ export default async function RollPage({ params }: Props) {
             ["Roll number", roll.rollNumber], ["Lot number", roll.lotNumber], ["Product", roll.product], ["Manufacturer", roll.manufacturer],
             ["Sample size (mm)", roll.sampleLengthMm && roll.sampleWidthMm ? `${roll.sampleLengthMm} × ${roll.sampleWidthMm}` : "—"],
             ["Machine direction marked", roll.machineDirectionMarked ? "yes" : "no"], ["Received", formatDateTime(roll.shipment.receivedAt, zone)],
+            ["Condition on arrival", roll.conditionNotes || roll.shipment.conditionNotes || "—"],
             ["Kept at", roll.storageLocation ? `${roll.storageLocation.code} · ${roll.storageLocation.name}` : "—"],
             ["Retained until", formatDate(roll.retainUntil, zone)],
           ]} />
