@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { ROLES } from "../policy/permissions";
+import { refineClientOrganization } from "./client-organization-rule";
 
 // Shared by the forms (react-hook-form + zodResolver) and the server operations.
 
@@ -25,12 +26,7 @@ export const createUserSchema = z
     clientOrganizationId: z.string().trim().optional().transform((v) => (v ? v : undefined)),
     password: newPasswordSchema,
   })
-  .superRefine((value, ctx) => {
-    if (value.role === "CLIENT_USER" && !value.clientOrganizationId)
-      ctx.addIssue({ code: "custom", path: ["clientOrganizationId"], message: "A client user needs their organisation." });
-    if (value.role !== "CLIENT_USER" && value.clientOrganizationId)
-      ctx.addIssue({ code: "custom", path: ["clientOrganizationId"], message: "Only client users belong to an organisation." });
-  });
+  .superRefine(refineClientOrganization);
 export type CreateUserInput = z.input<typeof createUserSchema>;
 
 export const resetPasswordSchema = z.object({

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { ROLES } from "../policy/permissions";
+import { refineClientOrganization } from "./client-organization-rule";
 import { versionSchema } from "./common";
 
 /** A new role for a user; a client user belongs to exactly one organisation, staff to none. */
@@ -10,10 +11,5 @@ export const changeUserRoleSchema = z
     role: z.enum(ROLES, { message: "Choose a role." }),
     clientOrganizationId: z.string().trim().optional().transform((v) => v || undefined),
   })
-  .superRefine((v, ctx) => {
-    if (v.role === "CLIENT_USER" && !v.clientOrganizationId)
-      ctx.addIssue({ code: "custom", path: ["clientOrganizationId"], message: "A client user needs their organisation." });
-    if (v.role !== "CLIENT_USER" && v.clientOrganizationId)
-      ctx.addIssue({ code: "custom", path: ["clientOrganizationId"], message: "Only client users belong to an organisation." });
-  });
+  .superRefine(refineClientOrganization);
 export type ChangeUserRoleInput = z.input<typeof changeUserRoleSchema>;

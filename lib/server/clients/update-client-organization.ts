@@ -1,8 +1,8 @@
 import "server-only";
-import { AppError } from "@/lib/errors/app-error";
 import { updateClientOrganizationSchema } from "@/lib/validation/clients";
 import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
+import { refuseStaleUpdate } from "../db/refuse-stale-update";
 import { withActor } from "../db/transaction";
 import { parseOrThrow } from "../validation/parse";
 
@@ -19,10 +19,7 @@ export async function updateClientOrganization(options: { actor: CurrentUser; in
       where: { id: input.clientOrganizationId, version: input.version },
       data: { name: input.name, address: input.address ?? null, active: input.active, version: { increment: 1 } },
     });
-    if (updated.count !== 1) {
-      const exists = await tx.clientOrganization.findUnique({ where: { id: input.clientOrganizationId }, select: { id: true } });
-      throw new AppError(exists ? "CONFLICT" : "NOT_FOUND");
-    }
+    await refuseStaleUpdate(updated, () => tx.clientOrganization.findUnique({ where: { id: input.clientOrganizationId }, select: { id: true } }));
     if (!input.active)
       await tx.user.updateMany({ where: { clientOrganizationId: input.clientOrganizationId, active: true }, data: { active: false, sessionVersion: { increment: 1 }, version: { increment: 1 } } });
     return tx.clientOrganization.findUniqueOrThrow({ where: { id: input.clientOrganizationId }, select: { id: true, code: true, active: true } });

@@ -1,8 +1,8 @@
 import "server-only";
-import { AppError } from "@/lib/errors/app-error";
 import { updateProjectSchema } from "@/lib/validation/clients";
 import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
+import { refuseStaleUpdate } from "../db/refuse-stale-update";
 import { withActor } from "../db/transaction";
 import { parseOrThrow } from "../validation/parse";
 
@@ -15,10 +15,7 @@ export async function updateProject(options: { actor: CurrentUser; input: unknow
       where: { id: input.projectId, version: input.version },
       data: { name: input.name, siteName: input.siteName, siteLocation: input.siteLocation ?? null, active: input.active, version: { increment: 1 } },
     });
-    if (updated.count !== 1) {
-      const exists = await tx.project.findUnique({ where: { id: input.projectId }, select: { id: true } });
-      throw new AppError(exists ? "CONFLICT" : "NOT_FOUND");
-    }
+    await refuseStaleUpdate(updated, () => tx.project.findUnique({ where: { id: input.projectId }, select: { id: true } }));
     return { id: input.projectId };
   });
 }

@@ -1,5 +1,6 @@
 import Link from "next/link";
 import { CreateClientForm } from "@/components/clients/create-client-form";
+import { ActiveTag } from "@/components/ui/active-tag";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { listClientOrganizations } from "@/lib/server/clients/list-client-organizations";
 
@@ -24,7 +25,7 @@ export default async function ClientsPage() {
                     <td><Link className="mono" href={`/admin/clients/${c.code}`}>{c.code}</Link></td>
                     <td>{c.name}{c.address && <div className="muted">{c.address}</div>}</td>
                     <td>{c._count.projects}</td><td>{c._count.contacts}</td><td>{c._count.users}</td>
-                    <td>{c.active ? <span className="state state-ok">active</span> : <span className="state state-bad">deactivated</span>}</td>
+                    <td><ActiveTag active={c.active} /></td>
                   </tr>
                 ))}
               </tbody>

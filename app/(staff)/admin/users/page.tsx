@@ -1,4 +1,5 @@
 import { CreateUserForm } from "@/components/users/create-user-form";
+import { ActiveTag } from "@/components/ui/active-tag";
 import { ChangeRoleForm } from "@/components/users/change-role-form";
 import { UserRowActions } from "@/components/users/user-row-actions";
 import { formatDate } from "@/lib/format/dates";
@@ -29,7 +30,7 @@ export default async function UsersPage() {
                     <td>{u.name}<div className="muted">{u.email}</div></td>
                     <td>{ROLE_LABELS[u.role]}{u.clientOrganization && <div className="muted">{u.clientOrganization.name}</div>}</td>
                     <td>{formatDate(u.createdAt, zone)}</td>
-                    <td>{u.active ? <span className="state state-ok">active</span> : <span className="state state-bad">deactivated</span>}</td>
+                    <td><ActiveTag active={u.active} /></td>
                     <td>{u.id !== actor.id && <><UserRowActions userId={u.id} active={u.active} version={u.version} name={u.name} /><ChangeRoleForm userId={u.id} version={u.version} name={u.name} role={u.role} clientOrganizationId={u.clientOrganizationId} organizations={organizations} /></>}</td>
                   </tr>
                 ))}

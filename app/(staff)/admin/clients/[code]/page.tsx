@@ -5,6 +5,7 @@ import { AddProjectForm } from "@/components/clients/add-project-form";
 import { ClientDetailsForm } from "@/components/clients/client-details-form";
 import { EditContactForm } from "@/components/clients/edit-contact-form";
 import { EditProjectForm } from "@/components/clients/edit-project-form";
+import { ActiveTag } from "@/components/ui/active-tag";
 import { isAppError } from "@/lib/errors/app-error";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getClientOrganization } from "@/lib/server/clients/get-client-organization";
@@ -14,8 +15,6 @@ type Props = { params: Promise<{ code: string }> };
 export async function generateMetadata({ params }: Props) {
   return { title: `Client ${decodeURIComponent((await params).code)}` };
 }
-
-const activeTag = (active: boolean) => (active ? <span className="state state-ok">active</span> : <span className="state state-bad">deactivated</span>);
 
 export default async function ClientPage({ params }: Props) {
   const actor = await requirePageUser("client.manage");
@@ -29,7 +28,7 @@ export default async function ClientPage({ params }: Props) {
       <p className="muted"><Link href="/admin/clients">Clients</Link> ›</p>
       <div className="page-head">
         <div>
-          <h1>{org.name} <span className="mono muted">{org.code}</span> {activeTag(org.active)}</h1>
+          <h1>{org.name} <span className="mono muted">{org.code}</span> <ActiveTag active={org.active} /></h1>
           <p className="muted">{org.projects.length} project{org.projects.length === 1 ? "" : "s"} · {org.contacts.filter((c) => c.active).length} active contact{org.contacts.length === 1 ? "" : "s"}</p>
         </div>
       </div>
@@ -50,7 +49,7 @@ export default async function ClientPage({ params }: Props) {
                       <td>{c.name}{c.jobTitle && <div className="muted">{c.jobTitle}</div>}</td>
                       <td>{c.email}</td><td>{c.phone ?? "—"}</td>
                       <td>{c.user ? (c.user.active ? "signs in" : "account deactivated") : "no account"}</td>
-                      <td>{activeTag(c.active)}</td>
+                      <td><ActiveTag active={c.active} /></td>
                       <td>
                         <details className="row-more">
                           <summary>Edit</summary>
@@ -78,7 +77,7 @@ export default async function ClientPage({ params }: Props) {
                         <td>{p.name}<div className="muted">{p.siteName}{p.siteLocation ? `, ${p.siteLocation}` : ""}</div></td>
                         <td>{p.specifications[0] ? <Link href={`/specifications/${p.specifications[0].id}`}>{p.specifications[0].name}</Link> : <Link href="/specifications/new">none yet</Link>}</td>
                         <td>{p._count.shipments}</td>
-                        <td>{activeTag(p.active)}</td>
+                        <td><ActiveTag active={p.active} /></td>
                         <td>
                           <details className="row-more">
                             <summary>Edit</summary>
