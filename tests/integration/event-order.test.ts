@@ -1,4 +1,8 @@
+import { createElement } from "react";
+import { renderToStaticMarkup } from "react-dom/server";
 import { describe, expect, it } from "vitest";
+import { ReceiptAcknowledgement } from "@/components/documents/receipt-acknowledgement";
+import { getLetterhead } from "@/lib/server/lab/get-letterhead";
 import { correctReceipt } from "@/lib/server/intake/correct-receipt";
 import { getShipmentReceipt } from "@/lib/server/intake/get-shipment-receipt";
 import { assignSpecimenToCell } from "@/lib/server/runs/assign-specimen-to-cell";
@@ -76,5 +80,10 @@ describe("one order of events, enforced where each time is entered", () => {
     expect(events[0]!.note).toBe(`shipment ${shipment.labNumber} conditionNotes: Wrapped, dry. → Wrapped; outer film wet on arrival. (Driver's note read again)`);
     const receipt = await getShipmentReceipt({ actor: clerk, labNumber: shipment.labNumber });
     expect(receipt.corrections).toEqual([expect.objectContaining({ item: "shipment", field: "conditionNotes", oldValue: "Wrapped, dry.", newValue: "Wrapped; outer film wet on arrival.", reason: "Driver's note read again" })]);
+    // The receipt document says it was amended, and with what.
+    const html = renderToStaticMarkup(createElement(ReceiptAcknowledgement, { receipt, lab: await getLetterhead() }));
+    const text = html.replace(/<style[\s\S]*?<\/style>/g, "").replace(/<[^>]+>/g, " ").replace(/&#x27;/g, "'").replace(/\s+/g, " ");
+    expect(html).toContain('data-testid="receipt-amended"');
+    expect(text).toMatch(/Corrections When Record Field Was Now Reason By .* shipment Condition on arrival Wrapped, dry\. Wrapped; outer film wet on arrival\. Driver's note read again/);
   });
 });

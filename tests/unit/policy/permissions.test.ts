@@ -42,10 +42,19 @@ describe("navigation and page addresses", () => {
     expect(navigationFor("TECHNICIAN").map((i) => i.href)).not.toContain("/admin/users");
   });
 
+  it("leaves the lab's master data (clients, their portal users, the lab's own details) to the administrator", () => {
+    expect(rolesAllowedTo("client.manage")).toEqual(["LAB_ADMIN"]);
+    expect(rolesAllowedTo("lab.configure")).toEqual(["LAB_ADMIN"]);
+    expect(navigationFor("LAB_ADMIN").map((i) => i.href)).toEqual(expect.arrayContaining(["/admin/clients", "/admin/lab"]));
+    expect(navigationFor("QA_MANAGER").map((i) => i.href)).not.toContain("/admin/clients");
+  });
+
   it("maps a page address to the action it needs, longest prefix first", () => {
     expect(actionForPath("/admin/users")).toBe("user.manage");
     expect(actionForPath("/admin/users/123")).toBe("user.manage");
     expect(actionForPath("/admin/audit")).toBe("audit.view");
+    expect(actionForPath("/admin/clients/MWA")).toBe("client.manage");
+    expect(actionForPath("/admin/lab")).toBe("lab.configure");
     expect(actionForPath("/runs/T26-00001")).toBe("run.view");
     expect(actionForPath("/runsheet")).toBeNull();
     expect(actionForPath("/")).toBeNull();
