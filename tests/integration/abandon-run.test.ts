@@ -6,6 +6,7 @@ import { assignSpecimenToCell } from "@/lib/server/runs/assign-specimen-to-cell"
 import { getCellBoard } from "@/lib/server/runs/get-cell-board";
 import { recordStage } from "@/lib/server/runs/record-stage";
 import { submitRun } from "@/lib/server/runs/submit-run";
+import { getItemHistory } from "@/lib/server/samples/get-item-history";
 import { failure } from "../support/refusals";
 import { daysAgo, makeReadySpecimen } from "../support/custody-chain";
 import { db, makeUser } from "../support/factories";
@@ -71,8 +72,9 @@ describe("abandoning a run before approval", () => {
 
     await abandonRun({ actor: technician, input: { runId: run.id, version: 4, reason: "Effluent line blocked; cannot be cleared", specimenFate: "disposal" } });
     expect((await db().run.findUniqueOrThrow({ where: { id: run.id } })).state).toBe("ABANDONED");
-    const ledger = await db().custodyEvent.findMany({ where: { specimenId: specimen.id }, orderBy: { occurredAt: "asc" } });
-    expect(ledger.map((e) => e.action)).toEqual(["PREPARED", "ASSIGNED", "TEST_STARTED", "WITHDRAWN", "DISPOSED"]);
+    // The ledger as shown: taken out and disposed of at the same moment, in the order they happened.
+    const { events } = await getItemHistory({ actor: technician, kind: "specimen", id: specimen.id });
+    expect(events.map((e) => e.action)).toEqual(["PREPARED", "ASSIGNED", "TEST_STARTED", "WITHDRAWN", "DISPOSED"]);
     expect(await db().specimen.findUniqueOrThrow({ where: { id: specimen.id } })).toMatchObject({ state: "DISPOSED", storageLocationId: null });
     // The roll keeps its own record; other specimens of it may still be tested.
     expect((await db().roll.findUniqueOrThrow({ where: { id: roll.id } })).state).toBe("UNDER_TEST");

@@ -93,7 +93,7 @@ export async function buildCertificateSnapshot(tx: Tx, options: { revisionId: st
     if (!samples.has(roll.id)) {
       const events = await tx.custodyEvent.findMany({
         where: { OR: [{ rollId: roll.id }, { couponId: run.specimen.couponId }, { specimenId: run.specimen.id }], action: { in: Object.keys(ACTION_WORDS) as never } },
-        orderBy: { occurredAt: "asc" },
+        orderBy: [{ occurredAt: "asc" }, { sequence: "asc" }],
         include: { actor: { select: { name: true } }, roll: { select: { labNumber: true } }, coupon: { select: { labNumber: true } }, specimen: { select: { labNumber: true } } },
       });
       samples.set(roll.id, {

@@ -13,7 +13,7 @@ export async function getItemHistory(options: { actor: CurrentUser; kind: ItemKi
   const [events, corrections] = await Promise.all([
     db.custodyEvent.findMany({
       where: { [CUSTODY_ITEM_FIELD[options.kind]]: options.id },
-      orderBy: [{ occurredAt: "asc" }, { id: "asc" }],
+      orderBy: [{ occurredAt: "asc" }, { sequence: "asc" }],
       select: {
         id: true, action: true, fromState: true, toState: true, occurredAt: true, note: true,
         actor: { select: { name: true } }, fromLocation: { select: { code: true } }, toLocation: { select: { code: true } },

@@ -19,6 +19,9 @@ ADD COLUMN     "version" INTEGER NOT NULL DEFAULT 1;
 -- AlterTable
 ALTER TABLE "Roll" ADD COLUMN     "conditionNotes" TEXT NOT NULL DEFAULT '';
 
+-- AlterTable: the order custody events were recorded in, for events of the same moment.
+ALTER TABLE "CustodyEvent" ADD COLUMN     "sequence" BIGSERIAL NOT NULL;
+
 -- AlterTable
 ALTER TABLE "Run" ADD COLUMN     "abandonedAt" TIMESTAMP(3),
 ADD COLUMN     "abandonedById" TEXT,
