@@ -23,6 +23,7 @@ const entryValues = (r: RunReadingView, unit: PressureUnit) => ({
   effluentEcMsPerM: r.effluentEcMsPerM === null ? "" : String(r.effluentEcMsPerM),
   influentPh: r.influentPh === null ? "" : String(r.influentPh),
   effluentPh: r.effluentPh === null ? "" : String(r.effluentPh),
+  afterRefill: r.afterRefill,
 });
 
 function versionText(v: RunReadingView, unit: PressureUnit, chemistry: boolean): string {

@@ -6,8 +6,7 @@ import { correctReading } from "@/lib/server/readings/correct-reading";
 import { importReadingsCsv } from "@/lib/server/readings/import-readings-csv";
 import { listRunReadings } from "@/lib/server/readings/list-run-readings";
 import { recordReadings } from "@/lib/server/readings/record-readings";
-import { toHydraulicsReadings } from "@/lib/server/readings/to-hydraulics-input";
-import { evaluateRun } from "@/lib/hydraulics";
+import { evaluateRunRecords } from "@/lib/server/runs/evaluate-run-records";
 import { failure } from "../support/refusals";
 import { db, makeProject, makeUser, unique } from "../support/factories";
 
@@ -116,10 +115,11 @@ describe("importing a data-logger CSV", () => {
     expect(rows.map((r) => r.sequence)).toEqual(Array.from({ length: 13 }, (_, i) => i + 1));
     expect(new Set(rows.map((r) => r.source))).toEqual(new Set(["readings-d5887.csv"]));
     expect(rows[12]!.elapsedS).toBe(72 * 3600);
-    const evaluation = evaluateRun({ method: "D5887", specimen: { diameterMm: 100, thicknessMm: 6 }, readings: toHydraulicsReadings(rows) });
-    expect(evaluation.termination.met).toBe(true);
-    expect(evaluation.reported.flux).toBeGreaterThan(1.5e-9);
-    expect(evaluation.reported.flux).toBeLessThan(2.5e-9);
+    const { evaluation, calculation } = await evaluateRunRecords(db(), run.id);
+    expect(calculation.key).toBe("falling-head-rising-tail");
+    expect(evaluation!.termination.met).toBe(true);
+    expect(evaluation!.reported.flux).toBeGreaterThan(1.5e-9);
+    expect(evaluation!.reported.flux).toBeLessThan(2.5e-9);
 
     // Importing the same file again would put readings before the saved ones: refused, naming the row.
     const again = await failure(importReadingsCsv({ actor: technician, input: { ...input, mode: "save" } }));
@@ -190,8 +190,8 @@ describe("correcting a reading", () => {
     await recordReadings({ actor: technician, input: { runId: run.id, pressureUnit: "KPA", readings: [gridRow(at(permeationStartedAt, 0), "453", "17"), gridRow(at(permeationStartedAt, 6), "441.2", "28.9")] } });
     const first = await db().reading.findFirstOrThrow({ where: { runId: run.id, sequence: 1 } });
     await correctReading({ actor: technician, input: { readingId: first.id, pressureUnit: "KPA", values: gridRow(at(permeationStartedAt, 0), "452", "18"), reason: "Levels of the first reading misread" } });
-    const current = await db().reading.findMany({ where: { runId: run.id, correctedBy: null }, orderBy: { elapsedS: "asc" } });
-    const readings = toHydraulicsReadings(current);
+    // The evaluation counts volumes from the current readings' levels, whatever was stored before the correction.
+    const readings = (await evaluateRunRecords(db(), run.id)).inputReadings;
     expect(readings[0]).toMatchObject({ inflowMl: 0, outflowMl: 0 });
     expect(readings[1]!.inflowMl).toBeCloseTo(0.33912, 9);
     expect(readings[1]!.outflowMl).toBeCloseTo(0.34008, 9);
