@@ -24,7 +24,8 @@ export function assessLeakage(input: { cell: string; check: LeakageCheck; measur
   const { check } = input;
   const leakageFlux = check.fluxM3PerM2PerS ?? check.rateM3PerS! / input.specimenAreaM2;
   const fraction = input.measuredFluxM3PerM2PerS > 0 ? leakageFlux / input.measuredFluxM3PerM2PerS : Number.POSITIVE_INFINITY;
-  const flagged = !(fraction < input.limitPct / 100);
+  // A relative 1e-9 of slack so that a rate of exactly the limit counts as at it despite binary rounding.
+  const flagged = !(fraction < (input.limitPct / 100) * (1 - 1e-9));
   const given = check.rateM3PerS !== undefined ? `${formatNumber(check.rateM3PerS)} m³/s` : `${formatNumber(check.fluxM3PerM2PerS!)} m³/m²/s`;
   const share = Number.isFinite(fraction) ? `${+(fraction * 100).toPrecision(2)} %` : "more than all";
   return {
