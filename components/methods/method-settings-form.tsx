@@ -9,6 +9,7 @@ import { applyServerErrors } from "@/components/ui/apply-server-errors";
 import { Field } from "@/components/ui/field";
 import { methodSettingsDefinition } from "@/lib/methods/registry";
 import { methodSettingsChangeSchema } from "@/lib/validation/methods";
+import styles from "./methods.module.css";
 
 type FormValues = { methodCode: string; basedOnVersion: number; reason: string; values: Record<string, string> };
 
@@ -38,9 +39,9 @@ export function MethodSettingsForm({ methodCode, basedOnVersion, current }: { me
     <form className="stack" onSubmit={onSubmit} noValidate aria-label={`Change the ASTM ${methodCode} settings`}>
       {notice && <div className={`notice ${notice.ok ? "notice-ok" : "notice-error"}`} role="status" data-testid="settings-message">{notice.text}</div>}
       {groups.map((group) => (
-        <fieldset key={group} className="stack">
+        <fieldset key={group} className={styles.group}>
           <legend><strong>{group}</strong></legend>
-          <div className="grid">
+          <div className={styles.fields}>
             {definition.fields.filter((f) => f.group === group).map((f) => (
               <Field key={f.key} label={`${f.label}${f.unit ? ` (${f.unit})` : ""}`} hint={f.optional ? "May be left blank." : undefined} error={errors[f.key]?.message}>
                 {f.choices ? (
