@@ -37,6 +37,13 @@ describe("certificate document", () => {
     expect(t).toContain("Measured 2.43 × 10⁻⁹ m³/m²/s; rounded to the nearest 1 × 10⁻⁸ m³/m²/s it reads 0. That 0 is not a measured zero: the result is smaller than half of 1 × 10⁻⁸ m³/m²/s, so it does not exceed the maximum.");
     expect(t).toContain("Measured 8.70 × 10⁻¹¹ m/s; rounded 9 × 10⁻¹¹ m/s.");
     expect(t).toContain("4 results were compared with the specification: 3 conform, 1 does not.");
+    // How the first test's result was obtained: calculation, refills, criteria with their settings version, leakage, contributors.
+    expect(t).toContain("Calculation. Falling head with rising tail (ASTM D5084 method C)");
+    expect(t).toContain("The burettes were refilled or drained 1 time; no interval spans a refill.");
+    expect(t).toContain("Termination criteria of ASTM D5887 settings, version 2: Outflow/inflow ratio: 0.75 ≤ outflow/inflow ≤ 1.25 for each of the last 4 intervals");
+    expect(t).toContain("Apparatus leakage. Apparatus leakage of cell CELL-01");
+    expect(t).toContain("Uncertainty of index flux: expanded, coverage factor k = 2 (about 95 %); largest contributors (relative standard uncertainty): burette readings 1.8 % (BP-01 calibration CAL-BP-01-2026); die diameter");
+    expect(html(s).match(/data-refill=""/g)).toHaveLength(2);
     const markup = html(s);
     expect(markup.match(/data-testid="chart-flux"/g)).toHaveLength(3);
     expect(markup.match(/<polyline /g)).toHaveLength(6);
