@@ -1,0 +1,62 @@
+import { z } from "zod";
+import { AUDIT_TABLE_SLUGS } from "@/lib/audit/audit-tables";
+import { parseLabNumber } from "@/lib/numbering/lab-number";
+import { calendarDay } from "./list-query";
+
+/**
+ * The audit trail's filter: one record by lab number, one kind of record, one person, a date range (whole
+ * days, UTC, both ends included). Shared by the filter form, the page, the CSV export and any later export,
+ * which all call findAuditEntries with it. Blank fields mean "any".
+ */
+export const AUDIT_PAGE_SIZE = 50;
+/** The most rows one call returns (exports page through the whole history in steps of this size). */
+export const AUDIT_MAX_PAGE_SIZE = 1000;
+
+// A form sends "" for an empty field, an address leaves the key out: both mean no filter.
+const blankable = <T extends z.ZodType<unknown, string>>(schema: T) =>
+  z
+    .string()
+    .optional()
+    .transform((v) => (v?.trim() ? v.trim() : undefined))
+    .pipe(schema.optional());
+
+const PICK_PERSON = "Choose a person from the list.";
+
+const filterShape = {
+  record: blankable(
+    z.string().toUpperCase().refine((text) => parseLabNumber(text) !== null, "Enter a lab number such as T26-00004, R26-00012 or Q26-00001."),
+  ),
+  table: blankable(z.enum(AUDIT_TABLE_SLUGS, { message: "Choose a kind of record from the list." })),
+  person: blankable(z.string().max(64, PICK_PERSON).regex(/^[A-Za-z0-9:_-]+$/, PICK_PERSON)),
+  from: blankable(calendarDay),
+  to: blankable(calendarDay),
+};
+
+type DateRange = { from?: Date; to?: Date };
+const day = (d: Date) => d.toISOString().slice(0, 10);
+
+function endNotBeforeStart(filter: DateRange, ctx: z.RefinementCtx) {
+  if (filter.from && filter.to && filter.to < filter.from)
+    ctx.addIssue({ code: "custom", path: ["to"], message: `The end date ${day(filter.to)} is before the start date ${day(filter.from)}; nothing was searched.` });
+}
+
+export const auditFilterSchema = z.object(filterShape).superRefine(endNotBeforeStart);
+export type AuditFilterInput = z.input<typeof auditFilterSchema>;
+export type AuditFilter = z.output<typeof auditFilterSchema>;
+
+// Keyset paging on the AuditLog id: `before` gives the rows older than an id, `after` the rows newer than it.
+const cursor = blankable(z.string().regex(/^\d{1,18}$/, "That is not a place in the audit trail.").transform((text) => BigInt(text)));
+
+export const auditQuerySchema = z
+  .object({
+    ...filterShape,
+    before: cursor,
+    after: cursor,
+    pageSize: z.coerce.number().int("A page holds a whole number of rows.").min(1).max(AUDIT_MAX_PAGE_SIZE).default(AUDIT_PAGE_SIZE),
+  })
+  .superRefine((query, ctx) => {
+    endNotBeforeStart(query, ctx);
+    if (query.before !== undefined && query.after !== undefined) ctx.addIssue({ code: "custom", path: ["before"], message: "Page to older or to newer rows, not both." });
+  });
+export type AuditQueryInput = z.input<typeof auditQuerySchema>;
+export type AuditQuery = z.output<typeof auditQuerySchema>;
