@@ -60,3 +60,34 @@ export const auditQuerySchema = z
   });
 export type AuditQueryInput = z.input<typeof auditQuerySchema>;
 export type AuditQuery = z.output<typeof auditQuerySchema>;
+
+export const AUDIT_FILTER_KEYS = ["record", "table", "person", "from", "to"] as const;
+/** The filter as the page address and the form hold it: text as typed, blank keys left out. */
+export type AuditFilterText = Partial<Record<(typeof AUDIT_FILTER_KEYS)[number], string>>;
+type RawParams = Record<string, string | string[] | undefined> | URLSearchParams;
+
+function first(raw: RawParams, key: string): string | undefined {
+  const value = raw instanceof URLSearchParams ? (raw.get(key) ?? undefined) : raw[key];
+  const text = Array.isArray(value) ? value[0] : value;
+  return text?.trim() ? text.trim() : undefined;
+}
+
+/** The filter keys of a page address (Next.js searchParams or URLSearchParams), nothing else. */
+export function readAuditFilterText(raw: RawParams): AuditFilterText {
+  return Object.fromEntries(AUDIT_FILTER_KEYS.flatMap((key) => (first(raw, key) ? [[key, first(raw, key)!]] : [])));
+}
+
+/** The paging keys of a page address. */
+export function readAuditCursor(raw: RawParams): { before?: string; after?: string } {
+  return { ...(first(raw, "before") && { before: first(raw, "before") }), ...(first(raw, "after") && { after: first(raw, "after") }) };
+}
+
+/** "?record=T26-00004&before=812" for the audit trail page or its export; "" when there is nothing to say. */
+export function auditSearch(filter: AuditFilterText, cursor: { before?: string; after?: string } = {}): string {
+  const params = new URLSearchParams();
+  for (const key of AUDIT_FILTER_KEYS) if (filter[key]) params.set(key, filter[key]);
+  if (cursor.before) params.set("before", cursor.before);
+  if (cursor.after) params.set("after", cursor.after);
+  const text = params.toString();
+  return text ? `?${text}` : "";
+}

@@ -9,7 +9,7 @@ import { recordReadings } from "@/lib/server/readings/record-readings";
 import { toHydraulicsReadings } from "@/lib/server/readings/to-hydraulics-input";
 import { evaluateRun } from "@/lib/hydraulics";
 import { failure } from "../support/refusals";
-import { db, makeUser } from "../support/factories";
+import { db } from "../support/factories";
 import { at, gridRow, makeRun } from "../support/make-permeating-run";
 
 const fixture = (name: string) => readFileSync(path.resolve(import.meta.dirname, "../../e2e/fixtures", name), "utf8");
