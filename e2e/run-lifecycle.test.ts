@@ -1,19 +1,11 @@
 import path from "node:path";
-import type { Browser, ElementHandle, Page } from "puppeteer";
-import { chooseByName, fill, localDateTime, setValue } from "./support/forms";
+import type { Browser, ElementHandle } from "puppeteer";
+import { chooseByName, fill } from "./support/forms";
+import { recordStage } from "./support/run-steps";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { baseUrl, browserAvailable, launchBrowser, pageSignedInAs, textOf } from "./support/session";
 
 const FIXTURE = path.resolve(import.meta.dirname, "fixtures", "readings-d5887.csv");
-
-async function recordStage(page: Page, kind: string, pressures: [string, string, string], startedAt: Date) {
-  await chooseByName(page, "kind", kind);
-  await fill(page, "Cell pressure (kPa)", pressures[0]);
-  await fill(page, "Influent pressure (kPa)", pressures[1]);
-  await fill(page, "Effluent pressure (kPa)", pressures[2]);
-  await setValue(page, "Started at", localDateTime(startedAt));
-  await page.click("button::-p-text(Record stage)");
-}
 
 const DAY = 86_400_000;
 

@@ -2,15 +2,16 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { usePathname, useRouter } from "next/navigation";
-import { useTransition } from "react";
+import { useState, useTransition } from "react";
 import { useForm } from "react-hook-form";
 import { Field } from "@/components/ui/field";
-import { auditFilterSchema, auditSearch, type AuditFilter, type AuditFilterInput, type AuditFilterText } from "@/lib/validation/audit";
+import { AUDIT_PAGE_SIZES, auditFilterSchema, auditSearch, type AuditFilter, type AuditFilterInput, type AuditFilterText } from "@/lib/validation/audit";
 import styles from "./audit.module.css";
 
 type Props = {
   /** The filter as the address has it. */
   values: AuditFilterText;
+  pageSize: number;
   /** Messages from the server for the filter as it stands (an unknown lab number, for one). */
   serverErrors: Record<string, string>;
   tables: { slug: string; plural: string }[];
@@ -22,15 +23,17 @@ type Props = {
  * before anything is asked), then put in the address, so the server renders the page and the address can
  * be kept or sent to someone.
  */
-export function AuditFilterForm({ values, serverErrors, tables, people }: Props) {
+export function AuditFilterForm({ values, pageSize, serverErrors, tables, people }: Props) {
   const router = useRouter();
   const pathname = usePathname();
   const [pending, startTransition] = useTransition();
+  // How many rows a page shows is not part of the filter (the export takes every row), so it lives beside it.
+  const [size, setSize] = useState(pageSize);
   const empty = { record: "", table: "", person: "", from: "", to: "" };
   const form = useForm<AuditFilterInput, unknown, AuditFilter>({ resolver: zodResolver(auditFilterSchema), defaultValues: { ...empty, ...values } });
   const { register, handleSubmit, formState, reset, getValues } = form;
   const error = (key: keyof AuditFilterText) => formState.errors[key]?.message ?? (formState.isSubmitted ? undefined : serverErrors[key]);
-  const go = (filter: AuditFilterText) => startTransition(() => router.push(`${pathname}${auditSearch(filter)}`));
+  const go = (filter: AuditFilterText) => startTransition(() => router.push(`${pathname}${auditSearch(filter, { pageSize: size })}`));
 
   return (
     <form
@@ -39,10 +42,11 @@ export function AuditFilterForm({ values, serverErrors, tables, people }: Props)
       aria-label="Filter the audit trail"
       aria-busy={pending}
       noValidate
-      onSubmit={handleSubmit(() => {
-        const typed = getValues();
-        reset(typed, { keepValues: true });
-        go(Object.fromEntries(Object.entries(typed).filter(([, v]) => typeof v === "string" && v.trim())) as AuditFilterText);
+      onSubmit={handleSubmit((filter) => {
+        // The address holds the filter as checked: the lab number in capitals, days as YYYY-MM-DD.
+        const day = (d: Date | undefined) => d?.toISOString().slice(0, 10);
+        reset(getValues(), { keepValues: true });
+        go({ record: filter.record, table: filter.table, person: filter.person, from: day(filter.from), to: day(filter.to) });
       })}
     >
       <Field label="Lab number" hint="The record and its parts: a run's stages and readings, a roll's custody events." error={error("record")}>
@@ -66,6 +70,12 @@ export function AuditFilterForm({ values, serverErrors, tables, people }: Props)
       <Field label="To (UTC day)" error={error("to")}>
         <input type="date" {...register("to")} />
       </Field>
+      <div className="field">
+        <label htmlFor="audit-page-size">Rows a page</label>
+        <select id="audit-page-size" value={size} onChange={(e) => setSize(Number(e.target.value))}>
+          {AUDIT_PAGE_SIZES.map((n) => <option key={n} value={n}>{n}</option>)}
+        </select>
+      </div>
       <div className={styles.buttons}>
         <button type="submit" className="button">Show</button>
         <button

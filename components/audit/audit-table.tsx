@@ -12,7 +12,7 @@ function Change({ change }: { change: AuditChange }) {
     <li>
       <span className={styles.label}>{change.label}:</span>{" "}
       {change.old !== null && <span className={change.new !== null ? styles.old : undefined}>{change.old}</span>}
-      {change.old !== null && change.new !== null && <span className={styles.arrow} aria-label="changed to">→</span>}
+      {change.old !== null && change.new !== null && <span className={styles.arrow} aria-label="changed to"> → </span>}
       {change.new !== null && <span className={change.old !== null ? styles.new : undefined}>{change.new}</span>}
       {change.new === null && <span className={styles.label}> (removed)</span>}
     </li>

@@ -9,6 +9,8 @@ import { calendarDay } from "./list-query";
  * which all call findAuditEntries with it. Blank fields mean "any".
  */
 export const AUDIT_PAGE_SIZE = 50;
+/** The page sizes the audit trail page offers. */
+export const AUDIT_PAGE_SIZES = [10, 25, 50, 100] as const;
 /** The most rows one call returns (exports page through the whole history in steps of this size). */
 export const AUDIT_MAX_PAGE_SIZE = 1000;
 
@@ -77,17 +79,25 @@ export function readAuditFilterText(raw: RawParams): AuditFilterText {
   return Object.fromEntries(AUDIT_FILTER_KEYS.flatMap((key) => (first(raw, key) ? [[key, first(raw, key)!]] : [])));
 }
 
-/** The paging keys of a page address. */
-export function readAuditCursor(raw: RawParams): { before?: string; after?: string } {
-  return { ...(first(raw, "before") && { before: first(raw, "before") }), ...(first(raw, "after") && { after: first(raw, "after") }) };
+export type AuditPaging = { before?: string; after?: string; pageSize?: number };
+
+/** The paging keys of a page address; a page size that is not offered is left out (the default applies). */
+export function readAuditPaging(raw: RawParams): AuditPaging {
+  const size = Number(first(raw, "pageSize"));
+  return {
+    ...(first(raw, "before") && { before: first(raw, "before") }),
+    ...(first(raw, "after") && { after: first(raw, "after") }),
+    ...((AUDIT_PAGE_SIZES as readonly number[]).includes(size) && size !== AUDIT_PAGE_SIZE && { pageSize: size }),
+  };
 }
 
 /** "?record=T26-00004&before=812" for the audit trail page or its export; "" when there is nothing to say. */
-export function auditSearch(filter: AuditFilterText, cursor: { before?: string; after?: string } = {}): string {
+export function auditSearch(filter: AuditFilterText, paging: AuditPaging = {}): string {
   const params = new URLSearchParams();
   for (const key of AUDIT_FILTER_KEYS) if (filter[key]) params.set(key, filter[key]);
-  if (cursor.before) params.set("before", cursor.before);
-  if (cursor.after) params.set("after", cursor.after);
+  if (paging.before) params.set("before", paging.before);
+  if (paging.after) params.set("after", paging.after);
+  if (paging.pageSize && paging.pageSize !== AUDIT_PAGE_SIZE) params.set("pageSize", String(paging.pageSize));
   const text = params.toString();
   return text ? `?${text}` : "";
 }

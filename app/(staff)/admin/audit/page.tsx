@@ -7,7 +7,7 @@ import { isAppError } from "@/lib/errors/app-error";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { findAuditEntries, type AuditEntryPage } from "@/lib/server/audit/find-audit-entries";
 import { listAuditPeople } from "@/lib/server/audit/list-audit-people";
-import { auditSearch, readAuditCursor, readAuditFilterText } from "@/lib/validation/audit";
+import { AUDIT_PAGE_SIZE, auditSearch, readAuditFilterText, readAuditPaging } from "@/lib/validation/audit";
 
 export const metadata = { title: "Audit trail" };
 
@@ -17,13 +17,14 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
   const actor = await requirePageUser("audit.view");
   const raw = await searchParams;
   const filter = readAuditFilterText(raw);
-  const cursor = readAuditCursor(raw);
+  const paging = readAuditPaging(raw);
+  const pageSize = paging.pageSize ?? AUDIT_PAGE_SIZE;
   const people = await listAuditPeople({ actor });
   // A refused filter shows its sentence and no rows: nothing else is searched.
   let page: AuditEntryPage | null = null;
   let refusal: { message: string; fieldErrors: Record<string, string> } | null = null;
   try {
-    page = await findAuditEntries({ actor, input: { ...filter, ...cursor } });
+    page = await findAuditEntries({ actor, input: { ...filter, ...paging } });
   } catch (error) {
     if (!isAppError(error) || error.code !== "INVALID_INPUT") throw error;
     const messages = [...new Set(Object.values(error.fieldErrors))];
@@ -37,7 +38,7 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
         Every change to the laboratory's records, written by the database itself as it happens; these rows cannot be changed or removed.
         Values are shown in words and in your units; times are UTC.
       </p>
-      <AuditFilterForm values={filter} serverErrors={refusal?.fieldErrors ?? {}} tables={AUDIT_TABLE_CHOICES} people={people} />
+      <AuditFilterForm values={filter} pageSize={pageSize} serverErrors={refusal?.fieldErrors ?? {}} tables={AUDIT_TABLE_CHOICES} people={people} />
       {refusal && <div className="notice notice-error" role="alert" data-testid="audit-refusal">{refusal.message}</div>}
       {page && (
         <section className="card" data-testid="audit-list">
@@ -46,7 +47,7 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
             {page.entries.length > 0 && <a className="button button-quiet" href={`/api/audit/export${auditSearch(filter)}`} download data-testid="audit-csv">Download all that match (CSV)</a>}
           </div>
           {page.entries.length === 0 ? <p className="empty">No change matches this filter.</p> : <div className="table-wrap"><AuditTable entries={page.entries} /></div>}
-          <AuditPager filter={filter} newer={page.newer} older={page.older} paged={Boolean(cursor.before || cursor.after)} />
+          <AuditPager filter={filter} pageSize={pageSize} newer={page.newer} older={page.older} paged={Boolean(paging.before || paging.after)} />
         </section>
       )}
     </>
