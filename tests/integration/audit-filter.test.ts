@@ -121,6 +121,15 @@ describe("the audit trail filter", () => {
     expect(new Set(ids(down)).size).toBe(23);
     expect(up.map((p) => p.map((e) => e.id))).toEqual(down.map((p) => p.map((e) => e.id)));
 
+    // Within a date range pages follow time, then id: rows written out of time order are each met once, newest first.
+    const late = await makeUser("INTAKE_CLERK");
+    const shuffled = [5, 1, 9, 3, 7, 0, 8, 2, 6, 4, 10].map((h) => new Date(Date.UTC(2025, 6, 1) + h * 3_600_000));
+    await insertAuditRows(late.id, shuffled);
+    const byTime = await walk(admin, { person: late.id, from: "2025-07-01", to: "2025-07-01", pageSize: 3 });
+    expect(byTime.down.map((p) => p.length)).toEqual([3, 3, 3, 2]);
+    expect(byTime.down.flat().map((e) => e.occurredAt.getTime())).toEqual(shuffled.map((d) => d.getTime()).sort((x, y) => y - x));
+    expect(ids(byTime.up)).toEqual(ids(byTime.down));
+
     // The same through a record's branches (a UNION of its tables): a run with its readings, 3 a page.
     const { run } = await runWithCorrectedReading();
     const whole = (await findAuditEntries({ actor: admin, input: { record: run.labNumber, pageSize: 1000 } })).entries.map((e) => e.id);
