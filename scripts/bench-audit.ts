@@ -10,6 +10,7 @@
 import pg from "pg";
 import type { CurrentUser } from "../lib/server/auth/current-user";
 import { createTestDatabase } from "../tests/support/test-database";
+import { median } from "./support/median";
 
 const ROWS = Number(process.env.SEEPLINE_BENCH_AUDIT_ROWS ?? 2_000_000);
 const READINGS = 2_000; // of the one run the record filter looks for
@@ -54,8 +55,6 @@ ANALYZE;
 `;
 
 type Case = { name: string; input: Record<string, unknown>; baseline?: { name: string; sql?: string; withoutIndexes?: boolean } };
-
-const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)] as number;
 
 async function time(work: () => Promise<unknown>): Promise<number> {
   await work();
