@@ -30,14 +30,14 @@ export function revisionStanding(revision: RevisionStandingInput): RevisionStand
   if (revision.status === "REVOKED")
     return {
       tone: "bad", label: "Revoked", headline: `Revoked${on(revision.since)}.`,
-      detail: "The laboratory has withdrawn this certificate; its results must not be relied on, and it is no longer offered for download.",
+      detail: "The laboratory has withdrawn this certificate; its results must not be relied on.",
       clientMayDownload: false,
     };
   if (revision.status === "SUPERSEDED") {
     const by = revision.supersededByRevision;
     return {
       tone: "warn", label: by ? `Superseded by revision ${by}` : "Superseded", headline: `Superseded${by ? ` by revision ${by}` : ""}${on(revision.since)}.`,
-      detail: `This revision has been replaced and no longer stands; use the ${by ? `revision ${by} certificate` : "current revision"}. Its file stays available, named as superseded.`,
+      detail: `This revision has been replaced and no longer stands; ask the issuer for the ${by ? `revision ${by} certificate` : "current revision"}.`,
       clientMayDownload: true,
     };
   }
