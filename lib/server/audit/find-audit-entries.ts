@@ -22,8 +22,9 @@ const exists = async (selection: AuditSelection, relation: "<" | ">", cursor: bi
  * One page of the audit trail, filtered by record (lab number, with its parts), kind of record, person
  * and date range, newest first, in words. Keyset paging with the AuditLog id as the cursor (`before` /
  * `after` an id; see AuditSelection for the order), so a page deep in millions of rows costs what the
- * first does and no row is skipped or repeated between pages. The one filter operation: the audit trail page, the CSV export and later exports all call it.
- * An end date before the start, an unknown lab number or person: INVALID_INPUT, and nothing is searched.
+ * first does and no row is skipped or repeated between pages. The one filter operation: the audit trail
+ * page, the CSV export and later exports all call it. An end date before the start, an unknown lab number
+ * or person: INVALID_INPUT, and nothing is searched.
  */
 export async function findAuditEntries(options: { actor: CurrentUser; input: unknown }): Promise<AuditEntryPage> {
   requirePermission(options.actor, "audit.view");

@@ -33,7 +33,8 @@ export async function getCertificatePdf(options: { actor: CurrentUser; number: s
     select: { revision: true, status: true, pdf: true, revokedAt: true },
   });
   const named = revision !== undefined ? `certificate ${number} revision ${revision}` : `certificate ${number}`;
-  if (!found) throw new AppError("NOT_FOUND", `There is no issued ${named} that you may see.`);
+  // The query leaves drafts out; saying so again narrows the status to an issued one.
+  if (!found || found.status === "DRAFT") throw new AppError("NOT_FOUND", `There is no issued ${named} that you may see.`);
   if (found.status === "REVOKED" && actor.role === "CLIENT_USER")
     throw new AppError(
       "GONE",
@@ -41,6 +42,5 @@ export async function getCertificatePdf(options: { actor: CurrentUser; number: s
     );
   if (!found.pdf)
     throw new AppError("NOT_FOUND", `No PDF is stored for certificate ${number} revision ${found.revision}; ask the laboratory for a copy.`);
-  if (found.status === "DRAFT") throw new AppError("NOT_FOUND", `There is no issued ${named} that you may see.`);
   return { fileName: certificatePdfFileName(number, found.revision, found.status), pdf: Buffer.from(found.pdf), status: found.status, revision: found.revision };
 }
