@@ -85,8 +85,11 @@ export function auditFieldSpec(tableName: string, field: string): AuditFieldSpec
   const bare = field.endsWith("Id") && field.length > 2 ? field.slice(0, -2) : suffix ? field.replace(suffix[0], "") : field;
   const label = LABELS[field] ?? wordsOf(bare);
   if (SECRET.has(field) || SECRET_NAME.test(field)) return { label, kind: "secret" };
+  // A settings version's number is the record's own, not an edit counter.
+  if (field === "version" && tableName === "MethodSettingsVersion") return { label: "Version", kind: "plain" };
   if (HIDDEN.has(field)) return { label, kind: "hidden" };
   if (field === "snapshot") return { label: "Certificate content", kind: "summary" };
+  if (field === "evaluation") return { label: "Evaluation record", kind: "summary" };
   if ((field === "value" || field === "expandedUncertainty") && (tableName === "Result" || tableName === "IndexTest")) return { label, kind: "row-unit" };
   const words = enumWords(tableName, field);
   if (words) return { label, kind: "enum", words };

@@ -39,6 +39,7 @@ const OWNERS: Record<string, (row: Row) => AuditOwner> = {
   Laboratory: (row) => self(text(row.name)),
   NumberSequence: (row) => self(`lab number counter ${text(row.key)}`),
   TestMethod: (row) => self(text(row.code)),
+  MethodSettingsVersion: (row) => self(`${text(row.methodCode)} settings, version ${text(row.version)}`),
   StorageLocation: (row) => self(text(row.code)),
   Equipment: (row) => self(text(row.assetTag), `/equipment/${encodeURIComponent(text(row.assetTag))}`),
   Specification: (row) => self(text(row.name), `/specifications/${encodeURIComponent(text(row.id))}`),

@@ -55,7 +55,7 @@ export function formatAuditValue(spec: AuditFieldSpec, value: unknown, ctx: Audi
     case "secret":
       return NO_VALUE;
     case "summary":
-      return "stored (shown on the certificate)";
+      return "stored (too large to show here; see the record itself)";
     case "datetime":
       return typeof value === "string" || value instanceof Date ? formatAuditTime(value) : plain(value, ctx);
     case "enum":

@@ -72,6 +72,9 @@ describe("an audit row in words", () => {
     expect(auditOwner("Correction", { entity: "Roll", entityId: "roll-1", field: "lotNumber" })).toMatchObject({ record: { ref: "roll", id: "roll-1" }, part: "correction of lot number" });
     expect(auditOwner("Equipment", { assetTag: "CELL-03" }).record).toEqual({ text: "CELL-03", href: "/equipment/CELL-03" });
     expect(auditOwner("SomeLaterTable", { runId: "run-1" })).toMatchObject({ record: { ref: "run", id: "run-1" }, part: "some later table" });
+    // A settings version's number is what it is called by; elsewhere "version" is an edit counter, left out.
+    expect(auditOwner("MethodSettingsVersion", { methodCode: "D5887", version: 2 }).record).toEqual({ text: "D5887 settings, version 2", href: null });
+    expect([auditFieldSpec("MethodSettingsVersion", "version").kind, auditFieldSpec("Run", "version").kind]).toEqual(["plain", "hidden"]);
     expect(auditRowRefs({ tableName: "RunStage", operation: "INSERT", before: null, after: stage })).toEqual([{ ref: "run", id: "run-1" }, { ref: "run", id: "run-1" }, { ref: "user", id: "u-bram" }]);
   });
 
