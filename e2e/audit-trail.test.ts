@@ -62,20 +62,22 @@ describe.skipIf(!browserAvailable())("audit trail: a corrected reading traced by
     await tech.waitForFunction(() => /^\/runs\/T\d{2}-\d{5}$/.test(location.pathname), { timeout: 30_000 });
     const run = tech.url().split("/").pop()!;
 
-    const start = new Date(Date.now() - 72 * HOUR);
+    // Stages as the method has them (D5887, common practice): a two-day hold, then permeation near 550/530/515
+    // kPa with the cell 35 kPa above the influent line, so that no stage asks for a departure to be acknowledged.
+    const start = new Date(Date.now() - 96 * HOUR);
     await recordStage(tech, "Saturation", ["345", "310", "310"], start);
     await tech.waitForFunction(() => (document.querySelector('[data-testid="stages"]')?.querySelectorAll("tbody tr").length ?? 0) === 1, { timeout: 30_000 });
     await recordStage(tech, "Equilibration", ["552", "517", "517"], new Date(start.getTime() + 12 * HOUR));
     await tech.waitForFunction(() => (document.querySelector('[data-testid="stages"]')?.querySelectorAll("tbody tr").length ?? 0) === 2, { timeout: 30_000 });
-    const permeation = new Date(start.getTime() + 36 * HOUR);
-    await recordStage(tech, "Permeation", ["566", "531", "517"], permeation);
+    const permeation = new Date(start.getTime() + 62 * HOUR);
+    await recordStage(tech, "Permeation", ["558", "523", "509"], permeation);
 
     // --- Three readings typed into the grid (pressures and temperature carried over to the next row).
     await tech.waitForSelector('form[aria-label="Enter readings"]', { timeout: 30_000 });
     await typeReadingRow(tech, 1, { at: permeation, inflow: "452", outflow: "18" });
-    await fill(tech, "Row 1 Influent (kPa)", "531");
-    await fill(tech, "Row 1 Effluent (kPa)", "517");
-    await fill(tech, "Row 1 Cell (kPa)", "566");
+    await fill(tech, "Row 1 Influent (kPa)", "523");
+    await fill(tech, "Row 1 Effluent (kPa)", "509");
+    await fill(tech, "Row 1 Cell (kPa)", "558");
     await fill(tech, "Row 1 Temp. (°C)", "20.1");
     await tech.click("button::-p-text(Add a row)");
     await typeReadingRow(tech, 2, { at: new Date(permeation.getTime() + 6 * HOUR), inflow: "442.1", outflow: "28.9" });
