@@ -8,41 +8,11 @@ import { listRunReadings } from "@/lib/server/readings/list-run-readings";
 import { recordReadings } from "@/lib/server/readings/record-readings";
 import { evaluateRunRecords } from "@/lib/server/runs/evaluate-run-records";
 import { failure } from "../support/refusals";
-import { db, makeProject, makeUser, unique } from "../support/factories";
+import { db } from "../support/factories";
+import { at, gridRow, makeRun } from "../support/make-permeating-run";
 
-const DAY = 86_400_000;
-const HOUR = 3_600_000;
-const SYSTEM = { id: "system:test" };
 const fixture = (name: string) => readFileSync(path.resolve(import.meta.dirname, "../../e2e/fixtures", name), "utf8");
 
-
-/** A run in `state` whose permeation began `startedDaysAgo` days ago, with a burette panel of 31.4 / 31.2 mm² (invented). */
-async function makeRun(options: { state?: "PERMEATING" | "EQUILIBRATING" | "TERMINATED"; startedDaysAgo?: number } = {}) {
-  const [technician, other, qa] = await Promise.all([makeUser("TECHNICIAN"), makeUser("TECHNICIAN"), makeUser("QA_MANAGER")]);
-  const project = await makeProject();
-  const permeationStartedAt = new Date(Date.now() - (options.startedDaysAgo ?? 4) * DAY);
-  const run = await withActor(SYSTEM, async (tx) => {
-    const shipment = await tx.shipment.create({ data: { labNumber: unique("S"), clientOrganizationId: project.clientOrganizationId, projectId: project.id, deliveredBy: "x", receivedAt: new Date(), receivedById: technician.id } });
-    const roll = await tx.roll.create({ data: { labNumber: unique("R"), shipmentId: shipment.id, projectId: project.id, rollNumber: unique("r"), lotNumber: "L", product: "GCL", manufacturer: "M", state: "CUT" } });
-    const coupon = await tx.coupon.create({ data: { labNumber: unique("C"), rollId: roll.id, positionInSample: "centre", lengthMm: 300, widthMm: 300, cutById: technician.id, cutAt: new Date() } });
-    const specimen = await tx.specimen.create({ data: { labNumber: unique("P"), couponId: coupon.id, dieDiameterMm: 100, initialThicknessMm: 6, initialMassG: 45, intendedMethodCode: "D5887", preparedById: technician.id, preparedAt: new Date(), state: "UNDER_TEST" } });
-    const cell = await tx.equipment.create({ data: { assetTag: unique("CELL").toUpperCase(), kind: "PERMEAMETER_CELL", name: "Test cell", ratedMaxPressurePa: 1_000_000 } });
-    const panel = await tx.equipment.create({ data: { assetTag: unique("BP").toUpperCase(), kind: "BURETTE_PANEL", name: "Test burette panel" } });
-    const calibration = await tx.calibration.create({
-      data: { equipmentId: panel.id, calibratedAt: new Date(Date.now() - 30 * DAY), dueAt: new Date(Date.now() + 300 * DAY), reference: unique("CAL"), performedBy: "Test metrology", values: { inflowBuretteAreaM2: 3.14e-5, outflowBuretteAreaM2: 3.12e-5 }, recordedById: technician.id },
-    });
-    const created = await tx.run.create({ data: { labNumber: unique("T"), specimenId: specimen.id, cellId: cell.id, methodCode: "D5887", state: options.state ?? "PERMEATING", performedById: technician.id } });
-    await tx.runEquipment.create({ data: { runId: created.id, equipmentId: panel.id, calibrationId: calibration.id, role: "burette panel" } });
-    await tx.runStage.create({ data: { runId: created.id, sequence: 1, kind: "PERMEATION", cellPressurePa: 565_000, influentPressurePa: 530_000, effluentPressurePa: 516_000, startedAt: permeationStartedAt, recordedById: technician.id } });
-    return created;
-  });
-  return { technician, other, qa, run, permeationStartedAt };
-}
-
-const at = (start: Date, hours: number) => new Date(start.getTime() + hours * HOUR).toISOString();
-const gridRow = (takenAt: string, inflow: string, outflow: string, extra: Record<string, string> = {}) => ({
-  takenAt, inflowLevelMm: inflow, outflowLevelMm: outflow, influentPressure: "530", effluentPressure: "516", cellPressure: "565", temperatureC: "20,1", ...extra,
-});
 
 describe("entering readings in the grid", () => {
   it("saves a batch with cumulative volumes from the calibrated burette areas and elapsed time from the permeation start", async () => {
