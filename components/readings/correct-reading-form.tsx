@@ -10,8 +10,8 @@ import { applyServerErrors } from "@/components/ui/apply-server-errors";
 import { Field } from "@/components/ui/field";
 import { ZonedDateTimeInput } from "@/components/ui/zoned-date-time-input";
 import type { PressureUnit } from "@/lib/units/pressure-entry";
-import { correctReadingSchema, type ReadingEntryInput } from "@/lib/validation/readings";
-import { entryColumns } from "./entry-columns";
+import { correctReadingSchema } from "@/lib/validation/readings";
+import { entryColumns, type EntryRow } from "./entry-columns";
 import styles from "./readings.module.css";
 
 type FormInput = z.input<typeof correctReadingSchema>;
@@ -23,7 +23,7 @@ export type CorrectReadingFormProps = {
   pressureUnit: PressureUnit;
   withChemistry: boolean;
   /** The saved values as input text in the person's unit (takenAt as ISO text, shown in the lab's time zone). */
-  values: Record<keyof ReadingEntryInput, string>;
+  values: EntryRow;
   zone: string;
 };
 
@@ -57,7 +57,7 @@ export function CorrectReadingForm({ readingId, sequence, pressureUnit, withChem
           <Field key={c.key} label={c.title} error={errors?.[c.key]?.message}>
             {c.kind === "time"
               ? <ZonedDateTimeInput control={control} name={`values.${c.key}` as Path<FormInput>} zone={zone} seconds />
-              : <input {...register(`values.${c.key}` as Path<FormInput>)} type="text" inputMode="decimal" />}
+              : <input {...register(`values.${c.key}` as Path<FormInput>)} type={c.kind === "check" ? "checkbox" : "text"} inputMode={c.kind === "number" ? "decimal" : undefined} />}
           </Field>
         ))}
         <div className={styles.wide}>

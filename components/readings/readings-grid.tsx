@@ -10,13 +10,13 @@ import { applyServerErrors } from "@/components/ui/apply-server-errors";
 import { nowToTheMinute } from "@/components/ui/now-for-input";
 import { ZonedDateTimeInput } from "@/components/ui/zoned-date-time-input";
 import type { PressureUnit } from "@/lib/units/pressure-entry";
-import { recordReadingsSchema, type ReadingEntryInput } from "@/lib/validation/readings";
-import { entryColumns } from "./entry-columns";
+import { recordReadingsSchema } from "@/lib/validation/readings";
+import { entryColumns, type EntryRow } from "./entry-columns";
 import styles from "./readings.module.css";
 
 type FormInput = z.input<typeof recordReadingsSchema>;
 type FormOutput = z.output<typeof recordReadingsSchema>;
-type Row = Record<keyof ReadingEntryInput, string>;
+type Row = EntryRow;
 
 export type ReadingsGridProps = {
   runId: string;
@@ -32,13 +32,15 @@ export type ReadingsGridProps = {
 const blankRow = (from: Partial<Row>): Row => ({
   takenAt: nowToTheMinute(), inflowLevelMm: "", outflowLevelMm: "",
   influentPressure: from.influentPressure ?? "", effluentPressure: from.effluentPressure ?? "", cellPressure: from.cellPressure ?? "", temperatureC: from.temperatureC ?? "",
-  influentEcMsPerM: "", effluentEcMsPerM: "", influentPh: from.influentPh ?? "", effluentPh: "",
+  influentEcMsPerM: "", effluentEcMsPerM: "", influentPh: from.influentPh ?? "", effluentPh: "", afterRefill: false,
 });
 
 /**
  * The keyboard-fast entry grid: Tab or Enter moves to the next cell, Shift+Enter back, Enter on the last
- * cell adds a row (pressures and temperature carried over), Ctrl+Enter saves. Rows are checked with the
- * shared schema before sending; the server adds the checks across rows, and saves all rows or none.
+ * cell adds a row (pressures and temperature carried over), Ctrl+Enter saves. "After refill" marks the
+ * reading taken just after a refill or drain (the row before holds the levels just before it). Rows are
+ * checked with the shared schema before sending; the server adds the checks across rows, and saves all
+ * rows or none.
  */
 export function ReadingsGrid({ runId, pressureUnit, withChemistry, carryOver, zone }: ReadingsGridProps) {
   const router = useRouter();
@@ -115,7 +117,7 @@ export function ReadingsGrid({ runId, pressureUnit, withChemistry, carryOver, zo
                       <td key={c.key}>
                         {c.kind === "time"
                           ? <ZonedDateTimeInput control={control} name={`readings.${index}.${c.key}` as Path<FormInput>} zone={zone} {...cell} />
-                          : <input {...register(`readings.${index}.${c.key}` as Path<FormInput>)} type="text" inputMode="decimal" {...cell} />}
+                          : <input {...register(`readings.${index}.${c.key}` as Path<FormInput>)} type={c.kind === "check" ? "checkbox" : "text"} inputMode={c.kind === "number" ? "decimal" : undefined} {...cell} />}
                       </td>
                     );
                   })}

@@ -16,6 +16,7 @@ const NAV_ITEMS: NavItem[] = [
   { href: "/certificates", label: "Certificates", section: "Work", action: "certificate.view" },
   { href: "/equipment", label: "Equipment", section: "Lab", action: "equipment.view" },
   { href: "/specifications", label: "Specifications", section: "Lab", action: "certificate.view" },
+  { href: "/methods", label: "Methods", section: "Lab", action: "run.view" },
   { href: "/admin/clients", label: "Clients", section: "Lab", action: "client.manage" },
   { href: "/admin/users", label: "People", section: "Lab", action: "user.manage" },
   { href: "/admin/lab", label: "Lab details", section: "Lab", action: "lab.configure" },

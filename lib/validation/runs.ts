@@ -13,6 +13,8 @@ export const assignSpecimenSchema = z
     burettePanelId: z.string().min(1, "Choose the burette panel."),
     transducerId: z.string().min(1, "Choose the pressure transducer."),
     thermometerId: z.string().optional().transform((v) => v || undefined),
+    thicknessGaugeId: z.string().optional().transform((v) => v || undefined),
+    timerId: z.string().optional().transform((v) => v || undefined),
     methodCode: z.enum(["D5887", "D5084", "D6766"], { message: "Choose the test method." }),
     // When the specimen actually went into the cell, not when the form was sent.
     mountedAt: pastDateTime("when the specimen was mounted"),

@@ -8,13 +8,15 @@ import { hashPassword } from "@/lib/server/auth/password";
 import { DEMO_CLIENTS, DEMO_LAB, DEMO_PASSWORD, DEMO_STAFF } from "./demo-people";
 import { DEMO_SPEC_LIMITS } from "./demo-method-defaults";
 import { makeDemoReadings } from "./demo-readings";
+import { DEMO_LAB_DECLARED_UNCERTAINTIES as U } from "./demo-uncertainties";
+import { seedDemoMethodSettings } from "./demo-method-settings";
+import { recordDemoResults } from "./demo-results";
 
 const DAY = 86_400_000;
 const HOUR = 3_600_000;
 const SPECIMEN_AREA_M2 = (Math.PI * 0.1 ** 2) / 4; // 100 mm die, common practice
-// The burette panels' calibrated areas (m^2, as stored) and the same in mm^2 for the readings.
-const BURETTE_AREAS_M2 = { inflowBuretteAreaM2: 3.14e-5, outflowBuretteAreaM2: 3.12e-5 };
-const BURETTE_AREAS_MM2 = { inflow: 31.4, outflow: 31.2 };
+/** Burette cross-sections of the demo panels, mm² (a bore of about 6.3 mm). */
+const DEMO_BURETTE_AREAS_MM2 = { inflow: 31.4, outflow: 31.2 };
 
 type Ids = Record<string, string>;
 type Item = { kind: "roll" | "coupon" | "specimen"; id: string };
@@ -53,6 +55,9 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
     locations[code] = (await tx.storageLocation.create({ data: { code, name } })).id;
 
   const equipment = await createEquipment(tx, users.admin!, now);
+  // The lab's own settings version of each method, set before the demo's first shipment arrived, so every
+  // demo run (and a run dated back to any moment of the scenario) is judged by it.
+  const settingsVersions = await seedDemoMethodSettings(tx, users.admin!, ago(25));
 
   // One custody event: what happened to which item, from which state to which, who, when and where.
   const custody = async (item: Item, action: CustodyAction, fromState: ItemState | null, toState: ItemState, actorId: string, at: Date, extra: { toLocationId?: string | null; note?: string } = {}) =>
@@ -145,16 +150,18 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
   const secondReviewSpecimen = await prepare(reviewCoupon, 12.1, users.technician!);
   const testingSpecimen = await prepare(await cutCoupon(testingRoll, 6.5, users.technician!), 6.2, users.technician!);
 
-  // Runs: mounted, saturated, held, permeated (readings every 6 h); `ended` terminates them.
-  const makeRun = async (specimen: { id: string; labNumber: string }, r: Awaited<ReturnType<typeof roll>>, cell: string, tech: string, daysAgo: number, state: Prisma.RunCreateInput["state"], readingCount: number) => {
+  // Runs: mounted, saturated, held, permeated (readings every 6 h, at the method's permeation pressures);
+  // with `refillAfter`, the burettes are refilled and drained once after that reading; `ended` terminates them.
+  const makeRun = async (specimen: { id: string; labNumber: string }, r: Awaited<ReturnType<typeof roll>>, cell: string, tech: string, daysAgo: number, state: Prisma.RunCreateInput["state"], readingCount: number, refillAfter?: number) => {
     const mountedAt = ago(daysAgo);
+    const uses = (tag: string, role: string) => ({ equipmentId: equipment[tag]!, calibrationId: equipment[`${tag}:cal`]!, role });
     const run = await tx.run.create({
       data: {
         labNumber: await allocateLabNumber(tx, "run", mountedAt), specimenId: specimen.id, cellId: equipment[cell]!, methodCode: "D5887", state,
-        performedById: tech, assignedAt: mountedAt, effectiveStressPa: 34_500,
+        performedById: tech, assignedAt: mountedAt, effectiveStressPa: 34_500, methodSettingsVersionId: settingsVersions.D5887,
         equipment: { create: [
-          { equipmentId: equipment["BP-01"]!, calibrationId: equipment["BP-01:cal"]!, role: "burette panel" },
-          { equipmentId: equipment["PT-01"]!, calibrationId: equipment["PT-01:cal"]!, role: "pressure transducer" },
+          uses(cell, "permeameter cell"), uses("BP-01", "burette panel"), uses("PT-01", "pressure transducer"), uses("TH-01", "thermometer"),
+          uses("TG-01", "thickness gauge"), uses("CLK-01", "timer"),
         ] },
       },
     });
@@ -172,14 +179,11 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
     await custody(specimenItem, "TEST_STARTED", "ASSIGNED", "UNDER_TEST", tech, start, { note: `Permeation of ${run.labNumber}` });
     if (r.state !== "UNDER_TEST") await moveRoll(r, "TEST_STARTED", "UNDER_TEST", tech, start, `Specimen ${specimen.labNumber}`);
     const readings = makeDemoReadings({
-      fluxM3PerM2PerS: 2.4e-9, areaM2: SPECIMEN_AREA_M2, count: readingCount, stepH: 6, headPa: 14_000,
-      buretteAreasMm2: BURETTE_AREAS_MM2, startLevelsMm: { inflow: 620, outflow: 95 },
+      fluxM3PerM2PerS: 2.4e-9, areaM2: SPECIMEN_AREA_M2, count: readingCount, stepH: 6, pressuresPa: { cell: 552_000, influent: 531_000, effluent: 517_000 },
+      buretteAreasMm2: DEMO_BURETTE_AREAS_MM2, ...(refillAfter !== undefined && { refillAfter }),
     });
     await tx.reading.createMany({
-      data: readings.map((r, i) => ({
-        runId: run.id, sequence: i + 1, takenAt: new Date(start.getTime() + r.elapsedS * 1000), ...r,
-        influentPressurePa: 531_000, effluentPressurePa: 517_000, cellPressurePa: 552_000, recordedById: tech,
-      })),
+      data: readings.map((r, i) => ({ runId: run.id, sequence: i + 1, takenAt: new Date(start.getTime() + r.elapsedS * 1000), ...r, recordedById: tech })),
     });
     const ended = async (terminatedDaysAgo: number, submittedDaysAgo: number, post: { thicknessMm: number; massG: number; observations: string }) => {
       const terminatedAt = ago(terminatedDaysAgo);
@@ -194,14 +198,16 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
   };
 
   // One run approved and certified (its specimen then retained), two awaiting review, one permeating now.
-  const approved = await makeRun(certifiedSpecimen, certifiedRoll, "CELL-01", users.technician!, 18, "APPROVED", 12);
+  // The approved run's burettes were refilled and drained once, after its seventh reading.
+  const approved = await makeRun(certifiedSpecimen, certifiedRoll, "CELL-01", users.technician!, 18, "APPROVED", 12, 6);
   await approved.ended(12, 12, { thicknessMm: 5.9, massG: 71.3, observations: "Uniform hydration; no channels seen on the cut section." });
   await moveRoll(certifiedRoll, "TESTED", "TESTED", users.technician!, ago(12), `Specimen ${certifiedSpecimen.labNumber} tested`);
   await tx.review.create({ data: { runId: approved.run.id, reviewerId: users.qa!, decision: "APPROVED", comments: "Criteria met; checklist complete.", createdAt: ago(11) } });
-  const result = await tx.result.create({ data: { runId: approved.run.id, property: "INDEX_FLUX", value: 2.4e-9, unit: "m3/m2/s", expandedUncertainty: 0.2e-9, temperatureC: 20.6, unitWeightBasis: "conventional 9.81 kN/m3", approvedById: users.qa!, approvedAt: ago(11) } });
+  // Computed as the app computes at approval; only the index flux goes on the demo's issued certificate.
+  const [result] = await recordDemoResults(tx, approved.run.id, { approvedById: users.qa!, approvedAt: ago(11) });
   const certificate = await tx.certificate.create({ data: { number: await allocateLabNumber(tx, "certificate", ago(10)), projectId: projects["MWA-C4"]!, clientOrganizationId: orgs.MWA! } });
   // Drafted with its results, then issued: the database keeps an issued revision's parts fixed.
-  const revision = await tx.certificateRevision.create({ data: { certificateId: certificate.id, revision: 1, status: "DRAFT", verificationCode: "DEMO-7Q4K-2M9X", results: { create: [{ resultId: result.id }] } } });
+  const revision = await tx.certificateRevision.create({ data: { certificateId: certificate.id, revision: 1, status: "DRAFT", verificationCode: "DEMO-7Q4K-2M9X", results: { create: [{ resultId: result!.id }] } } });
   await tx.certificateRevision.update({ where: { id: revision.id }, data: { status: "ISSUED", issuedAt: ago(10) } });
   await tx.signature.create({ data: { revisionId: revision.id, signerId: users.qa!, signerRole: "QA_MANAGER", meaning: "Reviewed and approved for issue", signedAt: ago(10) } });
   const retainedAt = ago(9.9);
@@ -219,7 +225,7 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
 
 async function createEquipment(tx: Tx, adminId: string, now: Date): Promise<Ids> {
   const ids: Ids = {};
-  const add = async (assetTag: string, kind: Prisma.EquipmentCreateInput["kind"], name: string, ratedMaxPressurePa: number | null, calibratedDaysAgo: number, values: Record<string, number> = {}) => {
+  const add = async (assetTag: string, kind: Prisma.EquipmentCreateInput["kind"], name: string, ratedMaxPressurePa: number | null, calibratedDaysAgo: number, values: Record<string, number | string> = {}) => {
     const eq = await tx.equipment.create({ data: { assetTag, kind, name, serialNumber: `SN-${assetTag}`, ratedMaxPressurePa } });
     const calibratedAt = new Date(now.getTime() - calibratedDaysAgo * DAY);
     const cal = await tx.calibration.create({
@@ -228,10 +234,22 @@ async function createEquipment(tx: Tx, adminId: string, now: Date): Promise<Ids>
     ids[assetTag] = eq.id;
     ids[`${assetTag}:cal`] = cal.id;
   };
-  for (let n = 1; n <= 6; n++) await add(`CELL-0${n}`, "PERMEAMETER_CELL", `Flexible-wall permeameter cell ${n}`, 1_000_000, n === 6 ? 400 : 60 + n * 20);
-  for (let n = 1; n <= 3; n++) await add(`BP-0${n}`, "BURETTE_PANEL", `Burette panel ${n}`, 1_000_000, 90, BURETTE_AREAS_M2);
-  await add("PT-01", "PRESSURE_TRANSDUCER", "Differential pressure transducer 0-100 kPa", 700_000, 120);
-  await add("PT-02", "PRESSURE_TRANSDUCER", "Cell pressure transducer 0-1000 kPa", 1_000_000, 350);
-  await add("TH-01", "THERMOMETER", "Laboratory thermometer", null, 200);
+  for (let n = 1; n <= 6; n++) {
+    const calibratedDaysAgo = n === 6 ? 400 : 60 + n * 20;
+    // Each cell's leakage check with a dummy specimen (ASTM D5887): far below 10 % of the demo flows.
+    const leakage = { leakageCheckedAt: new Date(now.getTime() - calibratedDaysAgo * DAY).toISOString(), leakageMethod: "impermeable dummy specimen at the permeation pressures for 24 h", leakageRateM3PerS: 2e-13 + n * 1e-14 };
+    await add(`CELL-0${n}`, "PERMEAMETER_CELL", `Flexible-wall permeameter cell ${n}`, 1_000_000, calibratedDaysAgo, leakage);
+  }
+  // The outflow burette's zero sits 40 mm higher than the inflow burette's, above the panel's common datum.
+  for (let n = 1; n <= 3; n++)
+    await add(`BP-0${n}`, "BURETTE_PANEL", `Burette panel ${n}`, 1_000_000, 90, {
+      inflowBuretteAreaM2: DEMO_BURETTE_AREAS_MM2.inflow * 1e-6, outflowBuretteAreaM2: DEMO_BURETTE_AREAS_MM2.outflow * 1e-6,
+      inflowZeroAboveDatumMm: 0, outflowZeroAboveDatumMm: 40, scaleMinMm: 0, scaleMaxMm: 500, standardUncertainty: U.volumeMl,
+    });
+  await add("PT-01", "PRESSURE_TRANSDUCER", "Differential pressure transducer 0-100 kPa", 700_000, 120, { standardUncertainty: U.pressureKPa });
+  await add("PT-02", "PRESSURE_TRANSDUCER", "Cell pressure transducer 0-1000 kPa", 1_000_000, 350, { standardUncertainty: 0.5 });
+  await add("TH-01", "THERMOMETER", "Laboratory thermometer", null, 200, { standardUncertainty: U.temperatureC });
+  await add("TG-01", "THICKNESS_GAUGE", "Dial thickness gauge, 0.01 mm", null, 150, { standardUncertainty: U.thicknessMm });
+  await add("CLK-01", "TIMER", "Data-logger clock", null, 100, { standardUncertainty: U.timeS });
   return ids;
 }

@@ -29,7 +29,8 @@ export async function recordReadings(options: { actor: CurrentUser; input: unkno
       timeZone: ctx.timeZone,
       now: options.now ?? new Date(),
       areasMm2: ctx.areasMm2,
-      reference: ctx.reference,
+      scaleRangeMm: ctx.scaleRangeMm,
+      reference: ctx.referenceAt(ctx.current.length - 1),
       previous: asNeighbour(ctx.current[ctx.current.length - 1]),
       pressureUnit: input.pressureUnit,
     });
