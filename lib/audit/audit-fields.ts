@@ -37,6 +37,7 @@ const SECRET_NAME = /password(?!ChangedAt)|secret|salt|hash$|apiKey|privateKey/i
 const CUSTODY_ACTION_WORDS: Record<string, string> = {
   RECEIVED: "Received", STORED: "Stored", MOVED: "Moved", CUT: "Cut", PREPARED: "Prepared", ASSIGNED: "Assigned to a cell",
   TEST_STARTED: "Test started", TESTED: "Tested", RETAINED: "Retained", DISPOSED: "Disposed of", CORRECTED: "Corrected",
+  WITHDRAWN: "Withdrawn from the cell",
 };
 const KIND_WORDS: Record<string, string> = { ...EQUIPMENT_KIND_LABELS, BACK_PRESSURE: "Back-pressure" };
 const UNIT_WORDS: Record<string, string> = { KPA: "kPa", PSI: "psi" };
@@ -59,6 +60,7 @@ const LABELS: Record<string, string> = {
   fromLocationId: "From location", toLocationId: "To location", cellId: "Cell", actorId: "Person", pdfSha256: "PDF digest (SHA-256)",
   expandedUncertainty: "Expanded uncertainty (k = 2)", limitText: "Limit", lastValue: "Last number given", key: "Counter",
   conditionNotes: "Condition on arrival", machineDirectionMarked: "Machine direction marked", sessionVersion: "Sign-in version",
+  timeZone: "Time zone", abandonmentReason: "Reason for abandoning", abandonedById: "Abandoned by", jobTitle: "Job title",
 };
 
 // Units read from the end of a column's name, longest first.
@@ -88,6 +90,8 @@ export function auditFieldSpec(tableName: string, field: string): AuditFieldSpec
   // A settings version's number is the record's own, not an edit counter.
   if (field === "version" && tableName === "MethodSettingsVersion") return { label: "Version", kind: "plain" };
   if (HIDDEN.has(field)) return { label, kind: "hidden" };
+  // A custody event's sequence only keeps events of the same moment in the order they were recorded.
+  if (field === "sequence" && tableName === "CustodyEvent") return { label, kind: "hidden" };
   if (field === "snapshot") return { label: "Certificate content", kind: "summary" };
   if (field === "evaluation") return { label: "Evaluation record", kind: "summary" };
   if ((field === "value" || field === "expandedUncertainty") && (tableName === "Result" || tableName === "IndexTest")) return { label, kind: "row-unit" };

@@ -7,7 +7,7 @@
  */
 import { labNumberAddress } from "../numbering/lab-number-address";
 import { TEST_PROPERTY_LABELS } from "../results/property-units";
-import type { AuditRefKind } from "./audit-fields";
+import { auditFieldSpec, type AuditRefKind } from "./audit-fields";
 import { wordsOf } from "./audit-tables";
 
 export type AuditRecordName = { text: string; href: string | null };
@@ -35,6 +35,7 @@ const OWNERS: Record<string, (row: Row) => AuditOwner> = {
   Shipment: labNumbered, Roll: labNumbered, Coupon: labNumbered, Specimen: labNumbered, Run: labNumbered, Certificate: labNumbered,
   User: (row) => self(text(row.name)),
   ClientOrganization: (row) => self(text(row.name)),
+  ClientContact: (row) => partOf("client", "clientOrganizationId", row, `contact ${text(row.name)}`.trim()),
   Project: (row) => self(`${text(row.code)} ${text(row.name)}`.trim()),
   Laboratory: (row) => self(text(row.name)),
   NumberSequence: (row) => self(`lab number counter ${text(row.key)}`),
@@ -63,8 +64,8 @@ const OWNERS: Record<string, (row: Row) => AuditOwner> = {
     return partOf(key.slice(0, -2) as AuditRefKind, key, row, `custody: ${words(row.action)}`);
   },
   Correction: (row) => {
-    const ref = ({ Shipment: "shipment", Roll: "roll", Coupon: "coupon", Specimen: "specimen", Run: "run" } as const)[text(row.entity) as "Roll"];
-    const owner = ref ? partOf(ref, "entityId", row, `correction of ${words(row.field)}`) : self(`${text(row.entity)} ${text(row.entityId)}`);
+    const ref = ({ Shipment: "shipment", Roll: "roll", Coupon: "coupon", Specimen: "specimen", Run: "run", Equipment: "equipment" } as const)[text(row.entity) as "Roll"];
+    const owner = ref ? partOf(ref, "entityId", row, `correction of ${auditFieldSpec(text(row.entity), text(row.field)).label.toLowerCase()}`) : self(`${text(row.entity)} ${text(row.entityId)}`);
     return { ...owner, keys: ["entity", "entityId"] };
   },
 };

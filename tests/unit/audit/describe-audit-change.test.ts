@@ -78,6 +78,20 @@ describe("an audit row in words", () => {
     expect(auditRowRefs({ tableName: "RunStage", operation: "INSERT", before: null, after: stage })).toEqual([{ ref: "run", id: "run-1" }, { ref: "run", id: "run-1" }, { ref: "user", id: "u-bram" }]);
   });
 
+  it("words the master data, abandonment and equipment changes: a contact under its client, an equipment change under its instrument", () => {
+    expect(auditOwner("ClientContact", { clientOrganizationId: "org-1", name: "Ilse Varga" })).toEqual({ record: { ref: "client", id: "org-1" }, part: "contact Ilse Varga", keys: ["clientOrganizationId"] });
+    expect(auditOwner("Correction", { entity: "Equipment", entityId: "eq-1", field: "ratedMaxPressurePa" })).toMatchObject({ record: { ref: "equipment", id: "eq-1" }, part: "correction of rated maximum pressure" });
+    const before = { id: "run-1", labNumber: "T26-00004", state: "PERMEATING", abandonedAt: null, abandonedById: null, abandonmentReason: null, version: 3 };
+    const after = { ...before, state: "ABANDONED", abandonedAt: "2026-11-30T10:00:00", abandonedById: "u-bram", abandonmentReason: "Membrane leak", version: 4 };
+    expect(changes({ tableName: "Run", operation: "UPDATE", before, after })).toEqual([
+      "Abandoned at: — → 2026-11-30 10:00:00 UTC", "Abandoned by: — → Bram Oyelaran", "Reason for abandoning: — → Membrane leak", "State: Permeating → Abandoned",
+    ]);
+    // The custody sequence only orders events of one moment; the action is worded.
+    const event = { id: "ev-1", specimenId: "sp-1", action: "WITHDRAWN", fromState: "UNDER_TEST", toState: "RETAINED", sequence: 812, actorId: "u-bram", occurredAt: "2026-11-30T10:00:00", note: "" };
+    expect(changes({ tableName: "CustodyEvent", operation: "INSERT", before: null, after: event }).filter((c) => /Sequence|Action/.test(c))).toEqual(["Action: ∅ → Withdrawn from the cell"]);
+    expect(auditTableLabel("ClientContact")).toBe("Client contact");
+  });
+
   it("words table names and values, and formats numbers and times without float noise", () => {
     expect(auditTableLabel("RunEquipment")).toBe("Instrument used in a run");
     expect(auditTableLabel("MethodSetting")).toBe("Method setting");
