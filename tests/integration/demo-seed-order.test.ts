@@ -32,7 +32,10 @@ function ledgerProblems(label: string, kind: ItemKind, state: string, events: Ev
   return problems;
 }
 
-/** Every break of the order received <= cut <= prepared <= mounted <= stages <= readings <= terminated <= reviewed, or of a ledger. */
+/**
+ * Every break of the order received <= cut <= prepared <= mounted <= stages <= readings <= terminated <= reviewed
+ * (with the run's method settings version set before it was mounted), or of a ledger.
+ */
 async function demoProblems(tx: Tx, now: Date): Promise<string[]> {
   const problems: string[] = [];
   const before = (what: string, a: Date | null | undefined, b: Date | null | undefined) => {
@@ -49,7 +52,7 @@ async function demoProblems(tx: Tx, now: Date): Promise<string[]> {
           coupons: {
             include: {
               custodyEvents: events,
-              specimens: { include: { custodyEvents: events, runs: { include: { stages: { orderBy: { sequence: "asc" } }, readings: true, reviews: true } } } },
+              specimens: { include: { custodyEvents: events, runs: { include: { stages: { orderBy: { sequence: "asc" } }, readings: true, reviews: true, methodSettingsVersion: { select: { createdAt: true } } } } } },
             },
           },
         },
@@ -70,6 +73,9 @@ async function demoProblems(tx: Tx, now: Date): Promise<string[]> {
           problems.push(...ledgerProblems(p.labNumber, "specimen", p.state, p.custodyEvents));
           for (const run of p.runs) {
             before(`${p.labNumber} prepared / ${run.labNumber} mounted`, p.preparedAt, run.assignedAt);
+            // The settings version a run is judged by was in force when it was mounted.
+            if (!run.methodSettingsVersion) problems.push(`${run.labNumber} names no method settings version`);
+            before(`${run.labNumber} settings version set / mounted`, run.methodSettingsVersion?.createdAt, run.assignedAt);
             let previous = run.assignedAt;
             for (const stage of run.stages) {
               before(`${run.labNumber} stage ${stage.sequence} start`, previous, stage.startedAt);
