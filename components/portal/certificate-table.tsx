@@ -7,11 +7,11 @@ const TONE = { ok: "state-ok", warn: "state-warn", bad: "state-bad" } as const;
 
 // When a revision stopped standing; the portal never lists drafts.
 const sinceOf = (r: PortalCertificateRevision) => (r.status === "REVOKED" ? r.revokedAt : r.status === "SUPERSEDED" ? r.supersededAt : null);
-const standingOf = (r: PortalCertificateRevision) =>
-  revisionStanding({ status: r.status === "DRAFT" ? "ISSUED" : r.status, supersededByRevision: r.supersededByRevision, since: sinceOf(r) });
+const standingOf = (r: PortalCertificateRevision, zone?: string) =>
+  revisionStanding({ status: r.status === "DRAFT" ? "ISSUED" : r.status, supersededByRevision: r.supersededByRevision, since: sinceOf(r), zone });
 
 function RevisionStatus({ revision, zone }: { revision: PortalCertificateRevision; zone: string }) {
-  const standing = standingOf(revision);
+  const standing = standingOf(revision, zone);
   const since = sinceOf(revision);
   return (
     <>

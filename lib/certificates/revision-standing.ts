@@ -12,6 +12,8 @@ export type RevisionStandingInput = {
   supersededByRevision: number | null;
   /** When a superseded or revoked revision stopped standing. */
   since: Date | null;
+  /** The lab's time zone, for that date (UTC when not given). */
+  zone?: string;
 };
 export type RevisionStanding = {
   tone: "ok" | "warn" | "bad";
@@ -24,19 +26,19 @@ export type RevisionStanding = {
   clientMayDownload: boolean;
 };
 
-const on = (date: Date | null) => (date ? ` on ${formatDate(date)}` : "");
+const on = (date: Date | null, zone?: string) => (date ? ` on ${formatDate(date, zone)}` : "");
 
 export function revisionStanding(revision: RevisionStandingInput): RevisionStanding {
   if (revision.status === "REVOKED")
     return {
-      tone: "bad", label: "Revoked", headline: `Revoked${on(revision.since)}.`,
+      tone: "bad", label: "Revoked", headline: `Revoked${on(revision.since, revision.zone)}.`,
       detail: "The laboratory has withdrawn this certificate; its results must not be relied on.",
       clientMayDownload: false,
     };
   if (revision.status === "SUPERSEDED") {
     const by = revision.supersededByRevision;
     return {
-      tone: "warn", label: by ? `Superseded by revision ${by}` : "Superseded", headline: `Superseded${by ? ` by revision ${by}` : ""}${on(revision.since)}.`,
+      tone: "warn", label: by ? `Superseded by revision ${by}` : "Superseded", headline: `Superseded${by ? ` by revision ${by}` : ""}${on(revision.since, revision.zone)}.`,
       detail: `This revision has been replaced and no longer stands; ask the issuer for the ${by ? `revision ${by} certificate` : "current revision"}.`,
       clientMayDownload: true,
     };

@@ -1,13 +1,14 @@
 import Link from "next/link";
 import { formatDateTime } from "@/lib/format/dates";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
+import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 import { listMethodSettings } from "@/lib/server/methods/list-method-settings";
 
 export const metadata = { title: "Methods" };
 
 export default async function MethodsPage() {
   const actor = await requirePageUser("run.view");
-  const methods = await listMethodSettings({ actor });
+  const [methods, zone] = await Promise.all([listMethodSettings({ actor }), getLabTimeZone()]);
   return (
     <>
       <div className="page-head">
@@ -26,7 +27,7 @@ export default async function MethodsPage() {
                 <tr key={m.code}>
                   <td><Link href={`/methods/${m.code}`}>ASTM {m.code}</Link><div className="muted">{m.title}</div></td>
                   <td>{latest ? `version ${latest.version}` : "defaults"}</td>
-                  <td>{latest ? formatDateTime(latest.createdAt) : "—"}</td>
+                  <td>{latest ? formatDateTime(latest.createdAt, zone) : "—"}</td>
                   <td>{latest?.reason ?? "—"}</td>
                 </tr>
               );

@@ -7,6 +7,7 @@ import { certificatePdfRequestSchema } from "@/lib/validation/portal";
 import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
 import { getDb } from "../db/client";
+import { readLabTimeZone } from "../lab/read-lab-time-zone";
 import { parseOrThrow } from "../validation/parse";
 import { organizationScope } from "./organization-scope";
 
@@ -38,7 +39,7 @@ export async function getCertificatePdf(options: { actor: CurrentUser; number: s
   if (found.status === "REVOKED" && actor.role === "CLIENT_USER")
     throw new AppError(
       "GONE",
-      `Certificate ${number} revision ${found.revision} was revoked${found.revokedAt ? ` on ${formatDate(found.revokedAt)}` : ""}: the laboratory has withdrawn it and its results must not be relied on, so it is no longer offered for download. Ask the laboratory which certificate stands.`,
+      `Certificate ${number} revision ${found.revision} was revoked${found.revokedAt ? ` on ${formatDate(found.revokedAt, await readLabTimeZone(getDb()))}` : ""}: the laboratory has withdrawn it and its results must not be relied on, so it is no longer offered for download. Ask the laboratory which certificate stands.`,
     );
   if (!found.pdf)
     throw new AppError("NOT_FOUND", `No PDF is stored for certificate ${number} revision ${found.revision}; ask the laboratory for a copy.`);

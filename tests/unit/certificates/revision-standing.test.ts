@@ -25,6 +25,12 @@ describe("what a revision's status means to its holder", () => {
     });
   });
 
+  it("dates the change in the lab's time zone: 23:30 UTC on 30 November is already 1 December in Berlin (CET, UTC+1)", () => {
+    const late = new Date("2026-11-30T23:30:00Z");
+    expect(revisionStanding({ status: "REVOKED", supersededByRevision: null, since: late }).headline).toBe("Revoked on 2026-11-30.");
+    expect(revisionStanding({ status: "REVOKED", supersededByRevision: null, since: late, zone: "Europe/Berlin" }).headline).toBe("Revoked on 2026-12-01.");
+  });
+
   it("names the file after its standing", () => {
     expect(certificatePdfFileName("Q26-00001", 1, "ISSUED")).toBe("Q26-00001-rev1.pdf");
     expect(certificatePdfFileName("Q26-00001", 1, "SUPERSEDED")).toBe("Q26-00001-rev1-superseded.pdf");

@@ -16,11 +16,12 @@ const NOWRAP = { whiteSpace: "nowrap" } as const;
 const TONE = { ok: "notice-ok", warn: "notice-caution", bad: "notice-error" } as const;
 const STATUS_NAME = { VALID: "valid", SUPERSEDED: "superseded", REVOKED: "revoked" } as const;
 
-function Status({ result }: { result: CertificateVerification }) {
+function Status({ result, zone }: { result: CertificateVerification; zone: string }) {
   const standing = revisionStanding({
     status: result.status === "VALID" ? "ISSUED" : result.status,
     supersededByRevision: result.supersededBy?.revision ?? null,
     since: result.since,
+    zone,
   });
   return (
     <div className={`notice ${TONE[standing.tone]}`} data-testid="verify-status" data-status={STATUS_NAME[result.status]}>
@@ -37,17 +38,18 @@ export default async function VerificationPage({ params }: { params: Promise<{ c
   if (canonical !== code) redirect(`/verify/${canonical}`);
   const result = await verifyCertificate(canonical);
   if (!result) notFound();
+  const zone = await getLabTimeZone();
   return (
     <div className="plain">
       <div className="plain-card">
         <Wordmark />
         <h1>Certificate verification</h1>
         <p className="muted">{await getLabName()} · code <span className="mono" style={{ whiteSpace: "nowrap" }}>{canonical}</span></p>
-        <Status result={result} />
+        <Status result={result} zone={zone} />
         <dl className="facts" style={{ marginTop: "0.75rem" }}>
           <div><dt>Certificate</dt><dd className="mono" data-testid="verify-number">{result.number}</dd></div>
           <div><dt>Revision</dt><dd data-testid="verify-revision">{result.revision}</dd></div>
-          <div><dt>Issued</dt><dd data-testid="verify-issued">{formatDate(result.issuedAt, await getLabTimeZone())}</dd></div>
+          <div><dt>Issued</dt><dd data-testid="verify-issued">{formatDate(result.issuedAt, zone)}</dd></div>
         </dl>
         <h2 style={{ marginTop: "0.75rem" }}>SHA-256 digest of the issued PDF</h2>
         {result.pdfSha256 ? (

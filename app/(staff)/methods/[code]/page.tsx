@@ -5,6 +5,7 @@ import { SettingsTable } from "@/components/methods/settings-table";
 import { formatDateTime } from "@/lib/format/dates";
 import { can } from "@/lib/policy/permissions";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
+import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 import { listMethodSettings } from "@/lib/server/methods/list-method-settings";
 
 type Props = { params: Promise<{ code: string }> };
@@ -16,7 +17,7 @@ export async function generateMetadata({ params }: Props) {
 export default async function MethodSettingsPage({ params }: Props) {
   const actor = await requirePageUser("run.view");
   const code = decodeURIComponent((await params).code).toUpperCase();
-  const [method] = await listMethodSettings({ actor, methodCode: code });
+  const [[method], zone] = await Promise.all([listMethodSettings({ actor, methodCode: code }), getLabTimeZone()]);
   if (!method) notFound();
   const [latest, previous] = method.versions;
   const values = latest?.settings ?? method.definition.defaults;
@@ -32,7 +33,7 @@ export default async function MethodSettingsPage({ params }: Props) {
       <div className="stack-gap">
         <section className="card">
           <h2>In force</h2>
-          {latest && <p className="muted">Since {formatDateTime(latest.createdAt)}{latest.createdBy ? `, by ${latest.createdBy.name}` : ""}: {latest.reason}</p>}
+          {latest && <p className="muted">Since {formatDateTime(latest.createdAt, zone)}{latest.createdBy ? `, by ${latest.createdBy.name}` : ""}: {latest.reason}</p>}
           <SettingsTable definition={method.definition} values={values as Record<string, unknown>} previous={previous?.settings as Record<string, unknown> | undefined} />
         </section>
         {can(actor.role, "method.manage") && (
@@ -45,7 +46,7 @@ export default async function MethodSettingsPage({ params }: Props) {
           <h2>Versions <span className="count">{method.versions.length}</span></h2>
           <ol reversed data-testid="settings-versions">
             {method.versions.map((v) => (
-              <li key={v.id}>Version {v.version} · {formatDateTime(v.createdAt)} · {v.createdBy?.name ?? "installed with the app"}: {v.reason}</li>
+              <li key={v.id}>Version {v.version} · {formatDateTime(v.createdAt, zone)} · {v.createdBy?.name ?? "installed with the app"}: {v.reason}</li>
             ))}
           </ol>
         </section>
