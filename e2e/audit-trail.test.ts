@@ -13,7 +13,10 @@ const auditRows = (page: Page) =>
 
 async function typeReadingRow(page: Page, row: number, values: { at: Date; inflow: string; outflow: string }) {
   // The grid's time cell is a datetime-local input in the lab's zone: set its whole value, as a date picker does.
-  await setValue(page, `Row ${row} Time`, labDateTime(values.at));
+  await page.$eval(`input[aria-label="Row ${row} Time"]`, (el, v) => {
+    Object.getOwnPropertyDescriptor(HTMLInputElement.prototype, "value")!.set!.call(el, v);
+    el.dispatchEvent(new Event("input", { bubbles: true }));
+  }, labDateTime(values.at));
   await fill(page, `Row ${row} Inflow level (mm)`, values.inflow);
   await fill(page, `Row ${row} Outflow level (mm)`, values.outflow);
 }
