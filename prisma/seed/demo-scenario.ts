@@ -153,10 +153,10 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
   await tx.review.create({ data: { runId: approvedRun.id, reviewerId: users.qa!, decision: "APPROVED", comments: "Criteria met; checklist complete.", createdAt: ago(11) } });
   const result = await tx.result.create({ data: { runId: approvedRun.id, property: "INDEX_FLUX", value: 2.4e-9, unit: "m3/m2/s", expandedUncertainty: 0.2e-9, temperatureC: 20.6, unitWeightBasis: "conventional 9.81 kN/m3", approvedById: users.qa!, approvedAt: ago(11) } });
   const certificate = await tx.certificate.create({ data: { number: await allocateLabNumber(tx, "certificate", ago(10)), projectId: projects["MWA-C4"]!, clientOrganizationId: orgs.MWA! } });
-  // Drafted with its results, then issued: the database keeps an issued revision's parts fixed.
+  // Drafted with its results, signed, then issued: the database keeps an issued revision's parts fixed.
   const revision = await tx.certificateRevision.create({ data: { certificateId: certificate.id, revision: 1, status: "DRAFT", verificationCode: "DEMO-7Q4K-2M9X", results: { create: [{ resultId: result.id }] } } });
-  await tx.certificateRevision.update({ where: { id: revision.id }, data: { status: "ISSUED", issuedAt: ago(10) } });
   await tx.signature.create({ data: { revisionId: revision.id, signerId: users.qa!, signerRole: "QA_MANAGER", meaning: "Reviewed and approved for issue", signedAt: ago(10) } });
+  await tx.certificateRevision.update({ where: { id: revision.id }, data: { status: "ISSUED", issuedAt: ago(10) } });
 
   const submittedRun = await makeRun(reviewSpecimen.id, "CELL-02", users.technician2!, 11, "SUBMITTED", 12);
   await tx.run.update({ where: { id: submittedRun.id }, data: { terminatedAt: ago(5), terminationKind: "CRITERIA_MET", postTestThicknessMm: 6.1, postTestMassG: 70.8, postTestObservations: "Even swelling.", submittedAt: ago(4) } });

@@ -5,8 +5,11 @@ import { newVerificationCode } from "@/lib/certificates/verification-code";
 import { reviseCertificateSchema } from "@/lib/validation/certificates";
 import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
+import { getDb } from "../db/client";
+import { isUniqueViolation } from "../db/database-fault";
 import { withActor } from "../db/transaction";
 import { parseOrThrow } from "../validation/parse";
+import { explainCertificateCollision } from "./certificate-collision";
 
 /**
  * A correction of an issued certificate: a new draft revision with the reason, the same results, pointing
@@ -28,5 +31,10 @@ export async function reviseCertificate(options: { actor: CurrentUser; input: un
       },
       select: { id: true, revision: true },
     });
+  }).catch(async (error: unknown) => {
+    // Two corrections at once: the unique revision number (and supersedes link) lets one through.
+    if (!isUniqueViolation(error)) throw error;
+    const number = (await getDb().certificate.findUnique({ where: { id: input.certificateId }, select: { number: true } }))?.number;
+    throw explainCertificateCollision(error, number) ?? error;
   });
 }

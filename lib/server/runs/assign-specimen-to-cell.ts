@@ -1,5 +1,4 @@
 import "server-only";
-import { holdsCell, RUN_STATES, type RunStateName } from "@/lib/runs/run-state-machine";
 import { AppError } from "@/lib/errors/app-error";
 import { enteredPressureToPa } from "@/lib/units/pressure-entry";
 import { readBuretteAreasM2 } from "@/lib/validation/equipment";
@@ -11,8 +10,7 @@ import { withActor } from "../db/transaction";
 import { applyCustodyAction } from "../custody/apply-custody-action";
 import { findEquipmentStatuses } from "../equipment/find-usable-equipment";
 import { parseOrThrow } from "../validation/parse";
-
-const ACTIVE_STATES = RUN_STATES.filter((s) => holdsCell(s as RunStateName));
+import { ACTIVE_RUN_STATES, explainRunCollision } from "./run-collision";
 
 /**
  * The technician mounts a prepared specimen in a free cell: the run starts, with the instruments it uses
@@ -23,6 +21,8 @@ export async function assignSpecimenToCell(options: { actor: CurrentUser; input:
   requirePermission(options.actor, "run.operate");
   const input = parseOrThrow(assignSpecimenSchema, options.input);
   const now = options.now ?? new Date();
+  // The database keeps one active run per cell and per specimen; the checks below give the usual sentence,
+  // the unique indexes decide a race between two people starting runs at the same moment.
   return withActor(options.actor, async (tx) => {
     const roles: Array<[id: string | undefined, role: string, kind: string, field: string]> = [
       [input.cellId, "permeameter cell", "PERMEAMETER_CELL", "cellId"],
@@ -46,7 +46,7 @@ export async function assignSpecimenToCell(options: { actor: CurrentUser; input:
     if (refusals.length > 0)
       throw new AppError("ILLEGAL_TRANSITION", `This equipment cannot be used for a new run: ${refusals.join(" ")} Use calibrated equipment, or ask a QA manager to allow it with a reason.`);
 
-    const busy = await tx.run.findFirst({ where: { cellId: input.cellId, state: { in: ACTIVE_STATES } }, select: { labNumber: true } });
+    const busy = await tx.run.findFirst({ where: { cellId: input.cellId, state: { in: ACTIVE_RUN_STATES } }, select: { labNumber: true } });
     if (busy) throw new AppError("CONFLICT", `That cell is holding run ${busy.labNumber}; choose a free cell.`, { fieldErrors: { cellId: "Not free." } });
     const burette = statuses.get(input.burettePanelId)!;
     if (!readBuretteAreasM2(burette.latestValues))
@@ -66,5 +66,7 @@ export async function assignSpecimenToCell(options: { actor: CurrentUser; input:
       select: { id: true, labNumber: true },
     });
     return run;
+  }).catch(async (error: unknown) => {
+    throw (await explainRunCollision(error, input)) ?? error;
   });
 }
