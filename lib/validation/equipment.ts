@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { PRESSURE_UNITS, enteredPressureToPa, type PressureUnit } from "../units/pressure-entry";
 import { optionalMeasured, pastDateTime, requiredText, versionSchema } from "./common";
+import { futureDate } from "./record-dates";
 
 // Mirrors the EquipmentKind and EquipmentStatus enums of prisma/schema.prisma (lib/ may not import Prisma).
 export const EQUIPMENT_KINDS = ["PERMEAMETER_CELL", "BURETTE_PANEL", "PRESSURE_TRANSDUCER", "THERMOMETER"] as const;
@@ -80,7 +81,7 @@ export const recordCalibrationSchema = z
     equipmentId: z.string().min(1),
     equipmentKind: z.enum(EQUIPMENT_KINDS).optional(),
     calibratedAt: pastDateTime("the calibration date"),
-    dueAt: z.coerce.date({ message: "Enter the date the next calibration is due." }).refine((d) => !Number.isNaN(d.getTime()), "Enter the date the next calibration is due."),
+    dueAt: futureDate("the date the next calibration is due"),
     reference: requiredText("the certificate or report reference", 120),
     performedBy: requiredText("who performed the calibration", 120),
     passed: checkbox("Say whether the calibration passed."),
