@@ -6,12 +6,15 @@ import path from "node:path";
 
 const PROFILE_PREFIX = "seepline-pdf-";
 
-// Waits while both the server and Chromium live; then ends Chromium's whole process group and removes its
-// profile folder. A separate little process, so it works even when the server was killed with SIGKILL.
+// Waits while both the server and Chromium live; then ends Chromium's whole process group, waits (a few
+// seconds at most) for it to go, so that it cannot write into its profile again, and removes the profile
+// folder. A separate little process, so it works even when the server was killed with SIGKILL. POSIX sh.
 const WATCHDOG = `
 server="$1"; browser="$2"; profile="$3"
 while kill -0 "$server" 2>/dev/null && kill -0 "$browser" 2>/dev/null; do sleep 1; done
-kill -KILL -- "-$browser" 2>/dev/null
+kill -KILL "-$browser" 2>/dev/null
+n=0
+while kill -0 "$browser" 2>/dev/null && [ "$n" -lt 20 ]; do sleep 0.25; n=$((n + 1)); done
 rm -rf -- "$profile"
 `;
 
