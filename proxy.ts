@@ -1,6 +1,7 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { getToken } from "next-auth/jwt";
 import { isPublicPath } from "@/lib/policy/routes";
+import { actionBodyProblem } from "@/lib/security/action-body";
 import { isCrossOriginWrite } from "@/lib/security/cross-origin-write";
 import { baselineSecurityHeaders, newNonce, pageContentSecurityPolicy } from "@/lib/security/security-headers";
 
@@ -9,7 +10,8 @@ const isHttps = () => publicAddress().startsWith("https://");
 
 /**
  * Every request but static files passes here:
- * - a change sent from another site's page (cross-origin POST, server actions included) is refused with 403;
+ * - a change sent from another site's page (cross-origin POST, server actions included) is refused with 403,
+ *   and a server action's arguments that React could not decode with 400 (lib/security/action-body.ts);
  * - pages get a Content-Security-Policy with a fresh nonce (Next.js reads it from the request header and
  *   marks its own scripts with it), and every response the security headers (lib/security);
  * - a signed-out visitor goes to sign-in, and the path is passed on to the 403 page so it can say which
@@ -28,6 +30,12 @@ export async function proxy(request: NextRequest) {
       NextResponse.json({ error: { code: "FORBIDDEN", message: "This change was sent from another site's page, so it was refused; make it from Seepline itself." } }, { status: 403 }),
       https,
     );
+
+  // A server action's arguments: refused with a sentence when React could not decode them (it would fault).
+  if (request.method === "POST" && request.headers.has("next-action") && (request.headers.get("content-type") ?? "").startsWith("text/plain")) {
+    const problem = actionBodyProblem(await request.clone().text());
+    if (problem) return secured(NextResponse.json({ error: { code: "INVALID_INPUT", message: problem } }, { status: 400 }), https);
+  }
 
   const headers = new Headers(request.headers);
   headers.set("x-seepline-path", pathname);

@@ -43,8 +43,9 @@ export default async function setup(project: TestProject) {
 
   const port = await findFreePort();
   const baseUrl = `http://localhost:${port}`;
+  // One trusted reverse proxy: the probe (e2e/probe) plays clients at other addresses with X-Forwarded-For.
   const app: ChildProcess = startNext(
-    { port, databaseUrl: db.url, databaseMode: db.mode, authSecret: "end-to-end-tests-only-secret-0123456789", baseUrl },
+    { port, databaseUrl: db.url, databaseMode: db.mode, authSecret: "end-to-end-tests-only-secret-0123456789", baseUrl, trustedProxies: 1 },
     { quiet: true },
   );
   let appErrors = "";

@@ -31,7 +31,8 @@ export const assetTagSchema = z
 
 /** For a cross-field rule: run it once the fields it reads parsed, whatever else is wrong. */
 function validFields(...fields: string[]) {
-  return (payload: { issues: ReadonlyArray<{ path?: PropertyKey[] }> }) => !payload.issues.some((issue) => fields.includes(String(issue.path?.[0])));
+  // An issue with no path is the value itself being of the wrong kind (null, a list): then no field is valid.
+  return (payload: { issues: ReadonlyArray<{ path?: PropertyKey[] }> }) => !payload.issues.some((issue) => !issue.path?.length || fields.includes(String(issue.path[0])));
 }
 
 const pressureUnitSchema = z.enum(PRESSURE_UNITS, { message: "Choose kPa or psi." });

@@ -13,7 +13,7 @@ export async function buildIfNeeded(log: (line: string) => void = console.log): 
   recordBuild(hash);
 }
 
-export type AppEnv = { port: number; databaseUrl: string; databaseMode: "embedded" | "external"; authSecret: string; baseUrl: string };
+export type AppEnv = { port: number; databaseUrl: string; databaseMode: "embedded" | "external"; authSecret: string; baseUrl: string; trustedProxies?: number };
 
 /**
  * Starts the production build behind the app's front door (scripts/app-server.mjs: client address, request
@@ -32,6 +32,7 @@ export function startNext(env: AppEnv, options: { quiet?: boolean } = {}): Child
       SEEPLINE_DATABASE_MODE: env.databaseMode,
       NEXTAUTH_SECRET: env.authSecret,
       NEXTAUTH_URL: env.baseUrl,
+      ...(env.trustedProxies !== undefined ? { SEEPLINE_TRUSTED_PROXIES: String(env.trustedProxies) } : {}),
     },
   });
 }

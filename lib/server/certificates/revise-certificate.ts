@@ -19,10 +19,10 @@ export async function reviseCertificate(options: { actor: CurrentUser; input: un
   requirePermission(options.actor, "certificate.issue");
   const input = parseOrThrow(reviseCertificateSchema, options.input);
   return withActor(options.actor, async (tx) => {
-    const revisions = await tx.certificateRevision.findMany({ where: { certificateId: input.certificateId }, orderBy: { revision: "desc" }, include: { results: true } });
+    const revisions = await tx.certificateRevision.findMany({ where: { certificateId: input.certificateId }, orderBy: { revision: "desc" }, include: { results: true, certificate: { select: { number: true } } } });
     const latest = revisions[0];
     if (!latest) throw new AppError("NOT_FOUND");
-    if (latest.status === "DRAFT") throw new AppError("ILLEGAL_TRANSITION", `Revision ${latest.revision} is still a draft: issue or change that one.`);
+    if (latest.status === "DRAFT") throw new AppError("ILLEGAL_TRANSITION", `${latest.certificate.number} revision ${latest.revision} is still a draft: issue or change that one.`);
     if (latest.status !== "ISSUED") throw new AppError("ILLEGAL_TRANSITION", `Revision ${latest.revision} is ${latest.status.toLowerCase()}; only the issued revision can be corrected.`);
     return tx.certificateRevision.create({
       data: {

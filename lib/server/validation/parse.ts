@@ -11,7 +11,14 @@ import { findUnstorableText, UNSTORABLE_TEXT_MESSAGE } from "@/lib/validation/un
 export function parseOrThrow<S extends z.ZodType>(schema: S, input: unknown): z.output<S> {
   const unstorable = findUnstorableText(input);
   if (unstorable !== null) throw new AppError("INVALID_INPUT", UNSTORABLE_TEXT_MESSAGE, { fieldErrors: { [unstorable]: UNSTORABLE_TEXT_MESSAGE } });
-  const result = schema.safeParse(input);
+  let result: z.ZodSafeParseResult<z.output<S>>;
+  try {
+    result = schema.safeParse(input);
+  } catch (error) {
+    // A schema's own rule broke on a value of the wrong kind: a defect to fix, but the person gets a sentence.
+    console.error("a validation rule failed on unexpected input", error);
+    throw new AppError("INVALID_INPUT", "The values sent could not be read; reload the page and try again.");
+  }
   if (result.success) return result.data;
   const fieldErrors: FieldErrors = {};
   for (const issue of result.error.issues) {
