@@ -13,15 +13,23 @@ import { recordFigure } from "./support/figures";
  */
 const APPEND_ONLY = ["AuditLog", "CustodyEvent", "Reading", "Review", "CalibrationOverride", "Result", "Signature", "CertificateResult"];
 
-const RIGHT_REASONS = /permission denied|must be owner|must be superuser|append-only|cannot be changed|cannot be deleted|only increase|issued certificate revision|insufficient privilege|not allowed/i;
+const RIGHT_REASONS = /permission denied|must be owner|must be superuser|append-only|cannot be changed|cannot be deleted|only increase|issued certificate revision|insufficient privilege|not allowed|no privileges were granted/i;
 
 type Attempt = { sql: string; allowed: boolean; message: string };
 
-async function attempt(client: pg.Client, sql: string, asOwner = false): Promise<Attempt> {
+/** `sql` as a statement, or with a query that tells whether it took effect (GRANT only warns when it cannot). */
+type Statement = string | { sql: string; tookEffect: string };
+
+async function attempt(client: pg.Client, statement: Statement, asOwner = false): Promise<Attempt> {
+  const sql = typeof statement === "string" ? statement : statement.sql;
   await client.query("BEGIN");
   try {
     if (asOwner) await client.query(`SET LOCAL ROLE ${OWNER_ROLE}`);
     await client.query(sql);
+    if (typeof statement !== "string") {
+      const effect = await client.query<{ yes: boolean }>(statement.tookEffect);
+      if (!effect.rows[0]?.yes) return { sql, allowed: false, message: "no privileges were granted (warning only)" };
+    }
     return { sql, allowed: true, message: "" };
   } catch (error) {
     return { sql, allowed: false, message: (error as Error).message };
@@ -46,7 +54,10 @@ describe.skipIf(!browserAvailable())("probe: the app's database role cannot swit
       expect(issued && issuedResult, "the demo has an issued certificate with a result").toBeTruthy();
 
       const statements = [
-        ...tables.flatMap((t) => [`TRUNCATE "${t}" CASCADE`, `ALTER TABLE "${t}" DISABLE TRIGGER ALL`, `DROP TABLE "${t}" CASCADE`, `GRANT ALL ON "${t}" TO PUBLIC`, `ALTER TABLE "${t}" OWNER TO CURRENT_USER`]),
+        ...tables.flatMap((t): Statement[] => [
+          `TRUNCATE "${t}" CASCADE`, `ALTER TABLE "${t}" DISABLE TRIGGER ALL`, `DROP TABLE "${t}" CASCADE`, `ALTER TABLE "${t}" OWNER TO CURRENT_USER`,
+          { sql: `GRANT ALL ON "${t}" TO PUBLIC`, tookEffect: `SELECT has_table_privilege('public', '"${t}"', 'TRUNCATE') AS yes` },
+        ]),
         ...APPEND_ONLY.flatMap((t) => [`UPDATE "${t}" SET "${firstColumn.get(t)}" = "${firstColumn.get(t)}"`, `DELETE FROM "${t}"`]),
         `INSERT INTO "AuditLog" ("tableName", "operation", "txId") VALUES ('Reading', 'DELETE', 1)`,
         `SET session_replication_role = replica`,
@@ -66,6 +77,7 @@ describe.skipIf(!browserAvailable())("probe: the app's database role cannot swit
         ...(embedded ? [] : [`SET ROLE ${OWNER_ROLE}`, `SET ROLE postgres`, `RESET ROLE; TRUNCATE "Reading"`]),
       ];
       const asApp: Attempt[] = [];
+      // typed: a mix of plain statements and ones whose effect is checked
       for (const sql of statements) asApp.push(await attempt(app, sql));
       const asOwner: Attempt[] = [];
       for (const t of audited) asOwner.push(await attempt(owner, `TRUNCATE "${t}" CASCADE`, true));

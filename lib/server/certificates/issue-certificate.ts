@@ -41,7 +41,7 @@ export async function issueCertificate(options: { actor: CurrentUser; input: unk
 
   return withActor(options.actor, async (tx) => {
     const revision = await tx.certificateRevision.findUniqueOrThrow({ where: { id: input.revisionId }, select: { status: true, supersedesId: true } });
-    if (revision.status !== "DRAFT") throw new AppError("CONFLICT", "Someone issued this revision a moment ago; reload the page.");
+    if (revision.status !== "DRAFT") throw new AppError("CONFLICT", `${snapshot.number} revision ${snapshot.revision} was issued by someone else a moment ago; reload the page.`);
     if (revision.supersedesId) {
       const previous = await tx.certificateRevision.updateMany({ where: { id: revision.supersedesId, status: "ISSUED" }, data: { status: "SUPERSEDED", supersededAt: now } });
       if (previous.count !== 1) throw new AppError("CONFLICT", "The revision this one corrects is no longer the issued one; reload the page.");
