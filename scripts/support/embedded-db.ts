@@ -28,7 +28,7 @@ export async function startEmbeddedDb(dataDir: string, options: { quiet?: boolea
  * Sets the role of the embedded database's one shared session (scripts/support/embedded-roles.ts): every
  * connection, present and future, then acts as that role.
  */
-export async function useEmbeddedRole(db: EmbeddedDb, role: typeof OWNER_ROLE | typeof APP_ROLE): Promise<void> {
+export async function setEmbeddedRole(db: EmbeddedDb, role: typeof OWNER_ROLE | typeof APP_ROLE): Promise<void> {
   const client = new pg.Client({ connectionString: db.url });
   await client.connect();
   try {
@@ -40,11 +40,11 @@ export async function useEmbeddedRole(db: EmbeddedDb, role: typeof OWNER_ROLE | 
 
 /** Applies the migrations as the migration owner, then hands the session back to the app role. */
 export async function migrateEmbeddedDb(db: EmbeddedDb): Promise<void> {
-  await useEmbeddedRole(db, OWNER_ROLE);
+  await setEmbeddedRole(db, OWNER_ROLE);
   try {
     await applyMigrations(db.url);
   } finally {
-    await useEmbeddedRole(db, APP_ROLE);
+    await setEmbeddedRole(db, APP_ROLE);
   }
 }
 
