@@ -8,7 +8,6 @@ export declare const BODY_LIMIT_BYTES: number;
 export declare function clientAddress(request: RequestLike, trustedProxies?: number): string;
 export declare function targetProblem(rawTarget: string | undefined): string | null;
 export declare function bodyProblem(request: RequestLike, limit?: number): { status: number; message: string } | null;
-export declare function baselineHeaders(https: boolean): Record<string, string>;
 export declare function frontDoor(
   handle: (request: IncomingMessage, response: ServerResponse) => Promise<void> | void,
   options: { https: boolean; trustedProxies: number; bodyLimit: number },

@@ -10,6 +10,7 @@
 import http from "node:http";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
+import { baselineSecurityHeaders } from "../lib/security/baseline-headers.mjs";
 
 export const CLIENT_ADDRESS_HEADER = "x-seepline-client-address";
 /** The most a request body may hold: Next.js's own limit for server actions. */
@@ -72,21 +73,9 @@ export function bodyProblem(request, limit = BODY_LIMIT_BYTES) {
   return null;
 }
 
-/** The security headers of every response (kept equal to lib/security/security-headers.ts by a unit test). */
-export function baselineHeaders(https) {
-  return {
-    "X-Content-Type-Options": "nosniff",
-    "Referrer-Policy": "same-origin",
-    "X-Frame-Options": "DENY",
-    "Cross-Origin-Opener-Policy": "same-origin",
-    "Content-Security-Policy": "frame-ancestors 'none'; base-uri 'none'; form-action 'none'",
-    ...(https ? { "Strict-Transport-Security": "max-age=31536000; includeSubDomains" } : {}),
-  };
-}
-
 /** The request listener: checks, headers and the client address, then Next.js's handler. */
 export function frontDoor(handle, options) {
-  const headers = baselineHeaders(options.https);
+  const headers = baselineSecurityHeaders(options.https);
   return (request, response) => {
     for (const [name, value] of Object.entries(headers)) response.setHeader(name, value);
     const problem = targetProblem(request.url);

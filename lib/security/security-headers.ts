@@ -5,19 +5,7 @@
  * scripts. No inline script runs without it; styles may be inline (React style attributes, the charts).
  */
 
-/** Headers for every response; HSTS only when the public address is HTTPS. */
-export function baselineSecurityHeaders(https: boolean): Record<string, string> {
-  return {
-    "X-Content-Type-Options": "nosniff",
-    "Referrer-Policy": "same-origin",
-    "X-Frame-Options": "DENY",
-    "Cross-Origin-Opener-Policy": "same-origin",
-    // Not a document (JSON, PDF, script, style): no framing, no base or form tricks. Object embedding is
-    // left alone, because Chromium shows a PDF through a plugin that `object-src 'none'` would block.
-    "Content-Security-Policy": "frame-ancestors 'none'; base-uri 'none'; form-action 'none'",
-    ...(https ? { "Strict-Transport-Security": "max-age=31536000; includeSubDomains" } : {}),
-  };
-}
+export { baselineSecurityHeaders } from "./baseline-headers.mjs";
 
 /** The Content-Security-Policy of a page: scripts only with the request's nonce (and what they load). */
 export function pageContentSecurityPolicy(nonce: string, https: boolean): string {
