@@ -74,7 +74,7 @@ describe.skipIf(!browserAvailable())("probe: hostile input against every server 
       ];
       await inParallel(bodies, async (body) => check(`${action.name} ${body.slice(0, 80)}`, await callAction(action.id, page, body, session)));
     }
-    recordFigure("6-fuzz-actions", { label: "fuzz: server actions", values: { actions: actions.length, inputs: tally.inputs - before } });
+    recordFigure("06-fuzz-actions", { label: "fuzz: server actions", values: { actions: actions.length, inputs: tally.inputs - before } });
   }, 900_000);
 
   it("pages and route handlers: hostile path segments and query strings", async () => {
@@ -89,7 +89,7 @@ describe.skipIf(!browserAvailable())("probe: hostile input against every server 
       if (route.params.length > 0) for (const segment of HOSTILE_SEGMENTS) requests.push({ path: route.pattern.replace(/\[\.\.\.[^\]]+\]/g, segment).replace(/\[[^\]]+\]/g, segment), session });
     }
     await inParallel(requests, async ({ path, session }) => check(`GET ${path.slice(0, 120)}`, await request(path, { session })));
-    recordFigure("7-fuzz-routes", { label: "fuzz: pages and route handlers", values: { routes: routes.length, inputs: tally.inputs - before } });
+    recordFigure("07-fuzz-routes", { label: "fuzz: pages and route handlers", values: { routes: routes.length, inputs: tally.inputs - before } });
   }, 900_000);
 
   it("the front door: a malformed address 400, a body over 1 MB 413, a body of unknown length 411, a change from another site 403, a redirect off the site refused", async () => {
@@ -122,7 +122,7 @@ describe.skipIf(!browserAvailable())("probe: hostile input against every server 
   });
 
   it("adds up to no server error for any input", () => {
-    recordFigure("8-fuzz", { label: "fuzz, all", values: { "inputs tried": tally.inputs, "server errors": tally.faults.length } });
+    recordFigure("08-fuzz", { label: "fuzz, all", values: { "inputs tried": tally.inputs, "server errors": tally.faults.length } });
     expect(tally.faults).toEqual([]);
   });
 });

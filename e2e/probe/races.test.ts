@@ -107,7 +107,7 @@ describe.skipIf(!browserAvailable())("probe: races between two people, decided b
   it("adds up to no race won twice", () => {
     const tried = Object.values(races).reduce((n, r) => n + r.tried, 0);
     const wonTwice = Object.values(races).reduce((n, r) => n + r.wonTwice, 0);
-    recordFigure("9-races", { label: "races (cell, specimen, result, issue, revise)", values: { "races tried": tried, "won twice": wonTwice, each: Object.entries(races).map(([k, r]) => `${k} ${r.tried}/${r.wonTwice}`).join(" ") } });
+    recordFigure("09-races", { label: "races (cell, specimen, result, issue, revise)", values: { "races tried": tried, "won twice": wonTwice, each: Object.entries(races).map(([k, r]) => `${k} ${r.tried}/${r.wonTwice}`).join(" ") } });
     expect(wonTwice).toBe(0);
   });
 });

@@ -71,7 +71,7 @@ describe.skipIf(!browserAvailable())("probe: every route and server action, for 
         judge(`GET ${path}`, who, expected, verdictOf(await request(path, { session: sessions.get(who) })));
       }
     }
-    recordFigure("1-pages", { label: "route x role checks (pages)", values: { pages: pages.length, checks: tally.checks - before } });
+    recordFigure("01-pages", { label: "route x role checks (pages)", values: { pages: pages.length, checks: tally.checks - before } });
   });
 
   it("route handlers: each answers each role as its permission (or its record rule) says", async () => {
@@ -87,7 +87,7 @@ describe.skipIf(!browserAvailable())("probe: every route and server action, for 
         judge(`GET ${path}${query}`, who, expected, verdictOf(await request(`${path}${query}`, { session: sessions.get(who) })));
       }
     }
-    recordFigure("2-handlers", { label: "route x role checks (route handlers)", values: { handlers: handlers.length, checks: tally.checks - before } });
+    recordFigure("02-handlers", { label: "route x role checks (route handlers)", values: { handlers: handlers.length, checks: tally.checks - before } });
   });
 
   it("server actions: every action in the build asks for a permission, and refuses every role the policy does not give it", async () => {
@@ -106,11 +106,11 @@ describe.skipIf(!browserAvailable())("probe: every route and server action, for 
         judge(`action ${action.name}`, who, who !== "anonymous" && can(who, action.permission as Action), verdict);
       }
     }
-    recordFigure("3-actions", { label: "action x role checks", values: { actions: actions.length, checks: tally.checks - before, "declared but not in the build": notExposed.length } });
+    recordFigure("03-actions", { label: "action x role checks", values: { actions: actions.length, checks: tally.checks - before, "declared but not in the build": notExposed.length } });
   });
 
   it("adds up to no unexpected allow, no unexpected refusal and no fault", () => {
-    recordFigure("4-matrix", {
+    recordFigure("04-matrix", {
       label: "route and action x role, all",
       values: { checks: tally.checks, "unexpected allows": tally.unexpectedAllows.length, "unexpected refusals": tally.unexpectedRefusals.length, "server errors": tally.faults.length },
     });
