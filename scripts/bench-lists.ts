@@ -74,7 +74,8 @@ async function main() {
   if (!process.env.DATABASE_URL) throw new Error("set DATABASE_URL to a local PostgreSQL server, e.g. postgresql://postgres@127.0.0.1:5432/postgres");
   const database = await createTestDatabase("bench");
   const keep = process.env.SEEPLINE_BENCH_KEEP_DB === "1";
-  const sql = new pg.Client({ connectionString: database.url });
+  // The bulk load ends with ANALYZE, which only the tables' owner may run; the timed queries use the app's role.
+  const sql = new pg.Client({ connectionString: database.ownerUrl });
   try {
     await sql.connect();
     const seedStart = performance.now();

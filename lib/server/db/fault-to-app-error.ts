@@ -9,6 +9,8 @@ import { databaseFault } from "./database-fault";
 export function faultToAppError(error: unknown): AppError | null {
   const fault = databaseFault(error);
   if (!fault) return null;
+  // Unexplained by the operation that met it: worth a line in the log, even though the person gets a sentence.
+  console.warn(`database refusal not explained by its operation: ${fault.code} ${fault.message}`);
   const code = fault.code;
   // Class 22 (data exception): a value PostgreSQL cannot store, such as a NUL character or a date out of range.
   if (code.startsWith("22")) return new AppError("INVALID_INPUT", "A value entered cannot be stored (a character or number out of range); check the fields and try again.");
