@@ -25,7 +25,11 @@ export async function createTestDatabase(label: string): Promise<TestDatabase> {
   const serverUrl = process.env.DATABASE_URL;
   if (!serverUrl) {
     const embedded = await startEmbeddedDb("memory://", { quiet: true });
-    await migrateEmbeddedDb(embedded);
+    // A failed migration must not leave the embedded server running behind the test run.
+    await migrateEmbeddedDb(embedded).catch(async (error: unknown) => {
+      await embedded.stop();
+      throw error;
+    });
     return { url: embedded.url, ownerUrl: embedded.url, mode: "embedded", drop: embedded.stop };
   }
 
