@@ -1,21 +1,11 @@
-import { execFileSync } from "node:child_process";
-import { mkdtempSync, writeFileSync } from "node:fs";
-import os from "node:os";
-import path from "node:path";
 import type { Browser, Page } from "puppeteer";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { fill } from "./support/forms";
+import { pdfText } from "./support/run-steps";
 import { baseUrl, browserAvailable, launchBrowser, pageSignedInAs, signInOverHttp, textOf } from "./support/session";
 
 async function cookieHeader(page: Page): Promise<string> {
   return (await page.browserContext().cookies()).map((c) => `${c.name}=${c.value}`).join("; ");
-}
-
-function pdfText(bytes: Buffer): string {
-  const dir = mkdtempSync(path.join(os.tmpdir(), "seepline-cert-"));
-  const file = path.join(dir, "certificate.pdf");
-  writeFileSync(file, bytes);
-  return execFileSync("pdftotext", ["-layout", file, "-"], { encoding: "utf8" });
 }
 
 async function reviewRun(qa: Page, runNumber: string, decision: "Approve" | "Return to technician", comments: string) {

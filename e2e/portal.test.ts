@@ -12,6 +12,7 @@ const cookieFor = async (email: string) => (await signInOverHttp(email)).map((c)
 describe.skipIf(!browserAvailable())("client portal (headless Chromium)", () => {
   let browser: Browser;
   let certificateNumber = "";
+  let revisionOneStatus = "";
   let shipmentNumber = "";
   beforeAll(async () => {
     browser = await launchBrowser();
@@ -39,6 +40,8 @@ describe.skipIf(!browserAvailable())("client portal (headless Chromium)", () => 
     const certificates = await textOf(page, '[data-testid="portal-certificates"]');
     certificateNumber = /Q\d{2}-\d{5}/.exec(certificates)?.[0] ?? "";
     expect(certificateNumber).not.toBe("");
+    // Another journey may have revised this certificate since; revision 1 is then superseded.
+    revisionOneStatus = await page.$eval(`tbody[data-certificate="${certificateNumber}"] tr[data-revision="1"]`, (tr) => tr.getAttribute("data-status") ?? "");
     const shipments = await textOf(page, '[data-testid="portal-shipments"]');
     shipmentNumber = /S\d{2}-\d{5}/.exec(shipments)?.[0] ?? "";
     expect(shipments).toMatch(/Receipt \(PDF\)/);
@@ -57,7 +60,8 @@ describe.skipIf(!browserAvailable())("client portal (headless Chromium)", () => 
     const response = await fetch(`${baseUrl()}/api/certificates/${certificateNumber}/pdf?revision=1`, { headers: { cookie: await cookieFor(CLIENT_A) } });
     if (response.status === 200) {
       expect(response.headers.get("content-type")).toBe("application/pdf");
-      expect(response.headers.get("content-disposition")).toBe(`attachment; filename="${certificateNumber}-rev1.pdf"`);
+      const suffix = { ISSUED: "", SUPERSEDED: "-superseded" }[revisionOneStatus];
+      expect(response.headers.get("content-disposition")).toBe(`attachment; filename="${certificateNumber}-rev1${suffix}.pdf"`);
     } else {
       // The demo's seeded revision was issued without a stored PDF.
       expect(response.status).toBe(404);

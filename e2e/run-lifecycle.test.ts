@@ -1,19 +1,11 @@
 import path from "node:path";
-import type { Browser, ElementHandle, Page } from "puppeteer";
-import { chooseByName, fill, localDateTime, setValue } from "./support/forms";
+import type { Browser, ElementHandle } from "puppeteer";
+import { chooseByName, fill } from "./support/forms";
+import { recordStage } from "./support/run-steps";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { baseUrl, browserAvailable, launchBrowser, pageSignedInAs, textOf } from "./support/session";
 
 const FIXTURE = path.resolve(import.meta.dirname, "fixtures", "readings-d5887.csv");
-
-async function recordStage(page: Page, kind: string, pressures: [string, string, string], startedAt: Date) {
-  await chooseByName(page, "kind", kind);
-  await fill(page, "Cell pressure (kPa)", pressures[0]);
-  await fill(page, "Influent pressure (kPa)", pressures[1]);
-  await fill(page, "Effluent pressure (kPa)", pressures[2]);
-  await setValue(page, "Started at", localDateTime(startedAt));
-  await page.click("button::-p-text(Record stage)");
-}
 
 const DAY = 86_400_000;
 
@@ -48,16 +40,17 @@ describe.skipIf(!browserAvailable())("a run from cell assignment to submission (
 
     // --- Saturation with too small a confining margin: warned, then acknowledged.
     const now = Date.now();
-    await recordStage(tech, "Saturation", ["330", "310", "310"], new Date(now - 6 * DAY));
+    await recordStage(tech, "Saturation", ["330", "310", "310"], new Date(now - 7 * DAY));
     await tech.waitForSelector('[data-testid="margin-warning"]');
     expect(await textOf(tech, '[data-testid="margin-warning"]')).toMatch(/by 20\.0 kPa, less than the 35 kPa confining margin/);
     await (await tech.waitForSelector('[data-testid="margin-warning"] input[type="checkbox"]'))!.click();
     await tech.click("button::-p-text(Record stage)");
-    await tech.waitForFunction(() => document.querySelector('[data-testid="stages"]')?.textContent?.includes("margin warning acknowledged"));
+    await tech.waitForFunction(() => document.querySelector('[data-testid="stages"]')?.textContent?.includes("departure acknowledged"));
 
-    await recordStage(tech, "Equilibration", ["552", "517", "517"], new Date(now - 5 * DAY));
+    await recordStage(tech, "Equilibration", ["552", "517", "517"], new Date(now - 6 * DAY));
     await tech.waitForFunction(() => (document.querySelector('[data-testid="stages"]')?.querySelectorAll("tbody tr").length ?? 0) === 2);
-    await recordStage(tech, "Permeation", ["566", "531", "517"], new Date(now - 4 * DAY));
+    // The method's permeation pressures (D5887 common practice) after a two-day hold: no departure to acknowledge.
+    await recordStage(tech, "Permeation", ["552", "531", "517"], new Date(now - 4 * DAY));
     await tech.waitForSelector('[data-testid="csv-import"]', { timeout: 30_000 }).catch(async (error) => {
       await tech.screenshot({ path: "tmp/e2e-run-lifecycle-failure.png", fullPage: true });
       throw error;

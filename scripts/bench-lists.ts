@@ -9,6 +9,7 @@ import pg from "pg";
 import type { CurrentUser } from "../lib/server/auth/current-user";
 import { parseListQuery, type ListKind } from "../lib/validation/list-query";
 import { createTestDatabase } from "../tests/support/test-database";
+import { median } from "./support/median";
 
 const ROLLS = 100_000;
 const SHIPMENTS = 5_000;
@@ -67,8 +68,6 @@ ANALYZE;
 `;
 
 type Case = { kind: ListKind; name: string; params: Record<string, string> };
-
-const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)] as number;
 
 async function main() {
   if (!process.env.DATABASE_URL) throw new Error("set DATABASE_URL to a local PostgreSQL server, e.g. postgresql://postgres@127.0.0.1:5432/postgres");

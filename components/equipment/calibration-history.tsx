@@ -1,5 +1,7 @@
 import { formatDate, formatDateTime } from "@/lib/format/dates";
-import { m2ToMm2, readBuretteAreasM2, type EquipmentKind } from "@/lib/validation/equipment";
+import { readBurettePanel, readCalibrationValues, readLeakageCheck, UNCERTAINTY_BY_KIND } from "@/lib/equipment/calibration-values";
+import { formatNumber } from "@/lib/results/format-result";
+import type { EquipmentKind } from "@/lib/validation/equipment";
 import styles from "./equipment.module.css";
 
 type CalibrationRow = {
@@ -7,8 +9,21 @@ type CalibrationRow = {
   createdAt: Date; recordedBy: { name: string };
 };
 
-/** mm² with up to three decimals and no trailing zeros: 31.4, 78.54. */
-const mm2 = (m2: number) => `${Number(m2ToMm2(m2).toFixed(3))} mm²`;
+const mm = (v: number, unit = "mm") => `${Number(v.toFixed(3))} ${unit}`;
+
+/** What else the calibration records: burette zeros and range, standard uncertainty, leakage check. */
+function extras(kind: EquipmentKind, values: unknown): string {
+  const v = readCalibrationValues(values);
+  const parts: string[] = [];
+  const panel = readBurettePanel(values);
+  if (panel && (v.inflowZeroAboveDatumMm !== undefined || v.outflowZeroAboveDatumMm !== undefined)) parts.push(`zeros above datum ${mm(panel.inflowZeroAboveDatumMm)} / ${mm(panel.outflowZeroAboveDatumMm)}`);
+  if (panel?.scaleRangeMm) parts.push(`scale ${mm(panel.scaleRangeMm.min)} to ${mm(panel.scaleRangeMm.max)}`);
+  const u = UNCERTAINTY_BY_KIND[kind];
+  if (u && v.standardUncertainty !== undefined) parts.push(`u = ${v.standardUncertainty} ${u.unit}`);
+  const leak = readLeakageCheck(values);
+  if (leak) parts.push(`leakage ${leak.rateM3PerS !== undefined ? `${formatNumber(leak.rateM3PerS)} m³/s` : `${formatNumber(leak.fluxM3PerM2PerS!)} m³/m²/s`} (${leak.checkedAt.slice(0, 10)}, ${leak.method})`);
+  return parts.join("; ");
+}
 
 /** Every calibration of one instrument, latest first; a burette panel's rows show the calibrated areas. */
 export function CalibrationHistory({ kind, calibrations }: { kind: EquipmentKind; calibrations: CalibrationRow[] }) {
@@ -21,12 +36,13 @@ export function CalibrationHistory({ kind, calibrations }: { kind: EquipmentKind
           <tr>
             <th>Calibrated</th><th>Due</th><th>Reference</th><th>Performed by</th><th>Result</th>
             {burettes && <><th>Inflow burette</th><th>Outflow burette</th></>}
+            <th>Also recorded</th>
             <th>Recorded</th>
           </tr>
         </thead>
         <tbody>
           {calibrations.map((c, index) => {
-            const areas = readBuretteAreasM2(c.values);
+            const panel = readBurettePanel(c.values);
             return (
               <tr key={c.id}>
                 <td className={styles.nowrap}>{formatDate(c.calibratedAt)}{index === 0 && <span className="muted"> (latest)</span>}</td>
@@ -34,7 +50,8 @@ export function CalibrationHistory({ kind, calibrations }: { kind: EquipmentKind
                 <td className="mono">{c.reference}</td>
                 <td>{c.performedBy}</td>
                 <td>{c.passed ? <span className="state state-ok">passed</span> : <span className="state state-bad">failed</span>}</td>
-                {burettes && <><td className={styles.nowrap}>{areas ? mm2(areas.inflowBuretteAreaM2) : "—"}</td><td className={styles.nowrap}>{areas ? mm2(areas.outflowBuretteAreaM2) : "—"}</td></>}
+                {burettes && <><td className={styles.nowrap}>{panel ? mm(panel.inflowAreaMm2, "mm²") : "—"}</td><td className={styles.nowrap}>{panel ? mm(panel.outflowAreaMm2, "mm²") : "—"}</td></>}
+                <td>{extras(kind, c.values) || "—"}</td>
                 <td className="muted">{c.recordedBy.name}, {formatDateTime(c.createdAt)}</td>
               </tr>
             );

@@ -1,8 +1,8 @@
 import Link from "next/link";
 import { Fragment } from "react";
+import { labNumberAddress } from "@/lib/numbering/lab-number-address";
 
 const LAB_NUMBER = /\b([SRCPTQ]\d{2}-\d{5,})\b/g;
-const ADDRESS: Record<string, string> = { S: "/intake/shipments/", R: "/samples/rolls/", C: "/samples/coupons/", P: "/samples/specimens/", T: "/runs/", Q: "/certificates/" };
 
 /** Text in which every lab number becomes a link to its item, e.g. in "already logged as R26-00012". */
 export function LabNumberLinks({ text }: { text: string }) {
@@ -10,7 +10,7 @@ export function LabNumberLinks({ text }: { text: string }) {
   return (
     <>
       {parts.map((part, i) =>
-        i % 2 === 1 ? <Link key={i} href={`${ADDRESS[part[0]!]}${part}`} className="mono">{part}</Link> : <Fragment key={i}>{part}</Fragment>,
+        i % 2 === 1 ? <Link key={i} href={labNumberAddress(part)!} className="mono">{part}</Link> : <Fragment key={i}>{part}</Fragment>,
       )}
     </>
   );

@@ -1,28 +1,46 @@
+import { revisionStanding } from "@/lib/certificates/revision-standing";
 import { formatDate } from "@/lib/format/dates";
 import type { PortalCertificate, PortalCertificateRevision } from "@/lib/server/portal/list-portal-certificates";
 import styles from "./portal.module.css";
 
+const TONE = { ok: "state-ok", warn: "state-warn", bad: "state-bad" } as const;
+
+// When a revision stopped standing; the portal never lists drafts.
+const sinceOf = (r: PortalCertificateRevision) => (r.status === "REVOKED" ? r.revokedAt : r.status === "SUPERSEDED" ? r.supersededAt : null);
+const standingOf = (r: PortalCertificateRevision) =>
+  revisionStanding({ status: r.status === "DRAFT" ? "ISSUED" : r.status, supersededByRevision: r.supersededByRevision, since: sinceOf(r) });
+
 function RevisionStatus({ revision }: { revision: PortalCertificateRevision }) {
-  if (revision.status === "SUPERSEDED")
-    return (
-      <>
-        <span className="state state-warn">{revision.supersededByRevision ? `Superseded by revision ${revision.supersededByRevision}` : "Superseded"}</span>
-        {revision.supersededAt && <div className={`muted ${styles.nowrap}`}>since {formatDate(revision.supersededAt)}</div>}
-      </>
-    );
-  if (revision.status === "REVOKED")
-    return (
-      <>
-        <span className="state state-bad">Revoked</span>
-        {revision.revokedAt && <div className={`muted ${styles.nowrap}`}>since {formatDate(revision.revokedAt)}</div>}
-      </>
-    );
-  return <span className="state state-ok">Issued, valid</span>;
+  const standing = standingOf(revision);
+  const since = sinceOf(revision);
+  return (
+    <>
+      <span className={`state ${TONE[standing.tone]}`} title={`${standing.headline} ${standing.detail}`}>{standing.label}</span>
+      {since && <div className={`muted ${styles.nowrap}`}>since {formatDate(since)}</div>}
+    </>
+  );
+}
+
+/** The PDF cell: a download while the revision may circulate (a superseded one says so), never for a revoked one. */
+function Download({ number, revision }: { number: string; revision: PortalCertificateRevision }) {
+  if (!standingOf(revision).clientMayDownload) return <span className="muted" data-testid="pdf-withdrawn">withdrawn; not offered</span>;
+  if (!revision.hasPdf) return <span className="muted" title="Ask the laboratory for a copy.">not stored yet</span>;
+  const superseded = revision.status === "SUPERSEDED";
+  return (
+    <a
+      href={`/api/certificates/${encodeURIComponent(number)}/pdf?revision=${revision.revision}`}
+      download
+      aria-label={`Download the PDF of ${number} revision ${revision.revision}${superseded ? ", superseded" : ""}`}
+    >
+      {superseded ? "Download (superseded)" : "Download"}
+    </a>
+  );
 }
 
 /**
  * Certificates with every issued revision: status (superseded ones say by which revision), issue date,
- * verification code and the PDF download. `showProject` adds the project column for the all-projects list.
+ * verification code and the PDF download (none for a revoked revision). `showProject` adds the project
+ * column for the all-projects list.
  */
 export function CertificateTable({ certificates, showProject = false }: { certificates: PortalCertificate[]; showProject?: boolean }) {
   return (
@@ -52,19 +70,7 @@ export function CertificateTable({ certificates, showProject = false }: { certif
                 </td>
                 <td className={styles.nowrap}>{formatDate(revision.issuedAt)}</td>
                 <td><a className="mono" href={`/verify/${encodeURIComponent(revision.verificationCode)}`}>{revision.verificationCode}</a></td>
-                <td>
-                  {revision.hasPdf ? (
-                    <a
-                      href={`/api/certificates/${encodeURIComponent(certificate.number)}/pdf?revision=${revision.revision}`}
-                      download
-                      aria-label={`Download the PDF of ${certificate.number} revision ${revision.revision}`}
-                    >
-                      Download
-                    </a>
-                  ) : (
-                    <span className="muted" title="Ask the laboratory for a copy.">not stored yet</span>
-                  )}
-                </td>
+                <td><Download number={certificate.number} revision={revision} /></td>
               </tr>
             ))}
           </tbody>

@@ -9,8 +9,8 @@ import { correctReadingAction } from "@/app/(staff)/runs/[labNumber]/readings-ac
 import { applyServerErrors } from "@/components/ui/apply-server-errors";
 import { Field } from "@/components/ui/field";
 import type { PressureUnit } from "@/lib/units/pressure-entry";
-import { correctReadingSchema, type ReadingEntryInput } from "@/lib/validation/readings";
-import { entryColumns } from "./entry-columns";
+import { correctReadingSchema } from "@/lib/validation/readings";
+import { entryColumns, type EntryRow } from "./entry-columns";
 import styles from "./readings.module.css";
 
 type FormInput = z.input<typeof correctReadingSchema>;
@@ -22,7 +22,7 @@ export type CorrectReadingFormProps = {
   pressureUnit: PressureUnit;
   withChemistry: boolean;
   /** The saved values as input text in the person's unit (takenAt as a datetime-local value with seconds). */
-  values: Record<keyof ReadingEntryInput, string>;
+  values: EntryRow;
 };
 
 /** "Correct…": the saved values to change, and the reason; saves a new reading, the original stays in its history. */
@@ -53,7 +53,7 @@ export function CorrectReadingForm({ readingId, sequence, pressureUnit, withChem
       <div className={styles.correctForm}>
         {entryColumns(pressureUnit, withChemistry).map((c) => (
           <Field key={c.key} label={c.title} error={errors?.[c.key]?.message}>
-            <input {...register(`values.${c.key}` as Path<FormInput>)} type={c.kind === "time" ? "datetime-local" : "text"} step={c.kind === "time" ? 1 : undefined} inputMode={c.kind === "number" ? "decimal" : undefined} />
+            <input {...register(`values.${c.key}` as Path<FormInput>)} type={c.kind === "time" ? "datetime-local" : c.kind === "check" ? "checkbox" : "text"} step={c.kind === "time" ? 1 : undefined} inputMode={c.kind === "number" ? "decimal" : undefined} />
           </Field>
         ))}
         <div className={styles.wide}>

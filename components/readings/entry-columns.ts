@@ -3,9 +3,12 @@ import { PRESSURE_UNIT_SYMBOLS, type PressureUnit } from "@/lib/units/pressure-e
 
 export type EntryKey =
   | "takenAt" | "inflowLevelMm" | "outflowLevelMm" | "influentPressure" | "effluentPressure" | "cellPressure" | "temperatureC"
-  | "influentEcMsPerM" | "effluentEcMsPerM" | "influentPh" | "effluentPh";
+  | "influentEcMsPerM" | "effluentEcMsPerM" | "influentPh" | "effluentPh" | "afterRefill";
 
-export type EntryColumn = { key: EntryKey; title: string; kind: "time" | "number" };
+export type EntryColumn = { key: EntryKey; title: string; kind: "time" | "number" | "check" };
+
+/** The text values of a grid row, and the refill mark as a checkbox's boolean. */
+export type EntryRow = Record<Exclude<EntryKey, "afterRefill">, string> & { afterRefill: boolean };
 
 export function entryColumns(unit: PressureUnit, withChemistry: boolean): EntryColumn[] {
   const p = PRESSURE_UNIT_SYMBOLS[unit];
@@ -25,5 +28,7 @@ export function entryColumns(unit: PressureUnit, withChemistry: boolean): EntryC
       { key: "influentPh", title: "pH in", kind: "number" },
       { key: "effluentPh", title: "pH out", kind: "number" },
     );
+  // Last, so that Enter runs through the numbers first; ticked on the reading taken just after a refill or drain.
+  columns.push({ key: "afterRefill", title: "After refill", kind: "check" });
   return columns;
 }

@@ -9,13 +9,13 @@ import { recordReadingsAction } from "@/app/(staff)/runs/[labNumber]/readings-ac
 import { applyServerErrors } from "@/components/ui/apply-server-errors";
 import { nowForDateTimeInput } from "@/components/ui/now-for-input";
 import type { PressureUnit } from "@/lib/units/pressure-entry";
-import { recordReadingsSchema, type ReadingEntryInput } from "@/lib/validation/readings";
-import { entryColumns } from "./entry-columns";
+import { recordReadingsSchema } from "@/lib/validation/readings";
+import { entryColumns, type EntryRow } from "./entry-columns";
 import styles from "./readings.module.css";
 
 type FormInput = z.input<typeof recordReadingsSchema>;
 type FormOutput = z.output<typeof recordReadingsSchema>;
-type Row = Record<keyof ReadingEntryInput, string>;
+type Row = EntryRow;
 
 export type ReadingsGridProps = {
   runId: string;
@@ -29,13 +29,15 @@ export type ReadingsGridProps = {
 const blankRow = (from: Partial<Row>): Row => ({
   takenAt: nowForDateTimeInput(), inflowLevelMm: "", outflowLevelMm: "",
   influentPressure: from.influentPressure ?? "", effluentPressure: from.effluentPressure ?? "", cellPressure: from.cellPressure ?? "", temperatureC: from.temperatureC ?? "",
-  influentEcMsPerM: "", effluentEcMsPerM: "", influentPh: from.influentPh ?? "", effluentPh: "",
+  influentEcMsPerM: "", effluentEcMsPerM: "", influentPh: from.influentPh ?? "", effluentPh: "", afterRefill: false,
 });
 
 /**
  * The keyboard-fast entry grid: Tab or Enter moves to the next cell, Shift+Enter back, Enter on the last
- * cell adds a row (pressures and temperature carried over), Ctrl+Enter saves. Rows are checked with the
- * shared schema before sending; the server adds the checks across rows, and saves all rows or none.
+ * cell adds a row (pressures and temperature carried over), Ctrl+Enter saves. "After refill" marks the
+ * reading taken just after a refill or drain (the row before holds the levels just before it). Rows are
+ * checked with the shared schema before sending; the server adds the checks across rows, and saves all
+ * rows or none.
  */
 export function ReadingsGrid({ runId, pressureUnit, withChemistry, carryOver }: ReadingsGridProps) {
   const router = useRouter();
@@ -110,7 +112,7 @@ export function ReadingsGrid({ runId, pressureUnit, withChemistry, carryOver }: 
                     <td key={c.key}>
                       <input
                         {...register(`readings.${index}.${c.key}` as Path<FormInput>)}
-                        type={c.kind === "time" ? "datetime-local" : "text"}
+                        type={c.kind === "time" ? "datetime-local" : c.kind === "check" ? "checkbox" : "text"}
                         inputMode={c.kind === "number" ? "decimal" : undefined}
                         aria-label={`Row ${index + 1} ${c.title}`}
                         aria-invalid={errors?.[c.key] ? true : undefined}

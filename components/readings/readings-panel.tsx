@@ -23,6 +23,7 @@ const entryValues = (r: RunReadingView, unit: PressureUnit) => ({
   effluentEcMsPerM: r.effluentEcMsPerM === null ? "" : String(r.effluentEcMsPerM),
   influentPh: r.influentPh === null ? "" : String(r.influentPh),
   effluentPh: r.effluentPh === null ? "" : String(r.effluentPh),
+  afterRefill: r.afterRefill,
 });
 
 function versionText(v: RunReadingView, unit: PressureUnit, chemistry: boolean): string {
@@ -72,7 +73,7 @@ export async function ReadingsPanel({ runId, actor }: ReadingsPanelProps) {
                 const earlier = (versions.get(r.sequence) ?? []).filter((v) => v.id !== r.id);
                 const rowsOut = [
                   <tr key={r.id} data-sequence={r.sequence}>
-                    <td>{r.sequence}{r.corrected && <span className={`state state-warn ${styles.correctedTag}`} data-testid="reading-corrected">corrected</span>}</td>
+                    <td>{r.sequence}{r.corrected && <span className={`state state-warn ${styles.correctedTag}`} data-testid="reading-corrected">corrected</span>}{r.afterRefill && <span className={`state ${styles.correctedTag}`} data-testid="reading-after-refill" title="Taken just after a refill or drain: no interval ends here">after refill</span>}</td>
                     <td className="mono">{formatDateTime(r.takenAt)}</td>
                     <td className={styles.num}>{elapsedHours(r.elapsedS)}</td>
                     <td className={styles.num}>{fixed(r.inflowLevelMm, 1)}</td>

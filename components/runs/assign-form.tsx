@@ -25,7 +25,7 @@ export function AssignForm({ specimens, instruments, pressureUnit, preselectedSp
   const first = specimens.find((s) => s.id === preselectedSpecimenId) ?? specimens[0];
   const form = useForm<z.input<typeof assignSpecimenSchema>, unknown, z.output<typeof assignSpecimenSchema>>({
     resolver: zodResolver(assignSpecimenSchema),
-    defaultValues: { specimenId: first?.id ?? "", cellId: "", burettePanelId: "", transducerId: "", thermometerId: "", methodCode: (first?.intendedMethodCode as "D5887") ?? "D5887", pressureUnit, effectiveStress: "" },
+    defaultValues: { specimenId: first?.id ?? "", cellId: "", burettePanelId: "", transducerId: "", thermometerId: "", thicknessGaugeId: "", timerId: "", methodCode: (first?.intendedMethodCode as "D5887") ?? "D5887", pressureUnit, effectiveStress: "" },
   });
   const { register, handleSubmit, formState, control } = form;
   const method = useWatch({ control, name: "methodCode" });
@@ -60,6 +60,12 @@ export function AssignForm({ specimens, instruments, pressureUnit, preselectedSp
       </Field>
       <Field label="Thermometer" hint="Optional." error={formState.errors.thermometerId?.message}>
         <select {...register("thermometerId")}><option value="">None</option>{of("THERMOMETER").map((i) => <option key={i.id} value={i.id}>{optionLabel(i)}</option>)}</select>
+      </Field>
+      <Field label="Thickness gauge" hint="Optional; for the post-test thickness. Its calibration gives that uncertainty." error={formState.errors.thicknessGaugeId?.message}>
+        <select {...register("thicknessGaugeId")}><option value="">None</option>{of("THICKNESS_GAUGE").map((i) => <option key={i.id} value={i.id}>{optionLabel(i)}</option>)}</select>
+      </Field>
+      <Field label="Timer or logger clock" hint="Optional. Its calibration gives the uncertainty of the time stamps." error={formState.errors.timerId?.message}>
+        <select {...register("timerId")}><option value="">None</option>{of("TIMER").map((i) => <option key={i.id} value={i.id}>{optionLabel(i)}</option>)}</select>
       </Field>
       <Field label={`Effective stress (${unit})`} hint="Optional; as the project specification sets it." error={formState.errors.effectiveStress?.message}><input inputMode="decimal" {...register("effectiveStress")} /></Field>
       {method === "D6766" && (

@@ -1,7 +1,7 @@
 import { formatDateTime } from "@/lib/format/dates";
 import { formatPressure } from "@/lib/units/pressure-entry";
 
-type Stage = { id: string; sequence: number; kind: string; cellPressurePa: number; influentPressurePa: number; effluentPressurePa: number; startedAt: Date; endedAt: Date | null; marginAcknowledged: boolean; recordedBy: { name: string } };
+type Stage = { id: string; sequence: number; kind: string; cellPressurePa: number; influentPressurePa: number; effluentPressurePa: number; startedAt: Date; endedAt: Date | null; marginAcknowledged: boolean; departureNote?: string | null; recordedBy: { name: string } };
 const KIND: Record<string, string> = { SATURATION: "Saturation", BACK_PRESSURE: "Back-pressure", EQUILIBRATION: "Equilibration", PERMEATION: "Permeation" };
 
 export function RunStagesTable({ stages, pressureUnit }: { stages: Stage[]; pressureUnit: "KPA" | "PSI" }) {
@@ -14,7 +14,7 @@ export function RunStagesTable({ stages, pressureUnit }: { stages: Stage[]; pres
           {stages.map((s) => (
             <tr key={s.id}>
               <td>{s.sequence}</td>
-              <td>{KIND[s.kind] ?? s.kind}{s.marginAcknowledged && <div className="state state-warn">margin warning acknowledged</div>}</td>
+              <td>{KIND[s.kind] ?? s.kind}{s.marginAcknowledged && <div className="state state-warn" title={s.departureNote ?? undefined}>departure acknowledged</div>}</td>
               <td>{formatPressure(s.cellPressurePa, pressureUnit)}</td><td>{formatPressure(s.influentPressurePa, pressureUnit)}</td><td>{formatPressure(s.effluentPressurePa, pressureUnit)}</td>
               <td>{formatDateTime(s.startedAt)}</td><td>{s.endedAt ? formatDateTime(s.endedAt) : "running"}</td><td>{s.recordedBy.name}</td>
             </tr>

@@ -14,7 +14,10 @@ import { nowForDateTimeInput } from "@/components/ui/now-for-input";
 type Kind = "SATURATION" | "BACK_PRESSURE" | "EQUILIBRATION" | "PERMEATION";
 const KIND_LABELS: Record<Kind, string> = { SATURATION: "Saturation", BACK_PRESSURE: "Back-pressure step", EQUILIBRATION: "Equilibration hold", PERMEATION: "Permeation" };
 
-/** Records a stage's three pressures; a broken confining margin shows its warning and needs an explicit tick. */
+/**
+ * Records a stage's three pressures; a departure from the method (confining margin before permeation, the
+ * prescribed permeation pressures, a short equilibration) shows its warning and needs an explicit tick.
+ */
 export function StageForm({ runId, version, kinds, pressureUnit }: { runId: string; version: number; kinds: Kind[]; pressureUnit: "KPA" | "PSI" }) {
   const router = useRouter();
   const [warning, setWarning] = useState<string | null>(null);
@@ -29,7 +32,7 @@ export function StageForm({ runId, version, kinds, pressureUnit }: { runId: stri
     const result = await recordStageAction(values);
     if (result.ok) {
       setWarning(null);
-      setNotice({ ok: true, text: result.data.marginWarning ? `Stage recorded with the margin warning acknowledged.` : "Stage recorded." });
+      setNotice({ ok: true, text: result.data.marginWarning ? "Stage recorded with the departure acknowledged; it will be listed as a deviation." : "Stage recorded." });
       router.refresh();
       return;
     }
@@ -49,7 +52,7 @@ export function StageForm({ runId, version, kinds, pressureUnit }: { runId: stri
       <Field label="Started at" error={formState.errors.startedAt?.message}><input type="datetime-local" {...register("startedAt")} /></Field>
       {warning && (
         <div className="notice notice-caution" role="alert" data-testid="margin-warning">
-          <p><strong>Confining margin not kept.</strong> {warning}</p>
+          <p><strong>Departure from the method&apos;s pressures.</strong> {warning}</p>
           <label><input type="checkbox" {...register("acknowledgeMargin")} /> I have read this warning; the lab&apos;s procedure allows this stage.</label>
         </div>
       )}

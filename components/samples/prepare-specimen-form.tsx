@@ -22,7 +22,7 @@ export function PrepareSpecimenForm({ couponId, locations }: { couponId: string;
   const [notice, setNotice] = useState<{ ok: boolean; text: string } | null>(null);
   const form = useForm<Input>({
     defaultValues: {
-      couponId, dieDiameterMm: "100", initialThicknessMm: "", initialMassG: "", moistureContentPct: "", intendedMethodCode: "D5887",
+      couponId, dieDiameterMm: "100", initialThicknessMm: "", initialMassG: "", moistureContentPct: "", bentoniteDryMassG: "", bentoniteMassPerAreaKgPerM2: "", specificGravity: "", intendedMethodCode: "D5887",
       preparedAt: nowForDateTimeInput(), storageLocationId: locations[0]?.id ?? "", answers: {},
     },
     // The checklist is kept as yes/no radio answers in the form and turned into booleans for the schema.
@@ -45,7 +45,7 @@ export function PrepareSpecimenForm({ couponId, locations }: { couponId: string;
     const result = await prepareSpecimenAction({ ...rest, checklist });
     setNotice({ ok: result.ok, text: result.ok ? `Specimen ${result.data.labNumber} recorded.` : result.message });
     if (result.ok) {
-      form.reset({ ...values, initialThicknessMm: "", initialMassG: "", moistureContentPct: "", answers: {} });
+      form.reset({ ...values, initialThicknessMm: "", initialMassG: "", moistureContentPct: "", bentoniteDryMassG: "", bentoniteMassPerAreaKgPerM2: "", answers: {} });
       router.refresh();
     } else applyServerErrors(form as never, result.fieldErrors);
   });
@@ -61,6 +61,12 @@ export function PrepareSpecimenForm({ couponId, locations }: { couponId: string;
       <Field label="Initial thickness (mm)" error={formState.errors.initialThicknessMm?.message}><input inputMode="decimal" {...register("initialThicknessMm")} /></Field>
       <Field label="Initial mass (g)" error={formState.errors.initialMassG?.message}><input inputMode="decimal" {...register("initialMassG")} /></Field>
       <Field label="Moisture content (%)" hint="Optional." error={formState.errors.moistureContentPct?.message}><input inputMode="decimal" {...register("moistureContentPct")} /></Field>
+      <fieldset className="stack">
+        <legend><strong>For pore volumes of flow</strong> <span className="muted">({method === "D6766" ? "ASTM D6766 needs one of the first two" : "optional"})</span></legend>
+        <Field label="Dry bentonite mass (g)" hint="Of this specimen, oven-dry." error={formState.errors.bentoniteDryMassG?.message}><input inputMode="decimal" {...register("bentoniteDryMassG")} /></Field>
+        <Field label="Bentonite mass per unit area (kg/m²)" hint="At the moisture content above; made dry with it." error={formState.errors.bentoniteMassPerAreaKgPerM2?.message}><input inputMode="decimal" {...register("bentoniteMassPerAreaKgPerM2")} /></Field>
+        <Field label="Specific gravity of the solids" hint="Optional; blank takes the method settings' value (2.75 by default, from memory)." error={formState.errors.specificGravity?.message}><input inputMode="decimal" {...register("specificGravity")} /></Field>
+      </fieldset>
       <Field label="Prepared at" error={formState.errors.preparedAt?.message}><input type="datetime-local" {...register("preparedAt")} /></Field>
       <Field label="Kept at" error={formState.errors.storageLocationId?.message}>
         <select {...register("storageLocationId")}>{locations.map((l) => <option key={l.id} value={l.id}>{l.code} · {l.name}</option>)}</select>

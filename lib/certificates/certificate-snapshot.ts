@@ -13,6 +13,10 @@ export type ConformanceSummary = {
   conforms: boolean;
   /** One sentence, e.g. "5.4e-11 m/s, rounded to 5e-11, does not exceed the maximum of 5e-11 m/s: conforms." */
   statement: string;
+  /** The result as measured, in the limit's unit (snapshots from before it was kept lack it). */
+  measuredValue?: string;
+  /** The rule in words a client reads correctly, notably when rounding turns a small result into "0". */
+  plainRule?: string;
 };
 
 export type CertificateResultLine = {
@@ -26,6 +30,10 @@ export type CertificateResultLine = {
   /** e.g. "± 0.2e-9 (k = 2)". */
   uncertaintyDisplay: string | null;
   conformance: ConformanceSummary | null;
+  /** The three largest contributors to the uncertainty, e.g. "burette readings 1.2 % (BP-01 calibration CAL-1)". */
+  uncertaintyContributors?: string[];
+  /** Why no uncertainty is stated, when none is. */
+  uncertaintyNote?: string;
 };
 
 export type CertificateTest = {
@@ -38,8 +46,18 @@ export type CertificateTest = {
   termination: string;
   deviations: string[];
   results: CertificateResultLine[];
+  /** How k was computed: constant head, or falling head with rising tail from the burette levels. */
+  calculation?: string;
+  /** The method settings version the run was judged by and the criteria it applied. */
+  criteria?: { settings: string; chosen: string | null; lines: Array<{ name: string; limit: string; met: boolean }> };
+  /** The cell's apparatus leakage check against the method's limit (ASTM D5887). */
+  leakage?: string;
+  /** How many times a burette was refilled or drained during permeation. */
+  refills?: number;
   /** Per interval, for the certificate's chart: elapsed hours, flux (m^3/m^2/s), k20 (m/s). */
   chart: Array<{ hours: number; flux: number; k20: number }>;
+  /** Elapsed hours of each refill or drain, marked on the chart. */
+  refillHours?: number[];
   performedBy: string;
   approvedBy: string;
   approvedAt: string;

@@ -9,6 +9,7 @@ export const ERROR_CODES = {
   INVALID_INPUT: { status: 400, message: "Some of the values entered are not valid." },
   CONFLICT: { status: 409, message: "Someone else changed this record while you were editing it; reload and try again." },
   ILLEGAL_TRANSITION: { status: 409, message: "That step is not allowed from the item's present state." },
+  GONE: { status: 410, message: "That document was withdrawn and is no longer offered." },
   TOO_MANY_ATTEMPTS: { status: 429, message: "Too many failed attempts; wait a moment and try again." },
   UNAVAILABLE: { status: 503, message: "The service is not available right now." },
 } as const;

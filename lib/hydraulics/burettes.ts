@@ -58,3 +58,30 @@ export function levelDifferenceAfterFlowMm(args: {
     (args.outflowMl * 1000) / args.outflowAreaMm2
   );
 }
+
+/**
+ * Cumulative inflow and outflow volumes, mL, from a run's burette levels (mm) in time order, carried
+ * across refills: each step adds the fall of the inflow level and the rise of the outflow level times
+ * the burette areas (mm^2), except into a reading marked afterRefill, where the levels jumped because
+ * the technician refilled or drained a burette and no flow is counted. `start` is the first reading's
+ * cumulative volumes.
+ */
+export function cumulativeVolumesAcrossRefillsMl(
+  levels: ReadonlyArray<{ inflowLevelMm: number; outflowLevelMm: number; afterRefill?: boolean }>,
+  areas: { inflowAreaMm2: number; outflowAreaMm2: number },
+  start: { inflowMl: number; outflowMl: number } = { inflowMl: 0, outflowMl: 0 },
+): Array<{ inflowMl: number; outflowMl: number }> {
+  const out: Array<{ inflowMl: number; outflowMl: number }> = [];
+  let inflowMl = start.inflowMl;
+  let outflowMl = start.outflowMl;
+  for (let i = 0; i < levels.length; i++) {
+    const r = levels[i]!;
+    const prev = levels[i - 1];
+    if (prev && !r.afterRefill) {
+      inflowMl += ((prev.inflowLevelMm - r.inflowLevelMm) * areas.inflowAreaMm2) / 1000;
+      outflowMl += ((r.outflowLevelMm - prev.outflowLevelMm) * areas.outflowAreaMm2) / 1000;
+    }
+    out.push({ inflowMl, outflowMl });
+  }
+  return out;
+}

@@ -25,12 +25,14 @@ export function evaluateRun(input: RunInput, options: EvaluateRunOptions = {}): 
   const { readings, specimen, burettes } = input;
   const warnings: string[] = [];
 
-  if (burettes) {
+  const withLevels = (readings[0] as RunInput["readings"][number]).inflowLevelMm !== undefined;
+  if (burettes || withLevels) {
+    const from = withLevels ? "the burette levels" : "burettes.initialLevelDifferenceMm";
     for (let i = 0; i < readings.length; i++) {
       const r = readings[i] as RunInput["readings"][number];
       const h = readingHeadM(r, unitWeightOfWaterKNPerM3(r.temperatureC, unitWeightBasis), burettes, readings[0] as RunInput["readings"][number]);
       if (!(h > 0)) {
-        throw new Error(`readings[${i}]: total head from headKPa and burettes.initialLevelDifferenceMm is not positive (${h.toFixed(4)} m)`);
+        throw new Error(`readings[${i}]: total head from headKPa and ${from} is not positive (${h.toFixed(4)} m)`);
       }
     }
   }

@@ -15,10 +15,11 @@ export interface IntervalOptions {
 }
 
 /**
- * Total head across the specimen at one reading, m of water: headKPa / gamma_w, plus the burette
- * level difference when burettes are given. burettes.initialLevelDifferenceMm is the level
- * difference at the first reading, so the levels move by the volumes since that reading: pass the
- * first reading as `first` (cumulative volumes need not be zero there).
+ * Total head across the specimen at one reading, m of water: headKPa / gamma_w, plus the burette level
+ * difference. When the reading carries its levels (above a common datum) they are used as they are;
+ * otherwise, when burettes are given, the level difference follows from burettes.initialLevelDifferenceMm
+ * (the difference at the first reading) and the volumes since the first reading: pass the first reading
+ * as `first` (cumulative volumes need not be zero there).
  */
 export function readingHeadM(
   reading: Reading,
@@ -27,7 +28,10 @@ export function readingHeadM(
   first: { inflowMl: number; outflowMl: number } = { inflowMl: 0, outflowMl: 0 },
 ): number {
   const pressureHeadM = reading.headKPa / unitWeightKNPerM3;
-  if (!burettes) return pressureHeadM;
+  if (reading.inflowLevelMm !== undefined && reading.outflowLevelMm !== undefined) {
+    return pressureHeadM + (reading.inflowLevelMm - reading.outflowLevelMm) * MM_M;
+  }
+  if (!burettes || burettes.initialLevelDifferenceMm === undefined) return pressureHeadM;
   const dzMm = levelDifferenceAfterFlowMm({
     initialLevelDifferenceMm: burettes.initialLevelDifferenceMm,
     inflowMl: reading.inflowMl - first.inflowMl,
@@ -41,8 +45,9 @@ export function readingHeadM(
 /**
  * Inflow, outflow and mean flux (m^3/m^2/s), ratio, gradient, permittivity (1/s), k and k20 (m/s)
  * for every pair of consecutive readings. Constant head unless burettes are given, in which case
- * k comes from the falling-head, rising-tail formula (D5084 method C). Readings must already be
- * validated. O(n).
+ * k comes from the falling-head, rising-tail formula (D5084 method C). A reading marked afterRefill
+ * ends no interval: the refill or drain between it and the reading before is not flow through the
+ * specimen. Readings must already be validated. O(n).
  */
 export function computeIntervals(
   readings: readonly Reading[],
@@ -53,7 +58,7 @@ export function computeIntervals(
   const thicknessM = specimen.thicknessMm * MM_M;
   const basis = options.unitWeightBasis ?? DEFAULT_UNIT_WEIGHT_BASIS;
   const burettes = options.burettes;
-  const out: Interval[] = new Array<Interval>(Math.max(0, readings.length - 1));
+  const out: Interval[] = [];
   // Readings often repeat a temperature: reuse the last gamma_w and R_T rather than recompute.
   let lastT = Number.NaN;
   let gammaW = 0;
@@ -62,6 +67,7 @@ export function computeIntervals(
   for (let i = 1; i < readings.length; i++) {
     const a = readings[i - 1] as Reading;
     const b = readings[i] as Reading;
+    if (b.afterRefill) continue;
     const durationS = b.elapsedS - a.elapsedS;
     const temperatureC = (a.temperatureC + b.temperatureC) / 2;
     if (temperatureC !== lastT) {
@@ -91,7 +97,7 @@ export function computeIntervals(
           head2M: h2,
         })
       : flux / gradient;
-    out[i - 1] = {
+    out.push({
       fromS: a.elapsedS,
       toS: b.elapsedS,
       inflowFlux,
@@ -110,7 +116,7 @@ export function computeIntervals(
       viscosityRatio: rt.ratio,
       viscosityRatioSource: rt.source,
       unitWeightKNPerM3: gammaW,
-    };
+    });
   }
   return out;
 }

@@ -64,6 +64,8 @@ export function resolveTerminationSettings(
   for (const f of ["kBandFraction", "kBandFractionBelowThreshold", "kBandThresholdMPerS", "ecToleranceFraction", "phToleranceUnits", "minPoreVolumes"] as const) {
     if (!(Number.isFinite(s[f]) && s[f] >= 0)) fail(f, `must be a finite number ≥ 0, got ${s[f]}`);
   }
+  if (s.trendMinRelativeChange !== undefined && !(Number.isFinite(s.trendMinRelativeChange) && s.trendMinRelativeChange >= 0))
+    fail("trendMinRelativeChange", `must be a finite number ≥ 0, got ${s.trendMinRelativeChange}`);
   return s;
 }
 
@@ -134,28 +136,32 @@ export function evaluateCriterion(key: CriterionKey, ctx: TerminationContext): C
     case "trend": {
       const quantity = s.trendQuantity === "flux" ? "flux" : "k20";
       const name = `No significant trend in ${quantity}`;
-      const limit = `two-sided p ≥ ${s.trendAlpha} for the least-squares slope of ${quantity} over the last ${n} intervals`;
+      const practical = s.trendMinRelativeChange;
+      const limit =
+        `two-sided p ≥ ${s.trendAlpha} for the least-squares slope of ${quantity} over the last ${n} intervals` +
+        (practical !== undefined ? `, or a fitted change across them below ${pct(practical)} of the mean (a trend needs both)` : "");
       if (last.length < n) return tooFew(key, name, limit, last.length, n);
-      const x = last.map((iv) => (iv.fromS + iv.toS) / 2);
-      const y = last.map((iv) => (s.trendQuantity === "flux" ? iv.flux : iv.k20));
-      const test = leastSquaresSlopeTest(x, y);
-      const mean = y.reduce((acc, v) => acc + v, 0) / y.length;
-      // Values equal to within float rounding (1e-9 of the mean) have no trend to test: rounding
-      // noise of ideal or repeated readings must not read as a significant slope.
-      const flat = y.every((v) => Math.abs(v - mean) <= 1e-9 * Math.abs(mean));
-      const p = flat ? 1 : test.pValue;
-      if (p === null || !Number.isFinite(p) || !Number.isFinite(mean)) {
+      const t = assessTrend(last, s);
+      if (t === null) {
         return { key, name, met: false, value: null, limit, message: `The trend of ${quantity} could not be computed from the last ${n} intervals; check the readings.` };
       }
-      const perDay = mean !== 0 ? (test.slope * 86400) / mean : 0;
-      const met = p >= s.trendAlpha;
-      const direction = test.slope > 0 ? "rising" : "falling";
-      return {
-        key, name, met, value: p, limit,
-        message: met
+      const p = t.pValue;
+      const met = !t.trend;
+      const direction = t.slopePerS > 0 ? "rising" : "falling";
+      const change = `fitted change ${pct(t.relativeChange)} of the mean across the window`;
+      let message: string;
+      if (practical === undefined) {
+        message = met
           ? `No significant trend in ${quantity} over the last ${n} intervals (p = ${fmt(p, 2)}).`
-          : `${quantity === "flux" ? "Flux" : "k20"} is still ${direction} by about ${pct(Math.abs(perDay))} of its mean per day (p = ${fmt(p, 2)}); keep permeating until it levels off.`,
-      };
+          : `${quantity === "flux" ? "Flux" : "k20"} is still ${direction} by about ${pct(Math.abs(t.relativeChangePerDay))} of its mean per day (p = ${fmt(p, 2)}); keep permeating until it levels off.`;
+      } else if (met) {
+        message = t.statistical
+          ? `The slope is statistically significant (p = ${fmt(p, 2)}) but small: ${change}, below the ${pct(practical)} that counts as a trend.`
+          : `No significant trend in ${quantity} over the last ${n} intervals (p = ${fmt(p, 2)}; ${change}).`;
+      } else {
+        message = `${quantity === "flux" ? "Flux" : "k20"} is still ${direction}: p = ${fmt(p, 2)} and ${change}, at least the ${pct(practical)} that counts as a trend; keep permeating until it levels off.`;
+      }
+      return { key, name, met, value: p, limit, message };
     }
     case "k-band": {
       const name = "Consecutive k20 within band of their mean";
@@ -224,6 +230,56 @@ export function evaluateCriterion(key: CriterionKey, ctx: TerminationContext): C
       };
     }
   }
+}
+
+/** Both judgements of a trend over a window of intervals: the statistical one and the practical one. */
+export interface TrendAssessment {
+  quantity: "flux" | "k20";
+  /** Two-sided p-value of the least-squares slope (1 for values equal to within float rounding). */
+  pValue: number;
+  /** Fitted slope, units of the quantity per second. */
+  slopePerS: number;
+  /** |fitted change from the first to the last interval's midpoint| / |mean|. */
+  relativeChange: number;
+  /** Fitted change per day as a fraction of the mean (signed). */
+  relativeChangePerDay: number;
+  /** p below trendAlpha. */
+  statistical: boolean;
+  /** Fitted change at least trendMinRelativeChange, or null when no practical threshold is set. */
+  practical: boolean | null;
+  /** Whether the window shows a trend: the statistical test, and the practical one when it is set. */
+  trend: boolean;
+}
+
+/**
+ * The slope test and the practical size of a trend over `window` (normally the last N intervals),
+ * or null when the window gives no finite statistic (fewer than 3 intervals, non-finite values).
+ */
+export function assessTrend(window: readonly Interval[], settings: Pick<TerminationSettings, "trendQuantity" | "trendAlpha" | "trendMinRelativeChange">): TrendAssessment | null {
+  const x = window.map((iv) => (iv.fromS + iv.toS) / 2);
+  const y = window.map((iv) => (settings.trendQuantity === "flux" ? iv.flux : iv.k20));
+  if (y.length < 3) return null;
+  const test = leastSquaresSlopeTest(x, y);
+  const mean = y.reduce((acc, v) => acc + v, 0) / y.length;
+  // Values equal to within float rounding (1e-9 of the mean) have no trend to test: rounding
+  // noise of ideal or repeated readings must not read as a significant slope.
+  const flat = y.every((v) => Math.abs(v - mean) <= 1e-9 * Math.abs(mean));
+  const p = flat ? 1 : test.pValue;
+  if (p === null || !Number.isFinite(p) || !Number.isFinite(mean)) return null;
+  const span = (x[x.length - 1] as number) - (x[0] as number);
+  const relativeChange = mean !== 0 ? Math.abs((test.slope * span) / mean) : 0;
+  const statistical = p < settings.trendAlpha;
+  const practical = settings.trendMinRelativeChange === undefined ? null : relativeChange >= settings.trendMinRelativeChange;
+  return {
+    quantity: settings.trendQuantity,
+    pValue: p,
+    slopePerS: test.slope,
+    relativeChange,
+    relativeChangePerDay: mean !== 0 ? (test.slope * 86400) / mean : 0,
+    statistical,
+    practical,
+    trend: statistical && practical !== false,
+  };
 }
 
 function latest(readings: readonly Reading[], has: (r: Reading) => boolean): Reading | undefined {

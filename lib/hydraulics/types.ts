@@ -21,6 +21,21 @@ export interface Reading {
   effluentEcMsPerM?: number;
   influentPh?: number;
   effluentPh?: number;
+  /**
+   * Water level in the inflow burette above the datum common to both burettes, mm (the scale reading plus
+   * the calibrated height of the burette's zero above the datum). Give both levels on every reading or on
+   * none; with levels the head is headKPa / gamma_w + (inflowLevelMm - outflowLevelMm) / 1000.
+   */
+  inflowLevelMm?: number;
+  /** Water level in the outflow burette above the same datum, mm. */
+  outflowLevelMm?: number;
+  /**
+   * This reading was taken right after a refill of the inflow burette or a drain of the outflow burette
+   * (the previous reading just before it). The interval ending here carries no flow: it is left out of
+   * `intervals`, so it never enters the criteria or the reported values. Cumulative volumes continue
+   * across it (give the same cumulative volumes as the reading before).
+   */
+  afterRefill?: true;
 }
 
 /** The specimen as tested; optional fields feed the D6766 pore-volume count. */
@@ -38,13 +53,17 @@ export interface SpecimenInput {
 
 /**
  * Optional burette calibration. When present the run is computed as falling head with rising tail
- * (D5084 method C): the burette levels follow from the cumulative volumes and these areas.
+ * (D5084 method C). The heads come from the readings' burette levels when they carry them; otherwise the
+ * levels follow from the cumulative volumes, these areas and initialLevelDifferenceMm.
  */
 export interface BuretteInput {
   inflowAreaMm2: number;
   outflowAreaMm2: number;
-  /** Inflow level minus outflow level at the first reading, mm of water. */
-  initialLevelDifferenceMm: number;
+  /**
+   * Inflow level minus outflow level at the first reading, mm of water. Needed only when the readings
+   * carry no levels (inflowLevelMm / outflowLevelMm); when they do, the levels are used instead.
+   */
+  initialLevelDifferenceMm?: number;
 }
 
 /** Input of evaluateRun (contract of issue 3; `burettes` is an optional addition). */
@@ -125,6 +144,13 @@ export interface TerminationSettings {
   phToleranceUnits: number;
   minPoreVolumes: number;
   criteria: readonly CriterionKey[];
+  /**
+   * Practical size of a trend: the fitted change of the trend quantity across the window, as a fraction
+   * of its mean. When set, a trend counts only when the slope test is significant AND the fitted change
+   * is at least this fraction (smooth, quantised logger data make any slope "significant"). Not set by
+   * default, so the slope test alone decides, as before.
+   */
+  trendMinRelativeChange?: number;
 }
 
 /** Declared standard uncertainties (k = 1) of the instruments, in the units named. */

@@ -37,6 +37,8 @@ export function validateRunInput(input: RunInput): void {
   if (!Array.isArray(rs) || rs.length < 2) {
     throw new Error(`readings must hold at least 2 readings, got ${Array.isArray(rs) ? rs.length : String(rs)}`);
   }
+  // Levels are given on every reading or on none: a head that switched basis mid-run would be meaningless.
+  const withLevels = rs[0] !== null && typeof rs[0] === "object" && (rs[0].inflowLevelMm !== undefined || rs[0].outflowLevelMm !== undefined);
   // Field names are built only on failure: this loop runs for every reading of long runs.
   for (let i = 0; i < rs.length; i++) {
     const r = rs[i];
@@ -52,6 +54,11 @@ export function validateRunInput(input: RunInput): void {
     if (r.effluentEcMsPerM !== undefined) nonNegative(r.effluentEcMsPerM, `readings[${i}].effluentEcMsPerM`);
     if (r.influentPh !== undefined) ph(r.influentPh, `readings[${i}].influentPh`);
     if (r.effluentPh !== undefined) ph(r.effluentPh, `readings[${i}].effluentPh`);
+    checkLevels(r, i, withLevels);
+    if (r.afterRefill !== undefined) {
+      if (r.afterRefill !== true) throw new Error(`readings[${i}].afterRefill must be true or left out, got ${String(r.afterRefill)}`);
+      if (i === 0) throw new Error("readings[0].afterRefill: the first reading cannot follow a refill; a refill is recorded by the readings just before and just after it");
+    }
     if (i > 0) {
       const prev = (rs[i - 1] as { elapsedS: number }).elapsedS;
       if (!(r.elapsedS > prev)) {
@@ -64,8 +71,28 @@ export function validateRunInput(input: RunInput): void {
     if (b === null || typeof b !== "object") throw new Error("burettes must be an object");
     positive(b.inflowAreaMm2, "burettes.inflowAreaMm2");
     positive(b.outflowAreaMm2, "burettes.outflowAreaMm2");
-    if (!isNum(b.initialLevelDifferenceMm)) {
-      throw new Error(`burettes.initialLevelDifferenceMm must be a finite number, got ${String(b.initialLevelDifferenceMm)}`);
+    if (b.initialLevelDifferenceMm !== undefined || !withLevels) {
+      if (!isNum(b.initialLevelDifferenceMm)) {
+        throw new Error(`burettes.initialLevelDifferenceMm must be a finite number${withLevels ? "" : " when the readings carry no burette levels"}, got ${String(b.initialLevelDifferenceMm)}`);
+      }
+    }
+    if (!withLevels) {
+      const refill = rs.findIndex((r) => r.afterRefill === true);
+      if (refill >= 0) throw new Error(`readings[${refill}].afterRefill: a refill changes the burette levels, so falling-head burettes need the readings' inflowLevelMm and outflowLevelMm`);
     }
   }
+}
+
+function checkLevels(r: RunInput["readings"][number], i: number, withLevels: boolean): void {
+  const has = r.inflowLevelMm !== undefined || r.outflowLevelMm !== undefined;
+  if (has !== withLevels) {
+    throw new Error(
+      withLevels
+        ? `readings[${i}].inflowLevelMm and outflowLevelMm are missing, but readings[0] has burette levels; give levels on every reading or on none`
+        : `readings[${i}].inflowLevelMm and outflowLevelMm are given, but readings[0] has no burette levels; give levels on every reading or on none`,
+    );
+  }
+  if (!has) return;
+  if (!isNum(r.inflowLevelMm)) throw new Error(`readings[${i}].inflowLevelMm must be a finite number, got ${String(r.inflowLevelMm)}`);
+  if (!isNum(r.outflowLevelMm)) throw new Error(`readings[${i}].outflowLevelMm must be a finite number, got ${String(r.outflowLevelMm)}`);
 }

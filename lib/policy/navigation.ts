@@ -16,6 +16,7 @@ const NAV_ITEMS: NavItem[] = [
   { href: "/certificates", label: "Certificates", section: "Work", action: "certificate.view" },
   { href: "/equipment", label: "Equipment", section: "Lab", action: "equipment.view" },
   { href: "/specifications", label: "Specifications", section: "Lab", action: "certificate.view" },
+  { href: "/methods", label: "Methods", section: "Lab", action: "run.view" },
   { href: "/admin/users", label: "People", section: "Lab", action: "user.manage" },
   { href: "/admin/audit", label: "Audit trail", section: "Lab", action: "audit.view" },
   { href: "/account", label: "My account", section: "Account", action: "account.self" },

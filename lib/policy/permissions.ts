@@ -32,6 +32,7 @@ export const ACTIONS = [
   "certificate.view",
   "certificate.issue", // sign and issue, or revise, a certificate
   "specification.manage",
+  "method.manage", // change a test method's settings (criteria, pressures, uncertainty defaults) by a new version
   "user.manage", // create, deactivate, reset passwords
   "audit.view",
   "portal.view", // the client portal: own organisation only
@@ -49,7 +50,7 @@ const MATRIX: Record<RoleName, readonly Action[]> = {
   // QA judges and signs; the rule that they never approve their own work is enforced per record, not here.
   QA_MANAGER: [...STAFF_READ, "run.review", "certificate.issue", "calibration.override", "specification.manage", "audit.view", "account.self"],
   // The administrator keeps people, equipment and reference data, and produces no test results.
-  LAB_ADMIN: [...STAFF_READ, "user.manage", "equipment.manage", "specification.manage", "location.manage", "audit.view", "account.self"],
+  LAB_ADMIN: [...STAFF_READ, "user.manage", "equipment.manage", "specification.manage", "method.manage", "location.manage", "audit.view", "account.self"],
   // A client sees only the portal; record-level scoping to their organisation happens in each query.
   CLIENT_USER: ["portal.view", "account.self"],
 };

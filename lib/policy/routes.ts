@@ -21,6 +21,7 @@ const ROUTE_ACTIONS: ReadonlyArray<readonly [prefix: string, action: Action]> = 
   ["/review", "run.review"],
   ["/certificates", "certificate.view"],
   ["/specifications", "certificate.view"],
+  ["/methods", "run.view"],
   ["/specifications/new", "specification.manage"],
   ["/certificates/new", "certificate.issue"],
   ["/portal", "portal.view"],

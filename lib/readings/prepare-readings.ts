@@ -1,9 +1,10 @@
 /**
  * Places drafted readings on a run: the time as both a date-time and seconds since permeation began,
  * the head from the two line pressures, cumulative volumes from the raw levels and the calibrated
- * burette areas, and every cross-row problem. Pure; the server saves `rows` only when `problems` is empty.
+ * burette areas (carried across refills and drains, which count no flow), and every cross-row problem.
+ * Pure; the server saves `rows` only when `problems` is empty.
  */
-import { cumulativeInflowMl, cumulativeOutflowMl } from "@/lib/hydraulics/burettes";
+import { cumulativeVolumesAcrossRefillsMl } from "@/lib/hydraulics/burettes";
 import { checkReadingSequence, type NeighbourReading, type SequenceField } from "./check-reading-sequence";
 import type { PressureUnit } from "@/lib/units/pressure-entry";
 import { FUTURE_TOLERANCE_MS, type ReadingDraft } from "./reading-draft";
@@ -24,12 +25,13 @@ export type PreparedReading = {
   effluentEcMsPerM: number | null;
   influentPh: number | null;
   effluentPh: number | null;
+  afterRefill: boolean;
 };
 
 /**
- * The reading whose levels anchor the volumes: cumulative volume = its volume + the level change since
- * it × the burette area. The run's first reading (volumes 0) is the usual one; any saved reading with
- * levels gives the same answer, because the volumes are linear in the levels.
+ * The saved reading just before the drafts (the run's latest, or the one before a corrected reading): the
+ * drafts' cumulative volumes continue from its volumes by the level changes since it, except across a
+ * refill. null when the drafts start the run: the first draft's volumes are then 0.
  */
 export type VolumeReference = { inflowLevelMm: number; outflowLevelMm: number; inflowCumulativeMl: number; outflowCumulativeMl: number };
 
@@ -41,7 +43,9 @@ export function prepareReadings(input: {
   now: Date;
   /** Burette cross-section areas from the burette panel's calibration, mm^2. */
   areasMm2: { inflow: number; outflow: number };
-  /** null when the run has no reading yet: the first draft becomes the reference. */
+  /** The calibrated range of the burette scales, mm; readings outside it are refused. */
+  scaleRangeMm?: { min: number; max: number } | null;
+  /** The saved reading just before the drafts, or null when the drafts start the run. */
   reference: VolumeReference | null;
   previous?: NeighbourReading | null;
   next?: NeighbourReading | null;
@@ -49,26 +53,27 @@ export function prepareReadings(input: {
 }): { rows: PreparedReading[]; problems: PrepareProblem[] } {
   const start = input.permeationStartedAt.getTime();
   const problems: PrepareProblem[] = [];
-  const first = input.drafts[0]?.draft;
-  const reference: VolumeReference | null =
-    input.reference ?? (first ? { inflowLevelMm: first.inflowLevelMm, outflowLevelMm: first.outflowLevelMm, inflowCumulativeMl: 0, outflowCumulativeMl: 0 } : null);
-  if (!reference) return { rows: [], problems };
-
-  const inflowMl = cumulativeInflowMl([reference.inflowLevelMm, ...input.drafts.map((d) => d.draft.inflowLevelMm)], input.areasMm2.inflow).slice(1);
-  const outflowMl = cumulativeOutflowMl([reference.outflowLevelMm, ...input.drafts.map((d) => d.draft.outflowLevelMm)], input.areasMm2.outflow).slice(1);
+  const reference = input.reference;
+  const levels = [...(reference ? [reference] : []), ...input.drafts.map((d) => ({ ...d.draft, afterRefill: d.draft.afterRefill ?? false }))];
+  const volumes = cumulativeVolumesAcrossRefillsMl(levels, { inflowAreaMm2: input.areasMm2.inflow, outflowAreaMm2: input.areasMm2.outflow }, reference ? { inflowMl: reference.inflowCumulativeMl, outflowMl: reference.outflowCumulativeMl } : undefined).slice(reference ? 1 : 0);
+  const range = input.scaleRangeMm ?? null;
 
   const rows = input.drafts.map(({ label, draft }, index): PreparedReading => {
     const takenAt = draft.takenAt ?? new Date(start + (draft.elapsedS ?? 0) * 1000);
     const elapsedS = draft.takenAt ? (draft.takenAt.getTime() - start) / 1000 : (draft.elapsedS ?? 0);
     if (takenAt.getTime() > input.now.getTime() + FUTURE_TOLERANCE_MS)
       problems.push({ index, field: "time", message: `${label}, time: ${formatLocal(takenAt)} is in the future; a reading is recorded after it is taken.` });
+    if (range)
+      for (const [field, side] of [["inflowLevelMm", "inflow"], ["outflowLevelMm", "outflow"]] as const)
+        if (draft[field] < range.min || draft[field] > range.max)
+          problems.push({ index, field, message: `${label}, ${side} burette level: ${draft[field]} mm is outside the scale's calibrated range, ${range.min} to ${range.max} mm; check the reading, or recalibrate the panel.` });
     return {
       takenAt,
       elapsedS,
       inflowLevelMm: draft.inflowLevelMm,
       outflowLevelMm: draft.outflowLevelMm,
-      inflowCumulativeMl: reference.inflowCumulativeMl + inflowMl[index]!,
-      outflowCumulativeMl: reference.outflowCumulativeMl + outflowMl[index]!,
+      inflowCumulativeMl: volumes[index]!.inflowMl,
+      outflowCumulativeMl: volumes[index]!.outflowMl,
       headPa: draft.influentPressurePa - draft.effluentPressurePa,
       influentPressurePa: draft.influentPressurePa,
       effluentPressurePa: draft.effluentPressurePa,
@@ -78,6 +83,7 @@ export function prepareReadings(input: {
       effluentEcMsPerM: draft.effluentEcMsPerM ?? null,
       influentPh: draft.influentPh ?? null,
       effluentPh: draft.effluentPh ?? null,
+      afterRefill: draft.afterRefill ?? false,
     };
   });
 

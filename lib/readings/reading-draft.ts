@@ -17,6 +17,8 @@ export type ReadingDraft = {
   effluentEcMsPerM?: number | null;
   influentPh?: number | null;
   effluentPh?: number | null;
+  /** Taken right after a refill of the inflow burette or a drain of the outflow burette (the reading before is the one just before it). */
+  afterRefill?: boolean;
 };
 
 /** A water permeation test runs between freezing and 40 °C; lib/hydraulics refuses anything else. */

@@ -17,5 +17,6 @@ export function readingEntryToDraft(entry: ReadingEntry, unit: PressureUnit): Re
     effluentEcMsPerM: entry.effluentEcMsPerM ?? null,
     influentPh: entry.influentPh ?? null,
     effluentPh: entry.effluentPh ?? null,
+    afterRefill: entry.afterRefill,
   };
 }

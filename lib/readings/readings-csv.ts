@@ -10,7 +10,7 @@ import { readCalendarDate } from "../validation/record-dates";
 
 export const READING_CSV_TARGETS = [
   "takenAt", "elapsed", "inflowLevelMm", "outflowLevelMm", "influentPressure", "effluentPressure", "cellPressure",
-  "temperatureC", "influentEcMsPerM", "effluentEcMsPerM", "influentPh", "effluentPh",
+  "temperatureC", "influentEcMsPerM", "effluentEcMsPerM", "influentPh", "effluentPh", "afterRefill",
 ] as const;
 export type ReadingCsvTarget = (typeof READING_CSV_TARGETS)[number];
 export type ReadingCsvColumn = ReadingCsvTarget | "ignore";
@@ -29,6 +29,7 @@ export const READING_CSV_TARGET_LABELS: Record<ReadingCsvTarget, string> = {
   effluentEcMsPerM: "effluent EC (mS/m)",
   influentPh: "influent pH",
   effluentPh: "effluent pH",
+  afterRefill: "refill or drain mark",
 };
 
 /** Which column holds what (one entry per header column), and the units of the time and pressure columns. */
@@ -117,6 +118,7 @@ const startsWithAny = (ws: string[], ...prefixes: string[]) => ws.some((w) => pr
 
 function guessTarget(header: string, sample: string): ReadingCsvTarget | null {
   const ws = words(header);
+  if (startsWithAny(ws, "refill", "drain", "event", "mark", "note")) return "afterRefill";
   const inSide = has(ws, "in", "inflow", "influent", "inlet", "inf");
   const outSide = has(ws, "out", "outflow", "effluent", "outlet", "eff");
   if (has(ws, "ph")) return outSide ? "effluentPh" : inSide ? "influentPh" : null;
@@ -220,6 +222,18 @@ export function parseDateTimeCell(text: string): Date | string {
 }
 
 const ELAPSED_S: Record<ElapsedUnit, number> = { s: 1, min: 60, h: 3600 };
+
+/**
+ * A refill or drain mark: a refill column (1, yes, true, x) or a marked row in an event or note column
+ * (any text with "refill", "refilled", "drain" or "drained"). Blank, 0, no and false leave the row unmarked;
+ * anything else is refused so that a note is never silently taken for a refill.
+ */
+export function parseRefillMark(text: string): boolean | "invalid" {
+  const t = text.trim().toLowerCase();
+  if (t === "" || ["0", "no", "n", "false", "-"].includes(t)) return false;
+  if (["1", "yes", "y", "true", "x", "after", "after refill"].includes(t)) return true;
+  return /\b(refill(ed)?|drain(ed)?)\b/.test(t) ? true : "invalid";
+}
 const PRESSURE_TARGETS = { influentPressure: "influentPressurePa", effluentPressure: "effluentPressurePa", cellPressure: "cellPressurePa" } as const;
 const CHEMISTRY = ["influentEcMsPerM", "effluentEcMsPerM", "influentPh", "effluentPh"] as const;
 
@@ -284,6 +298,12 @@ export function applyReadingsMapping(parsed: ParsedReadingsCsv, mapping: Reading
     }
     const temperature = number("temperatureC", { required: true });
     if (temperature !== null) draft.temperatureC = temperature;
+    const refillIndex = where("afterRefill");
+    if (refillIndex >= 0) {
+      const mark = parseRefillMark(cells[refillIndex]!);
+      if (mark === "invalid") errors.push({ row, field: "afterRefill", message: `${at(refillIndex)} (refill or drain mark): "${cells[refillIndex]}" is neither a refill mark (1, yes, refill, drain) nor blank.` });
+      else if (mark) draft.afterRefill = true;
+    }
     for (const key of CHEMISTRY) {
       const value = number(key, { required: false, min: 0, ...(key.endsWith("Ph") ? { max: 14 } : {}) });
       if (value !== null) draft[key] = value;

@@ -7,7 +7,7 @@
 import type { ConformanceSummary } from "../certificates/certificate-snapshot";
 import { decideConformance } from "../hydraulics";
 import { canonicalUnit, convertUnit } from "./property-units";
-import { formatUnit } from "./format-result";
+import { formatNumber, formatUnit } from "./format-result";
 
 export type SpecificationLimitInput = {
   /** The limit exactly as the specification writes it ("5e-11", "3.66"). */
@@ -48,6 +48,7 @@ export function explainConformance(result: { value: number; unit: string }, limi
     limit.direction === "MAXIMUM"
       ? decision.conforms ? "does not exceed the maximum of" : "exceeds the maximum of"
       : decision.conforms ? "is not below the minimum of" : "is below the minimum of";
+  const measuredValue = `${formatNumber(Number(valueInLimitUnit), { significantDigits: 3 })} ${shownUnit}`;
   return {
     summary: {
       limitText: decision.limit,
@@ -57,12 +58,34 @@ export function explainConformance(result: { value: number; unit: string }, limi
       comparedValue: decision.comparedValue,
       conforms: decision.conforms,
       statement: `${measured}, ${how}, ${relation} ${decision.limit} ${shownUnit}: ${decision.conforms ? "conforms" : "does not conform"}.`,
+      measuredValue,
+      plainRule: plainRule(decision, measuredValue, shownUnit),
     },
     value,
     valueInLimitUnit,
     converted,
     roundingPlace: decision.roundingPlace,
   };
+}
+
+/**
+ * The ASTM E29 rule in words. Rounding to the limit's last place can turn a small result into "0" (2.4e-9
+ * against a limit of 1e-8 rounds to 0 × 10⁻⁸): say plainly that this is a rounded comparison, not a
+ * measured zero.
+ */
+function plainRule(decision: { method: string; kind: string; comparedValue: string; roundingPlace: string | null }, measuredValue: string, unit: string): string {
+  if (decision.method !== "rounding" || decision.roundingPlace === null)
+    return `The result as measured, ${measuredValue}, is compared with the limit; any excursion beyond it fails (ASTM E29 absolute method).`;
+  const place = `${formatNumber(Number(decision.roundingPlace), { significantDigits: 1 })} ${unit}`;
+  const rule = `The specification states its limit to the nearest ${place}, so the result is rounded once to that place, halves to even, and the rounded value is compared with the limit (ASTM E29 rounding method).`;
+  if (Number(decision.comparedValue) !== 0) return `${rule} Measured ${measuredValue}; rounded ${asWritten(decision.comparedValue)} ${unit}.`;
+  return `${rule} Measured ${measuredValue}; rounded to the nearest ${place} it reads 0. That 0 is not a measured zero: the result is smaller than half of ${place}${decision.kind === "max" ? ", so it does not exceed the maximum" : ", so it falls short of the minimum"}.`;
+}
+
+/** A rounded decimal ("3e-11", "24", "3.7") in the typographic form results are shown in, with its digits kept. */
+function asWritten(decimal: string): string {
+  const mantissa = decimal.toLowerCase().split("e")[0]!.replace(/^[-+]/, "").replace(".", "").replace(/^0+/, "");
+  return formatNumber(Number(decimal), { significantDigits: Math.max(1, mantissa.length) });
 }
 
 /**

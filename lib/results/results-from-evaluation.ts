@@ -3,7 +3,7 @@
  * ASTM D5887 reports index flux and gives k20 beside it; D5084 and D6766 report hydraulic conductivity
  * at 20 °C. Values are SI (m^3/m^2/s, m/s); the expanded uncertainty has coverage factor 2.
  */
-import { expandedUncertainty, type DeclaredUncertainties, type Interval, type RunEvaluation, type TestMethod, type UnitWeightBasis } from "../hydraulics";
+import { expandedUncertainty, type DeclaredUncertainties, type ExpandedUncertainty, type Interval, type RunEvaluation, type TestMethod, type UnitWeightBasis } from "../hydraulics";
 
 export type ReportedProperty = "INDEX_FLUX" | "HYDRAULIC_CONDUCTIVITY";
 
@@ -19,6 +19,8 @@ export type RunResult = {
   unitWeightBasis: UnitWeightBasis;
   /** True when the run ended before its termination criteria were met (a deviation to report). */
   earlyEnd: boolean;
+  /** The relative standard uncertainty each input contributes (k20's budget; flux uses its own inputs), and the expanded relative U of this value, or null. */
+  uncertaintyBudget: { budget: ExpandedUncertainty["budget"]; relative: number } | null;
 };
 
 export type ResultsFromEvaluationOptions = {
@@ -47,9 +49,9 @@ export function resultsFromEvaluation(evaluation: RunEvaluation, method: TestMet
   const temperatureC = mean(window, (iv) => iv.temperatureC);
   const { flux, k20 } = evaluation.reported;
 
-  let reported: { flux: number; k20: number; fluxU: number | null; k20U: number | null; earlyEnd: boolean };
+  let reported: { flux: number; k20: number; fluxU: number | null; k20U: number | null; earlyEnd: boolean; u: ExpandedUncertainty | null };
   if (flux !== null && k20 !== null) {
-    reported = { flux, k20, fluxU: evaluation.uncertainty?.fluxM3PerM2PerS ?? null, k20U: evaluation.uncertainty?.k20MPerS ?? null, earlyEnd: false };
+    reported = { flux, k20, fluxU: evaluation.uncertainty?.fluxM3PerM2PerS ?? null, k20U: evaluation.uncertainty?.k20MPerS ?? null, earlyEnd: false, u: evaluation.uncertainty };
   } else if (!options.allowEarlyEnd) {
     const unmet = evaluation.termination.criteria.filter((c) => !c.met).map((c) => c.name.toLowerCase());
     throw new Error(`The termination criteria are not met${unmet.length ? ` (${unmet.join(", ")})` : ""}, so the run has no result to report; a run ended early is reported only as a deviation.`);
@@ -57,12 +59,13 @@ export function resultsFromEvaluation(evaluation: RunEvaluation, method: TestMet
     const early = { flux: mean(window, (iv) => iv.flux), k20: mean(window, (iv) => iv.k20) };
     if (!Number.isFinite(early.flux) || !Number.isFinite(early.k20)) throw new Error("The last intervals do not give finite values of flux and k20; check the entered readings before reporting the early end.");
     const u = options.earlyEndUncertainty ? earlyEndUncertainty(evaluation, window, early, options.earlyEndUncertainty) : null;
-    reported = { ...early, fluxU: u?.fluxM3PerM2PerS ?? null, k20U: u?.k20MPerS ?? null, earlyEnd: true };
+    reported = { ...early, fluxU: u?.fluxM3PerM2PerS ?? null, k20U: u?.k20MPerS ?? null, earlyEnd: true, u };
   }
 
   const common = { temperatureC, unitWeightBasis: evaluation.unitWeightBasis, earlyEnd: reported.earlyEnd };
-  const conductivity: RunResult = { property: "HYDRAULIC_CONDUCTIVITY", value: reported.k20, unit: "m/s", expandedUncertainty: reported.k20U, ...common };
-  if (method === "D5887") return [{ property: "INDEX_FLUX", value: reported.flux, unit: "m3/m2/s", expandedUncertainty: reported.fluxU, ...common }, conductivity];
+  const budget = (relative: number | undefined) => (reported.u && relative !== undefined ? { budget: reported.u.budget, relative } : null);
+  const conductivity: RunResult = { property: "HYDRAULIC_CONDUCTIVITY", value: reported.k20, unit: "m/s", expandedUncertainty: reported.k20U, ...common, uncertaintyBudget: budget(reported.u?.k20Relative) };
+  if (method === "D5887") return [{ property: "INDEX_FLUX", value: reported.flux, unit: "m3/m2/s", expandedUncertainty: reported.fluxU, ...common, uncertaintyBudget: budget(reported.u?.fluxRelative) }, conductivity];
   return [conductivity];
 }
 

@@ -4,7 +4,7 @@ import { optionalMeasured, pastDateTime, requiredText, versionSchema } from "./c
 import { futureDate } from "./record-dates";
 
 // Mirrors the EquipmentKind and EquipmentStatus enums of prisma/schema.prisma (lib/ may not import Prisma).
-export const EQUIPMENT_KINDS = ["PERMEAMETER_CELL", "BURETTE_PANEL", "PRESSURE_TRANSDUCER", "THERMOMETER"] as const;
+export const EQUIPMENT_KINDS = ["PERMEAMETER_CELL", "BURETTE_PANEL", "PRESSURE_TRANSDUCER", "THERMOMETER", "THICKNESS_GAUGE", "TIMER"] as const;
 export type EquipmentKind = (typeof EQUIPMENT_KINDS)[number];
 export const EQUIPMENT_STATUSES = ["IN_SERVICE", "OUT_OF_SERVICE", "RETIRED"] as const;
 export type EquipmentStatus = (typeof EQUIPMENT_STATUSES)[number];
@@ -72,6 +72,25 @@ export function calibrationValueErrors(kind: EquipmentKind, v: { inflowBuretteAr
 }
 
 const buretteArea = (label: string) => optionalMeasured(label, { min: BURETTE_AREA_MM2.min, max: BURETTE_AREA_MM2.max });
+const datumOffset = (label: string) => optionalMeasured(label, { min: -5000, max: 5000 });
+const scaleEnd = (label: string) => optionalMeasured(label, { min: 0, max: 5000 });
+
+export const LEAKAGE_UNITS = ["M3_PER_S", "M3_PER_M2_PER_S"] as const;
+export const LEAKAGE_UNIT_LABELS: Record<(typeof LEAKAGE_UNITS)[number], string> = { M3_PER_S: "m³/s (a flow)", M3_PER_M2_PER_S: "m³/m²/s (a flux)" };
+
+/** Cross-field rules of the optional parts: a scale range needs both ends in order; a leakage check needs date, method and rate. */
+function optionalPartErrors(v: { scaleMinMm?: number; scaleMaxMm?: number; leakageCheckedAt?: Date; leakageMethod?: string; leakageRate?: number }): Record<string, string> {
+  const errors: Record<string, string> = {};
+  if ((v.scaleMinMm === undefined) !== (v.scaleMaxMm === undefined)) errors[v.scaleMinMm === undefined ? "scaleMinMm" : "scaleMaxMm"] = "Give both ends of the calibrated scale range, or neither.";
+  else if (v.scaleMinMm !== undefined && v.scaleMaxMm !== undefined && !(v.scaleMinMm < v.scaleMaxMm)) errors.scaleMaxMm = "The top of the calibrated range must be above its bottom.";
+  const leakage = [v.leakageCheckedAt, v.leakageMethod, v.leakageRate];
+  if (leakage.some((x) => x !== undefined) && leakage.some((x) => x === undefined)) {
+    if (v.leakageCheckedAt === undefined) errors.leakageCheckedAt = "Enter the date of the leakage check.";
+    if (v.leakageMethod === undefined) errors.leakageMethod = "Say how the leakage was checked (e.g. a dummy impermeable specimen for 24 h).";
+    if (v.leakageRate === undefined) errors.leakageRate = "Enter the leakage rate measured.";
+  }
+  return errors;
+}
 
 /**
  * Recording a calibration. `equipmentKind` lets the form apply the burette-panel rule before sending; the
@@ -88,6 +107,15 @@ export const recordCalibrationSchema = z
     passed: checkbox("Say whether the calibration passed."),
     inflowBuretteAreaMm2: buretteArea("the inflow burette area (mm²)"),
     outflowBuretteAreaMm2: buretteArea("the outflow burette area (mm²)"),
+    inflowZeroAboveDatumMm: datumOffset("the height of the inflow burette's zero above the datum (mm)"),
+    outflowZeroAboveDatumMm: datumOffset("the height of the outflow burette's zero above the datum (mm)"),
+    scaleMinMm: scaleEnd("the bottom of the calibrated scale range (mm)"),
+    scaleMaxMm: scaleEnd("the top of the calibrated scale range (mm)"),
+    standardUncertainty: optionalMeasured("the standard uncertainty", { min: 0, max: 1e6 }),
+    leakageCheckedAt: z.preprocess((v) => (v === "" || v === null ? undefined : v), pastDateTime("the date of the leakage check").optional()),
+    leakageMethod: z.preprocess((v) => (typeof v === "string" && v.trim() === "" ? undefined : v), z.string().trim().max(300, "Keep the leakage method to 300 characters.").optional()),
+    leakageRate: optionalMeasured("the leakage rate", { min: 0, max: 1 }),
+    leakageUnit: z.enum(LEAKAGE_UNITS).default("M3_PER_S"),
   })
   .superRefine(
     (v, ctx) => {
@@ -105,6 +133,12 @@ export const recordCalibrationSchema = z
     },
     // Runs even while other fields are wrong, so the form shows every missing value at once.
     { when: validFields("equipmentKind", "inflowBuretteAreaMm2", "outflowBuretteAreaMm2") },
+  )
+  .superRefine(
+    (v, ctx) => {
+      for (const [path, message] of Object.entries(optionalPartErrors(v))) ctx.addIssue({ code: "custom", path: [path], message });
+    },
+    { when: validFields("scaleMinMm", "scaleMaxMm", "leakageCheckedAt", "leakageMethod", "leakageRate") },
   );
 export type RecordCalibrationInput = z.input<typeof recordCalibrationSchema>;
 

@@ -51,7 +51,8 @@ export type ParsedListQuery<K extends ListKind> = { query: ListQuery<K>; ignored
 
 // Record ids are uuids in the app and readable ids in fixtures; anything with other characters is not one.
 const recordId = z.string().trim().max(64, "That is not a record id.").regex(/^[A-Za-z0-9:_-]+$/, "That is not a record id.");
-const day = z
+/** A calendar day typed as YYYY-MM-DD, read as the start of that day in UTC. */
+export const calendarDay = z
   .string()
   .trim()
   .regex(/^\d{4}-\d{2}-\d{2}$/, "Enter a date as YYYY-MM-DD.")
@@ -72,8 +73,8 @@ const fieldSchemas = {
   projectId: recordId,
   state: z.enum(ITEM_STATES, { message: "That is not an item state." }),
   acknowledged: z.enum(["yes", "no"], { message: "Acknowledged is yes or no." }).transform((v) => v === "yes"),
-  from: day,
-  to: day,
+  from: calendarDay,
+  to: calendarDay,
   q: z.string().trim().max(50, "Search for at most 50 characters."),
 };
 

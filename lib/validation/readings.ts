@@ -24,6 +24,8 @@ export const readingEntrySchema = z
     effluentEcMsPerM: optionalMeasured("the effluent EC (mS/m)", { min: 0, max: 100_000 }),
     influentPh: optionalMeasured("the influent pH", { min: 0, max: 14 }),
     effluentPh: optionalMeasured("the effluent pH", { min: 0, max: 14 }),
+    // A checkbox ("on"), a JSON boolean, or absent.
+    afterRefill: z.preprocess((v) => v === true || v === "true" || v === "on", z.boolean()).default(false),
   })
   .superRefine((v, ctx) => {
     if (typeof v.influentPressure === "number" && typeof v.effluentPressure === "number" && !(v.influentPressure > v.effluentPressure))

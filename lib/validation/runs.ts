@@ -13,6 +13,8 @@ export const assignSpecimenSchema = z
     burettePanelId: z.string().min(1, "Choose the burette panel."),
     transducerId: z.string().min(1, "Choose the pressure transducer."),
     thermometerId: z.string().optional().transform((v) => v || undefined),
+    thicknessGaugeId: z.string().optional().transform((v) => v || undefined),
+    timerId: z.string().optional().transform((v) => v || undefined),
     methodCode: z.enum(["D5887", "D5084", "D6766"], { message: "Choose the test method." }),
     pressureUnit: pressureUnitSchema,
     effectiveStress: optionalMeasured("the effective stress", { min: 0, max: 5000 }),

@@ -13,17 +13,28 @@ export const cutCouponSchema = z.object({
 });
 export type CutCouponInput = z.input<typeof cutCouponSchema>;
 
-export const prepareSpecimenSchema = z.object({
-  couponId: z.string().min(1),
-  dieDiameterMm: measured("the die diameter (mm)", { positive: true, max: 500 }),
-  initialThicknessMm: measured("the initial thickness (mm)", { positive: true, max: 100 }),
-  initialMassG: measured("the initial mass (g)", { positive: true, max: 10_000 }),
-  moistureContentPct: optionalMeasured("the moisture content (%)", { min: 0, max: 500 }),
-  intendedMethodCode: z.enum(TEST_METHOD_CODES as [string, ...string[]], { message: "Choose the test method." }),
-  preparedAt: pastDateTime("when it was prepared"),
-  storageLocationId: z.string().min(1, "Choose where the specimen is kept."),
-  checklist: z.record(z.string(), z.boolean()),
-});
+export const prepareSpecimenSchema = z
+  .object({
+    couponId: z.string().min(1),
+    dieDiameterMm: measured("the die diameter (mm)", { positive: true, max: 500 }),
+    initialThicknessMm: measured("the initial thickness (mm)", { positive: true, max: 100 }),
+    initialMassG: measured("the initial mass (g)", { positive: true, max: 10_000 }),
+    moistureContentPct: optionalMeasured("the moisture content (%)", { min: 0, max: 500 }),
+    // What the D6766 pore-volume count needs: the dry bentonite mass, or the mass per unit area at the moisture content.
+    bentoniteDryMassG: optionalMeasured("the dry bentonite mass (g)", { positive: true, max: 10_000 }),
+    bentoniteMassPerAreaKgPerM2: optionalMeasured("the bentonite mass per unit area (kg/m²)", { positive: true, max: 50 }),
+    specificGravity: optionalMeasured("the specific gravity of the bentonite solids", { min: 1, max: 5 }),
+    intendedMethodCode: z.enum(TEST_METHOD_CODES as [string, ...string[]], { message: "Choose the test method." }),
+    preparedAt: pastDateTime("when it was prepared"),
+    storageLocationId: z.string().min(1, "Choose where the specimen is kept."),
+    checklist: z.record(z.string(), z.boolean()),
+  })
+  .superRefine((v, ctx) => {
+    if (v.bentoniteMassPerAreaKgPerM2 !== undefined && v.moistureContentPct === undefined)
+      ctx.addIssue({ code: "custom", path: ["moistureContentPct"], message: "Give the moisture content too: the mass per unit area is turned into dry mass with it." });
+    if (v.intendedMethodCode === "D6766" && v.bentoniteDryMassG === undefined && v.bentoniteMassPerAreaKgPerM2 === undefined)
+      ctx.addIssue({ code: "custom", path: ["bentoniteDryMassG"], message: "ASTM D6766 counts pore volumes of flow: give the dry bentonite mass, or the mass per unit area with the moisture content." });
+  });
 export type PrepareSpecimenInput = z.input<typeof prepareSpecimenSchema>;
 
 export const itemRefSchema = z.object({ kind: z.enum(["roll", "coupon", "specimen"]), id: z.string().min(1), version: versionSchema });

@@ -6,6 +6,9 @@ import { hashPassword } from "@/lib/server/auth/password";
 import { DEMO_CLIENTS, DEMO_LAB, DEMO_PASSWORD, DEMO_STAFF } from "./demo-people";
 import { DEMO_SPEC_LIMITS } from "./demo-method-defaults";
 import { makeDemoReadings } from "./demo-readings";
+import { DEMO_LAB_DECLARED_UNCERTAINTIES as U } from "./demo-uncertainties";
+import { seedDemoMethodSettings } from "./demo-method-settings";
+import { recordDemoResults } from "./demo-results";
 
 const DAY = 86_400_000;
 const SPECIMEN_AREA_M2 = (Math.PI * 0.1 ** 2) / 4; // 100 mm die, common practice
@@ -44,6 +47,7 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
     locations[code] = (await tx.storageLocation.create({ data: { code, name } })).id;
 
   const equipment = await createEquipment(tx, users.admin!, now);
+  const settingsVersions = await seedDemoMethodSettings(tx, users.admin!);
 
   // Shipments and rolls.
   const ship = async (projectCode: string, orgCode: string, daysAgo: number, acknowledged: boolean, deliveredBy: string, notes: string) => {
@@ -120,14 +124,15 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
   const testingSpecimen = await prepare((await cutCoupon(testingRoll.id, 6, users.technician!)).id, 6, users.technician!, "D5887", "UNDER_TEST");
 
   // Runs: one approved and certified, one awaiting review, one permeating now.
-  const makeRun = async (specimenId: string, cell: string, tech: string, daysAgo: number, state: Prisma.RunCreateInput["state"], readingCount: number) => {
+  const makeRun = async (specimenId: string, cell: string, tech: string, daysAgo: number, state: Prisma.RunCreateInput["state"], readingCount: number, refillAfter?: number) => {
+    const uses = (tag: string, role: string) => ({ equipmentId: equipment[tag]!, calibrationId: equipment[`${tag}:cal`]!, role });
     const run = await tx.run.create({
       data: {
         labNumber: await allocateLabNumber(tx, "run", ago(daysAgo)), specimenId, cellId: equipment[cell]!, methodCode: "D5887", state,
-        performedById: tech, assignedAt: ago(daysAgo), effectiveStressPa: 34_500,
+        performedById: tech, assignedAt: ago(daysAgo), effectiveStressPa: 34_500, methodSettingsVersionId: settingsVersions.D5887,
         equipment: { create: [
-          { equipmentId: equipment["BP-01"]!, calibrationId: equipment["BP-01:cal"]!, role: "burette panel" },
-          { equipmentId: equipment["PT-01"]!, calibrationId: equipment["PT-01:cal"]!, role: "pressure transducer" },
+          uses(cell, "permeameter cell"), uses("BP-01", "burette panel"), uses("PT-01", "pressure transducer"), uses("TH-01", "thermometer"),
+          uses("TG-01", "thickness gauge"), uses("CLK-01", "timer"),
         ] },
       },
     });
@@ -140,21 +145,26 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
     for (const [i, st] of stages.entries())
       await tx.runStage.create({ data: { runId: run.id, sequence: i + 1, kind: st.kind, cellPressurePa: st.cell, influentPressurePa: st.inf, effluentPressurePa: st.eff, startedAt: ago(daysAgo - st.start), endedAt: st.end === null ? null : ago(daysAgo - st.end), recordedById: tech } });
     const start = ago(daysAgo - 3);
-    const readings = makeDemoReadings({ fluxM3PerM2PerS: 2.4e-9, areaM2: SPECIMEN_AREA_M2, count: readingCount, stepH: 6, headPa: 14_000 });
+    const readings = makeDemoReadings({
+      fluxM3PerM2PerS: 2.4e-9, areaM2: SPECIMEN_AREA_M2, count: readingCount, stepH: 6, pressuresPa: { cell: 552_000, influent: 531_000, effluent: 517_000 },
+      buretteAreasMm2: DEMO_BURETTE_AREAS_MM2, ...(refillAfter !== undefined && { refillAfter }),
+    });
     await tx.reading.createMany({
       data: readings.map((r, i) => ({ runId: run.id, sequence: i + 1, takenAt: new Date(start.getTime() + r.elapsedS * 1000), ...r, recordedById: tech })),
     });
     return run;
   };
 
-  const approvedRun = await makeRun(certifiedSpecimen.id, "CELL-01", users.technician!, 18, "APPROVED", 12);
+  // The approved run's burettes were refilled and drained once, after its seventh reading.
+  const approvedRun = await makeRun(certifiedSpecimen.id, "CELL-01", users.technician!, 18, "APPROVED", 12, 6);
   await tx.run.update({ where: { id: approvedRun.id }, data: { terminatedAt: ago(12), terminationKind: "CRITERIA_MET", postTestThicknessMm: 5.9, postTestMassG: 71.3, postTestObservations: "Uniform hydration; no channels seen on the cut section.", submittedAt: ago(12) } });
   await tx.runStage.updateMany({ where: { runId: approvedRun.id, kind: "PERMEATION" }, data: { endedAt: ago(12) } });
   await tx.review.create({ data: { runId: approvedRun.id, reviewerId: users.qa!, decision: "APPROVED", comments: "Criteria met; checklist complete.", createdAt: ago(11) } });
-  const result = await tx.result.create({ data: { runId: approvedRun.id, property: "INDEX_FLUX", value: 2.4e-9, unit: "m3/m2/s", expandedUncertainty: 0.2e-9, temperatureC: 20.6, unitWeightBasis: "conventional 9.81 kN/m3", approvedById: users.qa!, approvedAt: ago(11) } });
+  // Computed as the app computes at approval; only the index flux goes on the demo's issued certificate.
+  const [result] = await recordDemoResults(tx, approvedRun.id, { approvedById: users.qa!, approvedAt: ago(11) });
   const certificate = await tx.certificate.create({ data: { number: await allocateLabNumber(tx, "certificate", ago(10)), projectId: projects["MWA-C4"]!, clientOrganizationId: orgs.MWA! } });
   // Drafted with its results, signed, then issued: the database keeps an issued revision's parts fixed.
-  const revision = await tx.certificateRevision.create({ data: { certificateId: certificate.id, revision: 1, status: "DRAFT", verificationCode: "DEMO-7Q4K-2M9X", results: { create: [{ resultId: result.id }] } } });
+  const revision = await tx.certificateRevision.create({ data: { certificateId: certificate.id, revision: 1, status: "DRAFT", verificationCode: "DEMO-7Q4K-2M9X", results: { create: [{ resultId: result!.id }] } } });
   await tx.signature.create({ data: { revisionId: revision.id, signerId: users.qa!, signerRole: "QA_MANAGER", meaning: "Reviewed and approved for issue", signedAt: ago(10) } });
   await tx.certificateRevision.update({ where: { id: revision.id }, data: { status: "ISSUED", issuedAt: ago(10) } });
 
@@ -169,9 +179,12 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
   await makeRun(testingSpecimen.id, "CELL-03", users.technician!, 5, "PERMEATING", 7);
 }
 
+/** Burette cross-sections of the demo panels, mm² (a bore of about 6.3 mm). */
+const DEMO_BURETTE_AREAS_MM2 = { inflow: 31.4, outflow: 31.2 };
+
 async function createEquipment(tx: Tx, adminId: string, now: Date): Promise<Ids> {
   const ids: Ids = {};
-  const add = async (assetTag: string, kind: Prisma.EquipmentCreateInput["kind"], name: string, ratedMaxPressurePa: number | null, calibratedDaysAgo: number, values: Record<string, number> = {}) => {
+  const add = async (assetTag: string, kind: Prisma.EquipmentCreateInput["kind"], name: string, ratedMaxPressurePa: number | null, calibratedDaysAgo: number, values: Record<string, number | string> = {}) => {
     const eq = await tx.equipment.create({ data: { assetTag, kind, name, serialNumber: `SN-${assetTag}`, ratedMaxPressurePa } });
     const calibratedAt = new Date(now.getTime() - calibratedDaysAgo * DAY);
     const cal = await tx.calibration.create({
@@ -180,10 +193,22 @@ async function createEquipment(tx: Tx, adminId: string, now: Date): Promise<Ids>
     ids[assetTag] = eq.id;
     ids[`${assetTag}:cal`] = cal.id;
   };
-  for (let n = 1; n <= 6; n++) await add(`CELL-0${n}`, "PERMEAMETER_CELL", `Flexible-wall permeameter cell ${n}`, 1_000_000, n === 6 ? 400 : 60 + n * 20);
-  for (let n = 1; n <= 3; n++) await add(`BP-0${n}`, "BURETTE_PANEL", `Burette panel ${n}`, 1_000_000, 90, { inflowBuretteAreaM2: 3.14e-5, outflowBuretteAreaM2: 3.12e-5 });
-  await add("PT-01", "PRESSURE_TRANSDUCER", "Differential pressure transducer 0-100 kPa", 700_000, 120);
-  await add("PT-02", "PRESSURE_TRANSDUCER", "Cell pressure transducer 0-1000 kPa", 1_000_000, 350);
-  await add("TH-01", "THERMOMETER", "Laboratory thermometer", null, 200);
+  for (let n = 1; n <= 6; n++) {
+    const calibratedDaysAgo = n === 6 ? 400 : 60 + n * 20;
+    // Each cell's leakage check with a dummy specimen (ASTM D5887): far below 10 % of the demo flows.
+    const leakage = { leakageCheckedAt: new Date(now.getTime() - calibratedDaysAgo * DAY).toISOString(), leakageMethod: "impermeable dummy specimen at the permeation pressures for 24 h", leakageRateM3PerS: 2e-13 + n * 1e-14 };
+    await add(`CELL-0${n}`, "PERMEAMETER_CELL", `Flexible-wall permeameter cell ${n}`, 1_000_000, calibratedDaysAgo, leakage);
+  }
+  // The outflow burette's zero sits 40 mm higher than the inflow burette's, above the panel's common datum.
+  for (let n = 1; n <= 3; n++)
+    await add(`BP-0${n}`, "BURETTE_PANEL", `Burette panel ${n}`, 1_000_000, 90, {
+      inflowBuretteAreaM2: DEMO_BURETTE_AREAS_MM2.inflow * 1e-6, outflowBuretteAreaM2: DEMO_BURETTE_AREAS_MM2.outflow * 1e-6,
+      inflowZeroAboveDatumMm: 0, outflowZeroAboveDatumMm: 40, scaleMinMm: 0, scaleMaxMm: 500, standardUncertainty: U.volumeMl,
+    });
+  await add("PT-01", "PRESSURE_TRANSDUCER", "Differential pressure transducer 0-100 kPa", 700_000, 120, { standardUncertainty: U.pressureKPa });
+  await add("PT-02", "PRESSURE_TRANSDUCER", "Cell pressure transducer 0-1000 kPa", 1_000_000, 350, { standardUncertainty: 0.5 });
+  await add("TH-01", "THERMOMETER", "Laboratory thermometer", null, 200, { standardUncertainty: U.temperatureC });
+  await add("TG-01", "THICKNESS_GAUGE", "Dial thickness gauge, 0.01 mm", null, 150, { standardUncertainty: U.thicknessMm });
+  await add("CLK-01", "TIMER", "Data-logger clock", null, 100, { standardUncertainty: U.timeS });
   return ids;
 }

@@ -66,7 +66,7 @@ afterAll(async () => {
 describe("verifyCertificate (public)", () => {
   it("answers valid with the number, revision, issue date and PDF digest, and nothing else", async () => {
     const result = await verifyCertificate(codes.valid);
-    expect(result).toEqual({ status: "VALID", number: numbers.valid, revision: 1, issuedAt, pdfSha256: validDigest, supersededBy: null });
+    expect(result).toEqual({ status: "VALID", number: numbers.valid, revision: 1, issuedAt, pdfSha256: validDigest, supersededBy: null, since: null });
   });
 
   it("finds a code however it was typed", async () => {

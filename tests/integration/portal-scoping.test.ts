@@ -1,17 +1,16 @@
-import { createHash } from "node:crypto";
 import { beforeAll, describe, expect, it } from "vitest";
 import type { Role } from "@/lib/generated/prisma/client";
 import { can } from "@/lib/policy/permissions";
 import type { CurrentUser } from "@/lib/server/auth/current-user";
-import { withActor, type Tx } from "@/lib/server/db/transaction";
+import { withActor } from "@/lib/server/db/transaction";
 import { getShipmentReceipt } from "@/lib/server/intake/get-shipment-receipt";
 import { getCertificatePdf } from "@/lib/server/portal/get-portal-certificate-pdf";
 import { getPortalProject } from "@/lib/server/portal/get-portal-project";
 import { listPortalCertificates } from "@/lib/server/portal/list-portal-certificates";
 import { makeOrganization, makeProject, makeUser, unique } from "../support/factories";
+import { issueRevision, TEST_PDF } from "../support/issue-certificate-revision";
 import { codeOf, failure } from "../support/refusals";
 
-const PDF = new TextEncoder().encode("%PDF-1.4 test");
 const DAY = 86_400_000;
 const ago = (days: number) => new Date(Date.now() - days * DAY);
 
@@ -36,19 +35,6 @@ let a: OrgFixture;
 let b: OrgFixture;
 
 const number = () => unique("Q").toUpperCase();
-const code = () => unique("V").toUpperCase();
-
-/** A revision drafted with its results, then issued in one update (the database freezes it after that). */
-async function issueRevision(tx: Tx, certificateId: string, revision: number, options: { resultIds?: string[]; pdf?: boolean; supersedesId?: string; daysAgo: number }) {
-  const draft = await tx.certificateRevision.create({
-    data: {
-      certificateId, revision, verificationCode: code(), supersedesId: options.supersedesId ?? null, reason: options.supersedesId ? "Corrected specimen thickness" : "",
-      results: { create: (options.resultIds ?? []).map((resultId) => ({ resultId })) },
-    },
-  });
-  const withPdf = options.pdf === false ? {} : { pdf: PDF, pdfSha256: createHash("sha256").update(PDF).digest("hex") };
-  return tx.certificateRevision.update({ where: { id: draft.id }, data: { status: "ISSUED", issuedAt: ago(options.daysAgo), ...withPdf } });
-}
 
 /** One organisation's world: a project, a shipment of three rolls along the chain, and four certificates. */
 async function makeOrgFixture(): Promise<OrgFixture> {
@@ -104,14 +90,14 @@ async function makeOrgFixture(): Promise<OrgFixture> {
     const main = await certificate();
     await issueRevision(tx, main.id, 1, { resultIds: [result.id], daysAgo: 8 });
     await tx.certificateRevision.create({
-      data: { certificateId: main.id, revision: 2, verificationCode: code(), reason: "Draft correction", pdf: PDF, pdfSha256: "draft" },
+      data: { certificateId: main.id, revision: 2, verificationCode: unique("V").toUpperCase(), reason: "Draft correction", pdf: TEST_PDF, pdfSha256: "draft" },
     });
     const revised = await certificate();
     const first = await issueRevision(tx, revised.id, 1, { daysAgo: 7 });
     await issueRevision(tx, revised.id, 2, { supersedesId: first.id, daysAgo: 3 });
     await tx.certificateRevision.update({ where: { id: first.id }, data: { status: "SUPERSEDED", supersededAt: ago(3) } });
     const draftOnly = await certificate();
-    await tx.certificateRevision.create({ data: { certificateId: draftOnly.id, revision: 1, verificationCode: code(), pdf: PDF } });
+    await tx.certificateRevision.create({ data: { certificateId: draftOnly.id, revision: 1, verificationCode: unique("V").toUpperCase(), pdf: TEST_PDF } });
     const noPdf = await certificate();
     await issueRevision(tx, noPdf.id, 1, { pdf: false, daysAgo: 2 });
 
@@ -171,7 +157,7 @@ describe("client portal: a client sees their own organisation", () => {
 
     expect(await getCertificatePdf({ actor: a.client, number: a.revised })).toMatchObject({ revision: 2, status: "ISSUED", fileName: `${a.revised}-rev2.pdf` });
     const superseded = await getCertificatePdf({ actor: a.client, number: a.revised.toLowerCase(), revision: "1" });
-    expect(superseded).toMatchObject({ revision: 1, status: "SUPERSEDED", fileName: `${a.revised}-rev1.pdf` });
+    expect(superseded).toMatchObject({ revision: 1, status: "SUPERSEDED", fileName: `${a.revised}-rev1-superseded.pdf` });
   });
 
   it("says plainly when an issued revision has no stored PDF, and refuses a revision that is not a number", async () => {

@@ -6,7 +6,8 @@ import { createCertificateDraft } from "@/lib/server/certificates/create-certifi
 import { issueCertificate } from "@/lib/server/certificates/issue-certificate";
 import { reviseCertificate } from "@/lib/server/certificates/revise-certificate";
 import { findBrowser } from "../../e2e/support/find-browser";
-import { db, makeProject, makeUser, TEST_PASSWORD, unique } from "../support/factories";
+import { db, makeUser, TEST_PASSWORD } from "../support/factories";
+import { makePermeatingRun } from "../support/run-fixtures";
 import { failure } from "../support/refusals";
 import { withOwner } from "../support/owner";
 
@@ -14,24 +15,19 @@ const SYSTEM = { id: "system:test" };
 const browser = findBrowser();
 if (!browser && process.env.SEEPLINE_REQUIRE_BROWSER === "1") throw new Error("these tests issue certificates and need Chromium");
 
-/** A run submitted for review with steady readings that meet the D5887 criteria (invented data). */
+/**
+ * A run submitted for review with steady readings (volumes only, so constant head) that meet the D5887
+ * criteria, its instruments calibrated with standard uncertainties (invented data).
+ */
 async function makeSubmittedRun(performerId: string, projectId?: string) {
-  const project = projectId ? await db().project.findUniqueOrThrow({ where: { id: projectId } }) : await makeProject();
+  const { run, project } = await makePermeatingRun(performerId, projectId ? { projectId } : {});
   return withActor(SYSTEM, async (tx) => {
-    const shipment = await tx.shipment.create({ data: { labNumber: unique("S"), clientOrganizationId: project.clientOrganizationId, projectId: project.id, deliveredBy: "x", receivedAt: new Date(), receivedById: performerId } });
-    const roll = await tx.roll.create({ data: { labNumber: unique("R"), shipmentId: shipment.id, projectId: project.id, rollNumber: unique("r"), lotNumber: "L", product: "GCL", manufacturer: "M", state: "UNDER_TEST" } });
-    const coupon = await tx.coupon.create({ data: { labNumber: unique("C"), rollId: roll.id, positionInSample: "centre", lengthMm: 300, widthMm: 300, cutById: performerId, cutAt: new Date() } });
-    const specimen = await tx.specimen.create({ data: { labNumber: unique("P"), couponId: coupon.id, dieDiameterMm: 100, initialThicknessMm: 6, initialMassG: 45, intendedMethodCode: "D5887", preparedById: performerId, preparedAt: new Date(), state: "TESTED" } });
-    const cell = await tx.equipment.create({ data: { assetTag: unique("CELL").toUpperCase(), kind: "PERMEAMETER_CELL", name: "Test cell", ratedMaxPressurePa: 1_000_000 } });
-    const run = await tx.run.create({
-      data: { labNumber: unique("T"), specimenId: specimen.id, cellId: cell.id, methodCode: "D5887", state: "SUBMITTED", performedById: performerId, terminatedAt: new Date(), terminationKind: "CRITERIA_MET", postTestThicknessMm: 5.9, submittedAt: new Date() },
-    });
-    await tx.runStage.create({ data: { runId: run.id, sequence: 1, kind: "PERMEATION", cellPressurePa: 552_000, influentPressurePa: 517_000, effluentPressurePa: 503_000, startedAt: new Date(Date.now() - 4 * 86_400_000), recordedById: performerId } });
+    const submitted = await tx.run.update({ where: { id: run.id }, data: { state: "SUBMITTED", terminatedAt: new Date(), terminationKind: "CRITERIA_MET", postTestThicknessMm: 5.9, submittedAt: new Date() } });
     const stepMl = 2e-9 * ((Math.PI * 0.1 ** 2) / 4) * 21_600 * 1e6;
     await tx.reading.createMany({
       data: Array.from({ length: 8 }, (_, i) => ({ runId: run.id, sequence: i + 1, takenAt: new Date(), elapsedS: i * 21_600, inflowCumulativeMl: i * stepMl, outflowCumulativeMl: i * stepMl * 0.98, headPa: 14_000, temperatureC: 20, recordedById: performerId })),
     });
-    return { run, project };
+    return { run: submitted, project };
   });
 }
 

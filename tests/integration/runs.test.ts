@@ -93,7 +93,7 @@ describe("stages, termination, post-test and submission", () => {
   it("warns on a broken confining margin until acknowledged, refuses a pressure above a rating, and keeps the run's steps in order", async () => {
     const { technician, other, cell, assignInput, specimen } = await setUp();
     const run = await assignSpecimenToCell({ actor: technician, input: assignInput(cell.id) });
-    const stage = { runId: run.id, version: 1, kind: "SATURATION", pressureUnit: "KPA", cellPressure: "330", influentPressure: "310", effluentPressure: "310", startedAt: new Date(Date.now() - 5 * DAY).toISOString() };
+    const stage = { runId: run.id, version: 1, kind: "SATURATION", pressureUnit: "KPA", cellPressure: "330", influentPressure: "310", effluentPressure: "310", startedAt: new Date(Date.now() - 6 * DAY).toISOString() };
 
     expect((await failure(recordStage({ actor: other, input: stage }))).code).toBe("FORBIDDEN");
     const warned = await failure(recordStage({ actor: technician, input: stage }));
@@ -110,8 +110,8 @@ describe("stages, termination, post-test and submission", () => {
     const early = await failure(terminateRun({ actor: technician, input: { runId: run.id, version: 2, kind: "EARLY_END", reason: "Membrane leak" } }));
     expect(early.message).toMatch(/A run that is saturating cannot terminate the run/);
 
-    await recordStage({ actor: technician, input: { ...stage, version: 2, kind: "EQUILIBRATION", cellPressure: "552", influentPressure: "517", effluentPressure: "517", startedAt: new Date(Date.now() - 4 * DAY).toISOString() } });
-    await recordStage({ actor: technician, input: { ...stage, version: 3, kind: "PERMEATION", cellPressure: "566", influentPressure: "531", effluentPressure: "517", startedAt: new Date(Date.now() - 3 * DAY).toISOString() } });
+    await recordStage({ actor: technician, input: { ...stage, version: 2, kind: "EQUILIBRATION", cellPressure: "552", influentPressure: "517", effluentPressure: "517", startedAt: new Date(Date.now() - 5 * DAY).toISOString() } });
+    await recordStage({ actor: technician, input: { ...stage, version: 3, kind: "PERMEATION", cellPressure: "552", influentPressure: "531", effluentPressure: "517", startedAt: new Date(Date.now() - 3 * DAY).toISOString() } });
     expect((await db().specimen.findUniqueOrThrow({ where: { id: specimen.id } })).state).toBe("UNDER_TEST");
     const stages = await db().runStage.findMany({ where: { runId: run.id }, orderBy: { sequence: "asc" } });
     expect(stages.map((s) => [s.kind, s.endedAt !== null])).toEqual([["SATURATION", true], ["EQUILIBRATION", true], ["PERMEATION", false]]);
@@ -126,10 +126,11 @@ describe("stages, termination, post-test and submission", () => {
   it("terminates when the saved readings meet the criteria, records post-test data and submits", async () => {
     const { technician, cell, assignInput, specimen } = await setUp();
     const run = await assignSpecimenToCell({ actor: technician, input: assignInput(cell.id) });
-    const base = { runId: run.id, pressureUnit: "KPA", startedAt: new Date(Date.now() - 4 * DAY).toISOString() };
-    await recordStage({ actor: technician, input: { ...base, version: 1, kind: "SATURATION", cellPressure: "345", influentPressure: "310", effluentPressure: "310" } });
-    await recordStage({ actor: technician, input: { ...base, version: 2, kind: "EQUILIBRATION", cellPressure: "552", influentPressure: "517", effluentPressure: "517" } });
-    await recordStage({ actor: technician, input: { ...base, version: 3, kind: "PERMEATION", cellPressure: "552", influentPressure: "517", effluentPressure: "503" } });
+    const base = { runId: run.id, pressureUnit: "KPA" };
+    const daysAgo = (d: number) => new Date(Date.now() - d * DAY).toISOString();
+    await recordStage({ actor: technician, input: { ...base, version: 1, kind: "SATURATION", cellPressure: "345", influentPressure: "310", effluentPressure: "310", startedAt: daysAgo(7) } });
+    await recordStage({ actor: technician, input: { ...base, version: 2, kind: "EQUILIBRATION", cellPressure: "552", influentPressure: "517", effluentPressure: "517", startedAt: daysAgo(6) } });
+    await recordStage({ actor: technician, input: { ...base, version: 3, kind: "PERMEATION", cellPressure: "552", influentPressure: "531", effluentPressure: "517", startedAt: daysAgo(4) } });
     await addSteadyReadings(run.id, technician.id, 8);
 
     expect((await failure(submitRun({ actor: technician, input: { runId: run.id, version: 4 } }))).code).toBe("ILLEGAL_TRANSITION");
@@ -139,5 +140,60 @@ describe("stages, termination, post-test and submission", () => {
     await recordPostTest({ actor: technician, input: { runId: run.id, version: 5, thicknessMm: "5.9", finalMassG: "71.2", observations: "Even hydration" } });
     await submitRun({ actor: technician, input: { runId: run.id, version: 6 } });
     expect(await db().run.findUniqueOrThrow({ where: { id: run.id } })).toMatchObject({ state: "SUBMITTED", terminationKind: "CRITERIA_MET", postTestThicknessMm: 5.9 });
+  });
+});
+
+describe("pressure checks that know the stage", () => {
+  // ASTM D5887 permeation as commonly run (shared/DOMAIN.md, common practice): cell about 550 kPa, influent about
+  // 530 kPa, effluent about 515 kPa: the cell only about 20 kPa above the influent line, which is the method.
+  async function atPermeation() {
+    const { technician, cell, assignInput } = await setUp();
+    const run = await assignSpecimenToCell({ actor: technician, input: assignInput(cell.id) });
+    const daysAgo = (d: number) => new Date(Date.now() - d * DAY).toISOString();
+    const base = { runId: run.id, pressureUnit: "KPA" };
+    await recordStage({ actor: technician, input: { ...base, version: 1, kind: "SATURATION", cellPressure: "345", influentPressure: "310", effluentPressure: "310", startedAt: daysAgo(5) } });
+    await recordStage({ actor: technician, input: { ...base, version: 2, kind: "EQUILIBRATION", cellPressure: "550", influentPressure: "515", effluentPressure: "515", startedAt: daysAgo(4) } });
+    const permeation = (cell: string, influent: string, effluent: string, startedDaysAgo = 2) => ({ ...base, version: 3, kind: "PERMEATION", cellPressure: cell, influentPressure: influent, effluentPressure: effluent, startedAt: daysAgo(startedDaysAgo) });
+    return { technician, run, permeation };
+  }
+
+  it("the method's permeation pressures after a two-day hold are no departure and no deviation; psi entry too", async () => {
+    const { technician, run, permeation } = await atPermeation();
+    // 80 / 77 / 75 psi × 6.894757 kPa/psi (NIST SP 811) = 551.6 / 530.9 / 517.1 kPa: within ±10 kPa of the method.
+    const saved = await recordStage({ actor: technician, input: { ...permeation("80", "77", "75"), pressureUnit: "PSI" } });
+    expect(saved.marginWarning).toBeNull();
+    const stage = await db().runStage.findFirstOrThrow({ where: { runId: run.id, kind: "PERMEATION" } });
+    expect(stage).toMatchObject({ marginAcknowledged: false, departureNote: null });
+    const { runDeviations } = await import("@/lib/runs/deviations");
+    const stages = await db().runStage.findMany({ where: { runId: run.id } });
+    expect(runDeviations({ terminationKind: null, terminationReason: null, calibrationOverrideReason: null, stages, checklist: [], correctedReadings: 0 })).toEqual([]);
+  });
+
+  it("a real departure needs acknowledging and becomes a deviation: pressures off the method, the cell too close to the influent line, a short hold", async () => {
+    const { technician, run, permeation } = await atPermeation();
+    const off = await failure(recordStage({ actor: technician, input: permeation("566", "531", "517") }));
+    expect(off.message).toBe("The method prescribes permeation at cell 550 kPa (± 10 kPa); cell 566 kPa is outside it.");
+    expect(off.details).toMatchObject({ marginWarning: true, rules: ["permeation-pressure"] });
+    const close = await failure(recordStage({ actor: technician, input: permeation("545", "538", "515") }));
+    expect(close.message).toMatch(/The cell pressure is 7 kPa above the influent line, less than the 10 kPa the method requires in permeation/);
+    const short = await failure(recordStage({ actor: technician, input: permeation("550", "530", "515", 3.5) }));
+    expect(short.message).toBe("The equilibration hold lasted 12 h, less than the 48 h the method asks for.");
+    expect(await db().runStage.count({ where: { runId: run.id, kind: "PERMEATION" } })).toBe(0);
+
+    await recordStage({ actor: technician, input: { ...permeation("566", "531", "517"), acknowledgeMargin: true } });
+    const stages = await db().runStage.findMany({ where: { runId: run.id }, orderBy: { sequence: "asc" } });
+    expect(stages[2]).toMatchObject({ marginAcknowledged: true, departureNote: "The method prescribes permeation at cell 550 kPa (± 10 kPa); cell 566 kPa is outside it." });
+    const { runDeviations } = await import("@/lib/runs/deviations");
+    expect(runDeviations({ terminationKind: null, terminationReason: null, calibrationOverrideReason: null, stages, checklist: [], correctedReadings: 0 })).toEqual([
+      "Stage 3 (permeation) departed from the method, acknowledged by the technician: The method prescribes permeation at cell 550 kPa (± 10 kPa); cell 566 kPa is outside it.",
+    ]);
+  });
+
+  it("a pressure above a rating is refused even when acknowledged", async () => {
+    const { technician, run, permeation } = await atPermeation();
+    // The test transducer is rated to 700 kPa.
+    const refused = await failure(recordStage({ actor: technician, input: { ...permeation("720", "530", "515"), acknowledgeMargin: true } }));
+    expect(refused.message).toMatch(/^Refused: .* is rated to 700 kPa; 720 kPa would exceed it\. Never exceed an instrument's rated pressure\.$/);
+    expect(await db().runStage.count({ where: { runId: run.id, kind: "PERMEATION" } })).toBe(0);
   });
 });

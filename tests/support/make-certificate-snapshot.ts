@@ -74,7 +74,14 @@ export function makeCertificateSnapshot(options: SnapshotOptions = {}): Certific
       terminatedAt: new Date(issuedAt - (6 - i) * 24 * HOUR).toISOString(),
       termination: i === 2 ? "ended early: client asked for the result after 18 days" : "termination criteria met",
       deviations: options.deviations && i === 0 ? ["Permeation paused for 3 h on day 2 (power cut); readings before and after are kept, the pause is excluded from the intervals."] : [],
-      results: t.results(),
+      results: i === 0 ? t.results().map((r) => ({ ...r, uncertaintyContributors: ["burette readings 1.8 % (BP-01 calibration CAL-BP-01-2026)", "die diameter 0.12 % (lab value, ASTM D5887 settings, version 2)", "time stamps 0.001 % (CLK-01 calibration CAL-CLK-01-2026)"] })) : t.results(),
+      ...(i === 0 && {
+        calculation: "Falling head with rising tail (ASTM D5084 method C): the head across the specimen is the line-pressure difference plus the inflow burette level minus the outflow burette level, both above one datum (zeros 0 mm and 40 mm above it).",
+        criteria: { settings: "ASTM D5887 settings, version 2", chosen: null, lines: [{ name: "Outflow/inflow ratio", limit: "0.75 ≤ outflow/inflow ≤ 1.25 for each of the last 4 intervals", met: true }] },
+        leakage: "Apparatus leakage of cell CELL-01, checked 2026-10-01 (dummy specimen, 24 h): 2.1 × 10⁻¹³ m³/s, 1.1 % of the measured flow; ASTM D5887 asks for less than 10 %.",
+        refills: 1,
+        refillHours: [36.1],
+      }),
       chart,
       performedBy: i % 2 ? "Tamsin Okerlund" : "Quenby Ardlow", approvedBy: "Ottilie Brannagh", approvedAt: new Date(issuedAt - (4 - i) * 24 * HOUR).toISOString(),
     };

@@ -22,8 +22,9 @@ function axisTitle(name: string, scale: AxisScale, unit: string): string {
 }
 
 /** One line chart panel with labelled ticks on both axes. */
-function Panel({ title, points, colour, unit, testId }: { title: string; points: Point[]; colour: string; unit: string; testId: string }) {
+function Panel({ title, points, colour, unit, testId, refills = [] }: { title: string; points: Point[]; colour: string; unit: string; testId: string; refills?: number[] }) {
   const x = axisScale(points.map((p) => p.x), { includeZero: true, targetTicks: 6 });
+  const inside = refills.filter((h) => h >= x.min && h <= x.max);
   const y = axisScale(points.map((p) => p.y), { includeZero: true, targetTicks: 5 });
   const px = (v: number) => PAD.left + position(v, x, PLOT_W);
   const py = (v: number) => PAD.top + PLOT_H - position(v, y, PLOT_H);
@@ -46,6 +47,7 @@ function Panel({ title, points, colour, unit, testId }: { title: string; points:
       <line x1={PAD.left} x2={PAD.left} y1={PAD.top} y2={PAD.top + PLOT_H} stroke="#1d2a30" strokeWidth={0.8} />
       <line x1={PAD.left} x2={W - PAD.right} y1={PAD.top + PLOT_H} y2={PAD.top + PLOT_H} stroke="#1d2a30" strokeWidth={0.8} />
       <text x={PAD.left + PLOT_W / 2} y={H - 3} fontSize={9} textAnchor="middle" fill="#1d2a30">{axisTitle("Elapsed time", x, "h")}</text>
+      {inside.map((h, i) => <line key={`r${i}`} x1={px(h)} x2={px(h)} y1={PAD.top} y2={PAD.top + PLOT_H} stroke="#8a8f94" strokeWidth={0.7} strokeDasharray="2 2" data-refill="" />)}
       {points.length > 1 ? <polyline points={line} fill="none" stroke={colour} strokeWidth={1.4} strokeLinejoin="round" /> : null}
       {points.length <= MAX_MARKED_POINTS ? points.map((p, i) => <circle key={i} cx={px(p.x)} cy={py(p.y)} r={1.9} fill={colour} />) : null}
       {points.length === 0 ? <text x={PAD.left + PLOT_W / 2} y={PAD.top + PLOT_H / 2} fontSize={10} textAnchor="middle" fill="#4f5f66">no intervals recorded</text> : null}
@@ -62,11 +64,11 @@ export function CertificateChart({ test }: { test: CertificateTest }) {
     <figure className="cert-figure">
       <figcaption>
         Per permeation interval, {valid.length === 1 ? "1 interval" : `${valid.length} intervals`}: flux through the specimen (left) and hydraulic
-        conductivity corrected to 20 °C (right), against elapsed time.
+        conductivity corrected to 20 °C (right), against elapsed time.{test.refillHours?.length ? " Dashed lines mark burette refills and drains; no interval spans one." : ""}
       </figcaption>
       <div className="cert-panels">
-        <Panel title="Flux" points={flux} colour="#1f6f78" unit="m³/m²/s" testId="chart-flux" />
-        <Panel title="k at 20 °C" points={k20} colour="#9a5b2f" unit="m/s" testId="chart-k20" />
+        <Panel title="Flux" points={flux} colour="#1f6f78" unit="m³/m²/s" testId="chart-flux" refills={test.refillHours} />
+        <Panel title="k at 20 °C" points={k20} colour="#9a5b2f" unit="m/s" testId="chart-k20" refills={test.refillHours} />
       </div>
     </figure>
   );

@@ -11,11 +11,48 @@ function Decision({ result }: { result: CertificateResultLine }) {
     <div className="cert-decision" data-testid="certificate-decision">
       <div className="cert-decision-head"><strong>{result.label}</strong> <CertificateVerdict conformance={c} /></div>
       <dl className="cert-decision-numbers">
-        <div><dt>Compared value</dt><dd className="mono">{c.comparedValue} {prettyUnit(c.unit)}</dd></div>
+        {c.measuredValue ? <div><dt>Measured value</dt><dd className="mono">{c.measuredValue}</dd></div> : null}
+        <div><dt>{c.method === "ROUNDING" ? "Rounded value compared" : "Compared value"}</dt><dd className="mono">{c.comparedValue} {prettyUnit(c.unit)}</dd></div>
         <div><dt>Limit</dt><dd>{c.direction === "MAXIMUM" ? "maximum" : "minimum"} <span className="mono">{c.limitText} {prettyUnit(c.unit)}</span></dd></div>
         <div><dt>ASTM E29 method</dt><dd>{c.method === "ROUNDING" ? "rounding (once, half to even, to the limit's last place)" : "absolute (any excursion fails)"}</dd></div>
       </dl>
       <p>{c.statement}</p>
+      {c.plainRule ? <p className="doc-small" data-testid="certificate-e29-rule">{c.plainRule}</p> : null}
+    </div>
+  );
+}
+
+/** Under the results: the three largest contributors to each stated uncertainty, or why none is stated. */
+function Uncertainties({ results }: { results: CertificateResultLine[] }) {
+  const lines = results.filter((r) => r.uncertaintyContributors?.length || r.uncertaintyNote);
+  if (lines.length === 0) return null;
+  return (
+    <div className="doc-small" data-testid="certificate-uncertainty" style={{ marginTop: "4pt" }}>
+      {lines.map((r, i) => (
+        <p key={i} style={{ margin: "2pt 0" }}>
+          {r.uncertaintyContributors?.length
+            ? <>Uncertainty of {r.label.toLowerCase()}: expanded, coverage factor k = 2 (about 95 %); largest contributors (relative standard uncertainty): {r.uncertaintyContributors.join("; ")}.</>
+            : <>Uncertainty of {r.label.toLowerCase()} not stated: {r.uncertaintyNote}</>}
+        </p>
+      ))}
+    </div>
+  );
+}
+
+/** How the numbers were obtained: the calculation, the criteria and settings version, refills, the leakage check. */
+function HowComputed({ test }: { test: CertificateTest }) {
+  if (!test.calculation && !test.criteria && !test.leakage) return null;
+  return (
+    <div className="doc-keep" data-testid="certificate-method-detail">
+      <h3>How the result was obtained</h3>
+      {test.calculation ? <p style={{ margin: "2pt 0" }}><strong>Calculation.</strong> {test.calculation}{test.refills ? ` The burettes were refilled or drained ${test.refills} time${test.refills === 1 ? "" : "s"}; no interval spans a refill.` : ""}</p> : null}
+      {test.criteria ? (
+        <>
+          <p style={{ margin: "2pt 0" }}><strong>Termination criteria</strong> of {test.criteria.settings}{test.criteria.chosen ? ` (${test.criteria.chosen})` : ""}:</p>
+          <ul style={{ margin: 0, paddingLeft: "14pt" }}>{test.criteria.lines.map((l, i) => <li key={i}>{l.name}: {l.limit}{l.met ? "" : " (not met)"}</li>)}</ul>
+        </>
+      ) : null}
+      {test.leakage ? <p style={{ margin: "2pt 0" }}><strong>Apparatus leakage.</strong> {test.leakage}</p> : null}
     </div>
   );
 }
@@ -75,8 +112,11 @@ export function CertificateTestSection({ test, index, count }: { test: Certifica
           {test.results.length === 0 ? <tr><td colSpan={5} className="doc-muted">No results are reported for this test.</td></tr> : null}
         </tbody>
       </table>
+      <Uncertainties results={test.results} />
       {test.results.map((r, i) => <Decision key={i} result={r} />)}
       </div>
+
+      <HowComputed test={test} />
 
       <CertificateChart test={test} />
 

@@ -5,7 +5,7 @@ import { ROLE_LABELS } from "@/lib/policy/permissions";
 import { conformanceSummary } from "@/lib/results/conformance-summary";
 import { formatResultValue, formatUncertainty } from "@/lib/results/format-result";
 import { runDeviations } from "@/lib/runs/deviations";
-import { DEMO_LAB_DECLARED_UNCERTAINTIES } from "@/lib/results/declared-uncertainties";
+import { contributorText, readResultRecord, type ResultRecord } from "@/lib/results/result-record";
 import { AppError } from "@/lib/errors/app-error";
 import type { CurrentUser } from "../auth/current-user";
 import type { Tx } from "../db/transaction";
@@ -15,6 +15,20 @@ import { findProjectLimits } from "../specifications/find-project-limits";
 const PROPERTY_LABELS: Record<string, string> = { INDEX_FLUX: "Index flux", HYDRAULIC_CONDUCTIVITY: "Hydraulic conductivity at 20 °C" };
 const ACTION_WORDS: Record<string, string> = { RECEIVED: "received", STORED: "stored", CUT: "cut", PREPARED: "prepared", ASSIGNED: "mounted in a cell", TEST_STARTED: "permeation started", TESTED: "tested" };
 const iso = (d: Date | null | undefined) => (d ? d.toISOString() : null);
+
+/** What a result's record adds to its test on the certificate: calculation, criteria and settings version, leakage check, refills. */
+function recordLines(record: ResultRecord): Pick<CertificateTest, "calculation" | "criteria" | "leakage" | "refills"> {
+  return {
+    calculation: record.calculation.text,
+    criteria: {
+      settings: record.settings.label,
+      chosen: record.settings.chosen ? `chosen by ${record.settings.chosen.by}: ${record.settings.chosen.reason}` : null,
+      lines: record.criteria.map((c) => ({ name: c.name, limit: c.limit, met: c.met })),
+    },
+    leakage: "statement" in record.leakage ? record.leakage.statement : record.leakage.notRecorded,
+    refills: record.refills,
+  };
+}
 
 /** Everything a certificate revision will say, read inside the issuing transaction and frozen with it. */
 export async function buildCertificateSnapshot(tx: Tx, options: { revisionId: string; signer: CurrentUser; meaning: string; now: Date; baseUrl: string }): Promise<CertificateSnapshot> {
@@ -49,7 +63,10 @@ export async function buildCertificateSnapshot(tx: Tx, options: { revisionId: st
   const tests: CertificateTest[] = [];
   const samples = new Map<string, CertificateSample>();
   for (const run of runs) {
-    const { evaluation, inputReadings } = await evaluateRunRecords(tx, run.id, { uncertainty: DEMO_LAB_DECLARED_UNCERTAINTIES });
+    const { evaluation, inputReadings, refillsAtS } = await evaluateRunRecords(tx, run.id);
+    const runResults = revision.results.filter((r) => r.result.runId === run.id);
+    // Every result of a run is approved at once and carries the same record of how it was obtained.
+    const record = runResults.map((r) => readResultRecord(r.result.evaluation)).find((r) => r !== null) ?? null;
     const permeation = run.stages.find((s) => s.kind === "PERMEATION");
     const temperatures = inputReadings.map((r) => r.temperatureC);
     const roll = run.specimen.coupon.roll;
@@ -68,11 +85,12 @@ export async function buildCertificateSnapshot(tx: Tx, options: { revisionId: st
       },
       terminatedAt: iso(run.terminatedAt),
       termination: run.terminationKind === "EARLY_END" ? `ended early: ${run.terminationReason}` : "termination criteria met",
-      deviations: runDeviations({ ...run, checklist: run.specimen.checklist, correctedReadings: run._count.readings }),
-      results: revision.results
-        .filter((r) => r.result.runId === run.id)
+      deviations: runDeviations({ ...run, checklist: run.specimen.checklist, correctedReadings: run._count.readings, leakage: record && "flagged" in record.leakage && record.leakage.flagged ? record.leakage : null }),
+      ...(record && recordLines(record)),
+      results: runResults
         .map(({ result }) => {
           const limit = limits?.get(result.property) ?? null;
+          const uncertainty = readResultRecord(result.evaluation)?.uncertainty;
           return {
             property: result.property,
             label: PROPERTY_LABELS[result.property] ?? result.property,
@@ -82,9 +100,12 @@ export async function buildCertificateSnapshot(tx: Tx, options: { revisionId: st
             expandedUncertainty: result.expandedUncertainty,
             uncertaintyDisplay: result.expandedUncertainty === null ? null : formatUncertainty(result.expandedUncertainty, result.unit, { value: result.value }),
             conformance: limit ? conformanceSummary({ value: result.value, unit: result.unit }, limit) : null,
+            ...(uncertainty?.stated && { uncertaintyContributors: uncertainty.contributors.slice(0, 3).map(contributorText) }),
+            ...(uncertainty && !uncertainty.stated && { uncertaintyNote: uncertainty.reason }),
           };
         }),
       chart: (evaluation?.intervals ?? []).map((iv) => ({ hours: iv.toS / 3600, flux: iv.flux, k20: iv.k20 })),
+      refillHours: refillsAtS.map((s) => s / 3600),
       performedBy: run.performedBy.name,
       approvedBy: run.reviews[0]?.reviewer.name ?? revision.results.find((r) => r.result.runId === run.id)?.result.approvedBy?.name ?? "—",
       approvedAt: iso(run.reviews[0]?.createdAt) ?? "",

@@ -11,6 +11,8 @@ export type CertificateVerification = {
   pdfSha256: string | null;
   /** For a superseded revision: the issued revision that replaces it (null if the record does not say). */
   supersededBy: { revision: number } | null;
+  /** When a superseded or revoked revision stopped standing; null for a valid one. */
+  since: Date | null;
 };
 
 /**
@@ -24,7 +26,7 @@ export async function verifyCertificate(code: string): Promise<CertificateVerifi
   const row = await getDb().certificateRevision.findUnique({
     where: { verificationCode },
     select: {
-      status: true, revision: true, issuedAt: true, pdfSha256: true,
+      status: true, revision: true, issuedAt: true, pdfSha256: true, supersededAt: true, revokedAt: true,
       certificate: { select: { number: true } },
       supersededBy: { select: { revision: true, status: true } },
     },
@@ -38,5 +40,6 @@ export async function verifyCertificate(code: string): Promise<CertificateVerifi
     issuedAt: row.issuedAt,
     pdfSha256: row.pdfSha256,
     supersededBy: row.status === "SUPERSEDED" ? replacement : null,
+    since: row.status === "SUPERSEDED" ? row.supersededAt : row.status === "REVOKED" ? row.revokedAt : null,
   };
 }

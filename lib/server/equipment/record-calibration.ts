@@ -1,6 +1,7 @@
 import "server-only";
 import { AppError } from "@/lib/errors/app-error";
-import { calibrationValueErrors, mm2ToM2, recordCalibrationSchema } from "@/lib/validation/equipment";
+import { calibrationValuesToStore } from "@/lib/equipment/calibration-values";
+import { calibrationValueErrors, recordCalibrationSchema } from "@/lib/validation/equipment";
 import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
 import { withActor } from "../db/transaction";
@@ -8,7 +9,9 @@ import { parseOrThrow } from "../validation/parse";
 
 /**
  * The administrator records a calibration certificate. For a burette panel both burette areas are
- * required (entered in mm², stored in m² in Calibration.values), checked against the kind on record.
+ * required (entered in mm², stored in m² in Calibration.values), checked against the kind on record, with
+ * each burette's zero above the common datum and the scale's calibrated range when given; a measuring
+ * instrument may carry its standard uncertainty, a cell its apparatus leakage check.
  * Calibrations are never changed afterwards; a correction is a new calibration record.
  */
 export async function recordCalibration(options: { actor: CurrentUser; input: unknown }) {
@@ -21,10 +24,7 @@ export async function recordCalibration(options: { actor: CurrentUser; input: un
       throw new AppError("ILLEGAL_TRANSITION", `${equipment.assetTag} is retired; put it back in service before recording a calibration.`);
     const fieldErrors = calibrationValueErrors(equipment.kind, input);
     if (Object.keys(fieldErrors).length > 0) throw new AppError("INVALID_INPUT", `A burette panel's calibration must give both burette areas.`, { fieldErrors });
-    const values =
-      equipment.kind === "BURETTE_PANEL"
-        ? { inflowBuretteAreaM2: mm2ToM2(input.inflowBuretteAreaMm2!), outflowBuretteAreaM2: mm2ToM2(input.outflowBuretteAreaMm2!) }
-        : {};
+    const values = calibrationValuesToStore(equipment.kind, input);
     return tx.calibration.create({
       data: {
         equipmentId: equipment.id,

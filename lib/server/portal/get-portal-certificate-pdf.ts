@@ -1,6 +1,8 @@
 import "server-only";
 import type { RevisionStatus } from "@/lib/generated/prisma/client";
+import { certificatePdfFileName } from "@/lib/certificates/revision-standing";
 import { AppError } from "@/lib/errors/app-error";
+import { formatDate } from "@/lib/format/dates";
 import { certificatePdfRequestSchema } from "@/lib/validation/portal";
 import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
@@ -14,7 +16,8 @@ export type CertificatePdf = { fileName: string; pdf: Buffer; status: RevisionSt
  * The stored PDF of one certificate revision (`revision` omitted: the latest that is not a draft). A client
  * user gets only their own organisation's (portal.view); staff with certificate.view get any. A draft, a
  * revision that does not exist, another organisation's certificate, or a revision without a stored PDF is
- * NOT_FOUND.
+ * NOT_FOUND. A revoked revision is GONE for a client (it must not circulate as if valid); the laboratory's
+ * staff still get the file. The file name says when a revision is superseded or revoked.
  */
 export async function getCertificatePdf(options: { actor: CurrentUser; number: string; revision?: number | string | null }): Promise<CertificatePdf> {
   const { actor } = options;
@@ -27,11 +30,17 @@ export async function getCertificatePdf(options: { actor: CurrentUser; number: s
       certificate: { number, ...organizationScope(actor) },
     },
     orderBy: { revision: "desc" },
-    select: { revision: true, status: true, pdf: true },
+    select: { revision: true, status: true, pdf: true, revokedAt: true },
   });
   const named = revision !== undefined ? `certificate ${number} revision ${revision}` : `certificate ${number}`;
-  if (!found) throw new AppError("NOT_FOUND", `There is no issued ${named} that you may see.`);
+  // The query leaves drafts out; saying so again narrows the status to an issued one.
+  if (!found || found.status === "DRAFT") throw new AppError("NOT_FOUND", `There is no issued ${named} that you may see.`);
+  if (found.status === "REVOKED" && actor.role === "CLIENT_USER")
+    throw new AppError(
+      "GONE",
+      `Certificate ${number} revision ${found.revision} was revoked${found.revokedAt ? ` on ${formatDate(found.revokedAt)}` : ""}: the laboratory has withdrawn it and its results must not be relied on, so it is no longer offered for download. Ask the laboratory which certificate stands.`,
+    );
   if (!found.pdf)
     throw new AppError("NOT_FOUND", `No PDF is stored for certificate ${number} revision ${found.revision}; ask the laboratory for a copy.`);
-  return { fileName: `${number}-rev${found.revision}.pdf`, pdf: Buffer.from(found.pdf), status: found.status, revision: found.revision };
+  return { fileName: certificatePdfFileName(number, found.revision, found.status), pdf: Buffer.from(found.pdf), status: found.status, revision: found.revision };
 }

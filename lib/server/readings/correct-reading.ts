@@ -15,7 +15,7 @@ const FORM_FIELD: Record<SequenceField, string> = { time: "takenAt", inflowLevel
 
 const COMPARED = [
   "elapsedS", "inflowLevelMm", "outflowLevelMm", "influentPressurePa", "effluentPressurePa", "cellPressurePa", "temperatureC",
-  "influentEcMsPerM", "effluentEcMsPerM", "influentPh", "effluentPh",
+  "influentEcMsPerM", "effluentEcMsPerM", "influentPh", "effluentPh", "afterRefill",
 ] as const satisfies ReadonlyArray<keyof PreparedReading>;
 
 /**
@@ -42,7 +42,8 @@ export async function correctReading(options: { actor: CurrentUser; input: unkno
       permeationStartedAt: ctx.permeationStartedAt,
       now: options.now ?? new Date(),
       areasMm2: ctx.areasMm2,
-      reference: ctx.reference,
+      scaleRangeMm: ctx.scaleRangeMm,
+      reference: ctx.referenceAt(index - 1),
       previous: asNeighbour(ctx.current[index - 1]),
       next: asNeighbour(ctx.current[index + 1]),
       pressureUnit: input.pressureUnit,
@@ -62,8 +63,8 @@ export async function correctReading(options: { actor: CurrentUser; input: unkno
   });
 }
 
-function sameNumber(a: number | null, b: number | null): boolean {
-  if (a === null || b === null) return a === b;
+function sameNumber(a: number | boolean | null, b: number | boolean | null): boolean {
+  if (typeof a !== "number" || typeof b !== "number") return a === b;
   // A value shown in psi and sent back differs from the stored pascals in the last digits only.
   return Math.abs(a - b) <= 1e-6 * Math.max(1, Math.abs(a), Math.abs(b));
 }

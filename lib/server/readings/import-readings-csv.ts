@@ -58,7 +58,8 @@ export async function importReadingsCsv(options: { actor: CurrentUser; input: un
       permeationStartedAt: ctx.permeationStartedAt,
       now: options.now ?? new Date(),
       areasMm2: ctx.areasMm2,
-      reference: ctx.reference,
+      scaleRangeMm: ctx.scaleRangeMm,
+      reference: ctx.referenceAt(ctx.current.length - 1),
       previous: asNeighbour(ctx.current[ctx.current.length - 1]),
       pressureUnit: mapping.pressureUnit,
     });

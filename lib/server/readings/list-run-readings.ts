@@ -5,12 +5,13 @@ import { runTransition, type RunStateName } from "@/lib/runs/run-state-machine";
 import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
 import { getDb } from "../db/client";
+import { currentVolumesMl } from "@/lib/evaluation/current-volumes";
 import { BURETTE_PANEL_ROLE, buretteAreasMm2 } from "./reading-context";
 
 const READING_SELECT = {
   id: true, sequence: true, takenAt: true, elapsedS: true, inflowLevelMm: true, outflowLevelMm: true, inflowCumulativeMl: true, outflowCumulativeMl: true,
   headPa: true, influentPressurePa: true, effluentPressurePa: true, cellPressurePa: true, temperatureC: true,
-  influentEcMsPerM: true, effluentEcMsPerM: true, influentPh: true, effluentPh: true,
+  influentEcMsPerM: true, effluentEcMsPerM: true, influentPh: true, effluentPh: true, afterRefill: true,
   source: true, correctsId: true, correctionReason: true, createdAt: true,
   recordedBy: { select: { id: true, name: true } },
   correctedBy: { select: { id: true } },
@@ -37,20 +38,21 @@ export async function listRunReadings(options: { actor: CurrentUser; runId: stri
   const all = await db.reading.findMany({ where: { runId: run.id }, orderBy: [{ sequence: "asc" }, { createdAt: "asc" }], select: READING_SELECT });
 
   const current = all.filter((r) => !r.correctedBy).sort((a, b) => a.elapsedS - b.elapsedS);
+  const panel = run.equipment[0];
+  const areasMm2 = buretteAreasMm2(panel?.calibration?.values);
+  const volumes = new Map(currentVolumesMl(current, areasMm2).map((v, i) => [current[i]!.id, v]));
   const base = current[0];
   const withVolumes = <R extends (typeof all)[number]>(r: R) => ({
     ...r,
-    /** Cumulative inflow since the first current reading, mL (what lib/hydraulics gets). */
-    inflowMl: base ? r.inflowCumulativeMl - base.inflowCumulativeMl : r.inflowCumulativeMl,
-    outflowMl: base ? r.outflowCumulativeMl - base.outflowCumulativeMl : r.outflowCumulativeMl,
+    /** Cumulative inflow since the first current reading, mL, carried across refills (what lib/hydraulics gets). */
+    inflowMl: volumes.get(r.id)?.inflowMl ?? (base ? r.inflowCumulativeMl - base.inflowCumulativeMl : r.inflowCumulativeMl),
+    outflowMl: volumes.get(r.id)?.outflowMl ?? (base ? r.outflowCumulativeMl - base.outflowCumulativeMl : r.outflowCumulativeMl),
     corrected: r.correctsId !== null,
   });
   const history = new Map<number, Array<ReturnType<typeof withVolumes>>>();
   for (const r of all) history.set(r.sequence, [...(history.get(r.sequence) ?? []), withVolumes(r)]);
 
   const permeationStartedAt = run.stages[0]?.startedAt ?? null;
-  const panel = run.equipment[0];
-  const areasMm2 = buretteAreasMm2(panel?.calibration?.values);
   const step = runTransition(run.state as RunStateName, "record-reading");
   const whyNot = !can(options.actor.role, "run.operate")
     ? "Your role reads readings only; the technician performing the run records them."

@@ -1,7 +1,6 @@
 import "server-only";
-import { z } from "zod";
 import { AppError, type FieldErrors } from "@/lib/errors/app-error";
-import { MM_M } from "@/lib/hydraulics/units";
+import { readBurettePanel } from "@/lib/equipment/calibration-values";
 import type { NeighbourReading } from "@/lib/readings/check-reading-sequence";
 import type { PrepareProblem, PreparedReading, VolumeReference } from "@/lib/readings/prepare-readings";
 import { runTransition, type RunStateName } from "@/lib/runs/run-state-machine";
@@ -11,14 +10,10 @@ import type { Tx } from "../db/transaction";
 /** The role of the RunEquipment row whose calibration holds the burette areas. */
 export const BURETTE_PANEL_ROLE = "burette panel";
 
-const buretteAreasSchema = z.object({ inflowBuretteAreaM2: z.number().positive(), outflowBuretteAreaM2: z.number().positive() });
-
 /** Burette areas in mm^2 from a calibration's values ({ inflowBuretteAreaM2, outflowBuretteAreaM2 }), or null. */
 export function buretteAreasMm2(values: unknown): { inflow: number; outflow: number } | null {
-  const parsed = buretteAreasSchema.safeParse(values);
-  if (!parsed.success) return null;
-  const m2PerMm2 = MM_M * MM_M;
-  return { inflow: parsed.data.inflowBuretteAreaM2 / m2PerMm2, outflow: parsed.data.outflowBuretteAreaM2 / m2PerMm2 };
+  const panel = readBurettePanel(values);
+  return panel ? { inflow: panel.inflowAreaMm2, outflow: panel.outflowAreaMm2 } : null;
 }
 
 export const readingLabel = (sequence: number) => `Reading ${sequence}`;
@@ -59,25 +54,26 @@ export async function loadReadingContext(tx: Tx, options: { actor: CurrentUser; 
     select: {
       id: true, sequence: true, elapsedS: true, inflowLevelMm: true, outflowLevelMm: true, inflowCumulativeMl: true, outflowCumulativeMl: true,
       headPa: true, influentPressurePa: true, effluentPressurePa: true, cellPressurePa: true, temperatureC: true,
-      influentEcMsPerM: true, effluentEcMsPerM: true, influentPh: true, effluentPh: true, takenAt: true,
+      influentEcMsPerM: true, effluentEcMsPerM: true, influentPh: true, effluentPh: true, takenAt: true, afterRefill: true,
       correctedBy: { select: { id: true, createdAt: true, recordedBy: { select: { name: true } } } },
     },
   });
   const current = readings.filter((r) => !r.correctedBy).sort((a, b) => a.elapsedS - b.elapsedS);
-  // Saved volumes are relative to the run's first reading with levels; that row never changes, so it stays the anchor.
-  const anchor = readings.find((r) => r.inflowLevelMm !== null && r.outflowLevelMm !== null);
-  const reference: VolumeReference | null = anchor
-    ? { inflowLevelMm: anchor.inflowLevelMm!, outflowLevelMm: anchor.outflowLevelMm!, inflowCumulativeMl: anchor.inflowCumulativeMl, outflowCumulativeMl: anchor.outflowCumulativeMl }
-    : null;
-  if (readings.length > 0 && !reference)
+  if (current.some((r) => r.inflowLevelMm === null || r.outflowLevelMm === null))
     throw new AppError("INVALID_INPUT", `The readings of ${run.labNumber} so far were saved as volumes without burette levels, so new levels cannot be continued from them.`);
+  const scaleRangeMm = readBurettePanel(panel.calibration?.values)?.scaleRangeMm ?? null;
+  /** The current reading at `index` as the volumes of readings after it continue from (null before the first). */
+  const referenceAt = (index: number): VolumeReference | null => {
+    const r = current[index];
+    return r ? { inflowLevelMm: r.inflowLevelMm!, outflowLevelMm: r.outflowLevelMm!, inflowCumulativeMl: r.inflowCumulativeMl, outflowCumulativeMl: r.outflowCumulativeMl } : null;
+  };
   const nextSequence = readings.reduce((max, r) => Math.max(max, r.sequence), 0) + 1;
-  return { run, permeationStartedAt, areasMm2, readings, current, reference, nextSequence };
+  return { run, permeationStartedAt, areasMm2, scaleRangeMm, readings, current, referenceAt, nextSequence };
 }
 export type ReadingContext = Awaited<ReturnType<typeof loadReadingContext>>;
 
-export function asNeighbour(reading: { sequence: number; elapsedS: number; inflowLevelMm: number | null; outflowLevelMm: number | null } | undefined): NeighbourReading | null {
-  return reading ? { label: readingLabel(reading.sequence), elapsedS: reading.elapsedS, inflowLevelMm: reading.inflowLevelMm, outflowLevelMm: reading.outflowLevelMm } : null;
+export function asNeighbour(reading: { sequence: number; elapsedS: number; inflowLevelMm: number | null; outflowLevelMm: number | null; afterRefill: boolean } | undefined): NeighbourReading | null {
+  return reading ? { label: readingLabel(reading.sequence), elapsedS: reading.elapsedS, inflowLevelMm: reading.inflowLevelMm, outflowLevelMm: reading.outflowLevelMm, afterRefill: reading.afterRefill } : null;
 }
 
 /** Per-field messages keyed as the form names its fields, two messages on one field joined. */

@@ -28,7 +28,8 @@ export async function recordReadings(options: { actor: CurrentUser; input: unkno
       permeationStartedAt: ctx.permeationStartedAt,
       now: options.now ?? new Date(),
       areasMm2: ctx.areasMm2,
-      reference: ctx.reference,
+      scaleRangeMm: ctx.scaleRangeMm,
+      reference: ctx.referenceAt(ctx.current.length - 1),
       previous: asNeighbour(ctx.current[ctx.current.length - 1]),
       pressureUnit: input.pressureUnit,
     });

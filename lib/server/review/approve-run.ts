@@ -2,8 +2,8 @@ import "server-only";
 import { canApproveRun } from "@/lib/policy/permissions";
 import { runTransition, type RunStateName } from "@/lib/runs/run-state-machine";
 import { AppError } from "@/lib/errors/app-error";
-import { DEMO_LAB_DECLARED_UNCERTAINTIES } from "@/lib/results/declared-uncertainties";
-import { resultsFromEvaluation } from "@/lib/results/results-from-evaluation";
+import { resultRecord } from "@/lib/results/result-record";
+import { resultsOfVerdict } from "@/lib/results/results-of-verdict";
 import { approveRunSchema } from "@/lib/validation/review";
 import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
@@ -13,7 +13,10 @@ import { parseOrThrow } from "../validation/parse";
 
 /**
  * A QA manager approves a submitted run they did not perform: the review is recorded and the run's
- * results (from the hydraulics library, with expanded uncertainty) become approved results.
+ * results (from the hydraulics library, judged by the run's method settings version, with the expanded
+ * uncertainty propagated from the standard uncertainties of the instruments it used) become approved
+ * results, each with the record of how it was obtained. A cell whose latest leakage check is at or above
+ * the method's limit of the measured flow needs the QA manager's explicit acknowledgement.
  */
 export async function approveRun(options: { actor: CurrentUser; input: unknown; now?: Date }) {
   requirePermission(options.actor, "run.review");
@@ -28,16 +31,32 @@ export async function approveRun(options: { actor: CurrentUser; input: unknown; 
     const step = runTransition(run.state as RunStateName, "approve");
     if (!step.ok) throw new AppError("ILLEGAL_TRANSITION", `${run.labNumber}: ${step.message}`);
 
-    const { evaluation, reason } = await evaluateRunRecords(tx, run.id, { uncertainty: DEMO_LAB_DECLARED_UNCERTAINTIES });
-    if (!evaluation) throw new AppError("ILLEGAL_TRANSITION", `${run.labNumber} has no result to approve: ${reason}`);
-    const results = resultsFromEvaluation(evaluation, run.methodCode as "D5887" | "D5084" | "D6766", { allowEarlyEnd: run.terminationKind === "EARLY_END" });
+    const verdict = await evaluateRunRecords(tx, run.id);
+    if (!verdict.evaluation) throw new AppError("ILLEGAL_TRANSITION", `${run.labNumber} has no result to approve: ${verdict.reason}`);
+    let results: ReturnType<typeof resultsOfVerdict>;
+    try {
+      results = resultsOfVerdict(verdict, run.methodCode as "D5887" | "D5084" | "D6766", { earlyEnd: run.terminationKind === "EARLY_END" });
+    } catch (error) {
+      // The criteria of the settings version in use are not met (QA may have chosen another version): say so.
+      throw new AppError("ILLEGAL_TRANSITION", `${run.labNumber} (judged by ${verdict.settings.label}): ${error instanceof Error ? error.message : String(error)}`);
+    }
+    if (verdict.leakage?.flagged && !input.acknowledgeLeakage)
+      throw new AppError("INVALID_INPUT", `${verdict.leakage.statement} Tick the acknowledgement to approve anyway; the certificate will state it.`, {
+        fieldErrors: { acknowledgeLeakage: "Acknowledge the apparatus leakage to approve." },
+        details: { leakageWarning: true },
+      });
 
     await tx.review.create({ data: { runId: run.id, reviewerId: options.actor.id, decision: "APPROVED", comments: input.comments, createdAt: now } });
     const updated = await tx.run.updateMany({ where: { id: run.id, version: run.version }, data: { state: step.toState, version: { increment: 1 } } });
     if (updated.count !== 1) throw new AppError("CONFLICT");
+    const acknowledgedBy = verdict.leakage?.flagged ? options.actor.name : null;
     for (const r of results)
       await tx.result.create({
-        data: { runId: run.id, property: r.property, value: r.value, unit: r.unit, expandedUncertainty: r.expandedUncertainty, temperatureC: r.temperatureC, unitWeightBasis: r.unitWeightBasis, approvedById: options.actor.id, approvedAt: now },
+        data: {
+          runId: run.id, property: r.property, value: r.value, unit: r.unit, expandedUncertainty: r.expandedUncertainty, temperatureC: r.temperatureC, unitWeightBasis: r.unitWeightBasis,
+          methodSettingsVersionId: verdict.settings.versionId, evaluation: resultRecord(r.property, verdict, r.uncertaintyBudget, acknowledgedBy),
+          approvedById: options.actor.id, approvedAt: now,
+        },
       });
     return { labNumber: run.labNumber, results: results.length };
   });

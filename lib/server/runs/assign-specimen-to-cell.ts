@@ -9,6 +9,7 @@ import { allocateLabNumber } from "../db/allocate-lab-number";
 import { withActor } from "../db/transaction";
 import { applyCustodyAction } from "../custody/apply-custody-action";
 import { findEquipmentStatuses } from "../equipment/find-usable-equipment";
+import { findSettingsVersionInForce } from "../methods/settings-in-use";
 import { parseOrThrow } from "../validation/parse";
 import { ACTIVE_RUN_STATES, explainRunCollision } from "./run-collision";
 
@@ -29,6 +30,8 @@ export async function assignSpecimenToCell(options: { actor: CurrentUser; input:
       [input.burettePanelId, "burette panel", "BURETTE_PANEL", "burettePanelId"],
       [input.transducerId, "pressure transducer", "PRESSURE_TRANSDUCER", "transducerId"],
       [input.thermometerId, "thermometer", "THERMOMETER", "thermometerId"],
+      [input.thicknessGaugeId, "thickness gauge", "THICKNESS_GAUGE", "thicknessGaugeId"],
+      [input.timerId, "timer", "TIMER", "timerId"],
     ];
     const used = roles.filter((r): r is [string, string, string, string] => !!r[0]);
     const statuses = await findEquipmentStatuses({ ids: used.map((r) => r[0]), now, tx });
@@ -53,6 +56,8 @@ export async function assignSpecimenToCell(options: { actor: CurrentUser; input:
       throw new AppError("INVALID_INPUT", `${burette.assetTag} has no calibrated burette areas; record its calibration first.`, { fieldErrors: { burettePanelId: "No burette areas." } });
 
     const labNumber = await allocateLabNumber(tx, "run", now);
+    // The run is judged by the method settings in force now, whatever later versions say.
+    const settingsVersion = await findSettingsVersionInForce(tx, input.methodCode, now);
     await applyCustodyAction(tx, { actor: options.actor, kind: "specimen", id: input.specimenId, action: "ASSIGNED", at: now, note: `Run ${labNumber} in ${statuses.get(input.cellId)!.assetTag}` });
     const run = await tx.run.create({
       data: {
@@ -61,6 +66,7 @@ export async function assignSpecimenToCell(options: { actor: CurrentUser; input:
         permeantName: input.permeantName || null, permeantSalt: input.permeantSalt || null, permeantMolarityMolPerL: input.permeantMolarityMolPerL ?? null,
         permeantEcMsPerM: input.permeantEcMsPerM ?? null, permeantPh: input.permeantPh ?? null,
         calibrationOverrideReason: override?.reason ?? null, calibrationOverrideById: override?.grantedById ?? null,
+        methodSettingsVersionId: settingsVersion?.id ?? null,
         equipment: { create: used.map(([id, role]) => ({ equipmentId: id, role, calibrationId: statuses.get(id)!.latestCalibrationId })) },
       },
       select: { id: true, labNumber: true },

@@ -1,33 +1,50 @@
 import "server-only";
-import { evaluateRun, type EvaluateRunOptions, type RunEvaluation, type RunInput, type TestMethod } from "@/lib/hydraulics";
-import type { Tx } from "../db/transaction";
+import { readBurettePanel, readLeakageCheck } from "@/lib/equipment/calibration-values";
+import { evaluateRunContext, type RunEvaluationContext, type RunVerdict } from "@/lib/evaluation/run-evaluation-context";
+import type { TestMethod } from "@/lib/hydraulics";
 import type { Db } from "../db/client";
-import { toHydraulicsReadings } from "../readings/to-hydraulics-input";
+import type { Tx } from "../db/transaction";
+import { loadSettingsInUse } from "../methods/settings-in-use";
+import { BURETTE_PANEL_ROLE } from "../readings/reading-context";
 
-type Source = Pick<Db, "reading" | "run">;
+type Source = Pick<Db, "reading" | "run" | "methodSettingsVersion" | "calibration"> | Tx;
 
-/**
- * The hydraulics library's verdict on a run's current readings, or why there is none yet. The gradient
- * uses the post-test bentonite layer thickness once it is measured, the initial specimen thickness before.
- */
-export async function evaluateRunRecords(db: Source | Tx, runId: string, options: EvaluateRunOptions = {}): Promise<{ evaluation: RunEvaluation | null; reason: string | null; thicknessBasis: "post-test" | "initial"; inputReadings: RunInput["readings"] }> {
+/** A run's records as the pure evaluation builder takes them (lib/evaluation/run-evaluation-context.ts). */
+export async function loadRunEvaluationContext(db: Source, runId: string): Promise<RunEvaluationContext> {
   const run = await db.run.findUniqueOrThrow({
     where: { id: runId },
-    select: { methodCode: true, postTestThicknessMm: true, specimen: { select: { dieDiameterMm: true, initialThicknessMm: true } } },
+    select: {
+      methodCode: true, assignedAt: true, postTestThicknessMm: true, cellId: true, methodSettingsVersionId: true, settingsChoiceReason: true,
+      settingsChosenBy: { select: { name: true } },
+      cell: { select: { assetTag: true } },
+      specimen: { select: { dieDiameterMm: true, initialThicknessMm: true, moistureContentPct: true, bentoniteDryMassG: true, bentoniteMassPerAreaKgPerM2: true, specificGravity: true } },
+      equipment: { select: { role: true, equipment: { select: { assetTag: true, kind: true } }, calibration: { select: { reference: true, values: true } } } },
+    },
   });
-  const readings = await db.reading.findMany({ where: { runId, correctedBy: null }, orderBy: { elapsedS: "asc" } });
-  const thicknessBasis = run.postTestThicknessMm ? "post-test" : "initial";
-  const inputReadings = toHydraulicsReadings(readings);
-  if (readings.length < 2) return { evaluation: null, reason: "At least two readings are needed before anything can be calculated.", thicknessBasis, inputReadings };
-  try {
-    const evaluation = evaluateRun({
-      method: run.methodCode as TestMethod,
-      specimen: { diameterMm: run.specimen.dieDiameterMm, thicknessMm: run.postTestThicknessMm ?? run.specimen.initialThicknessMm },
-      readings: inputReadings,
-    }, options);
-    return { evaluation, reason: null, thicknessBasis, inputReadings };
-  } catch (error) {
-    // The library names the offending field; the readings page shows it so the technician can correct it.
-    return { evaluation: null, reason: error instanceof Error ? error.message : String(error), thicknessBasis, inputReadings };
-  }
+  const [readings, settings, cellCalibrations] = await Promise.all([
+    db.reading.findMany({ where: { runId, correctedBy: null }, orderBy: { elapsedS: "asc" } }),
+    loadSettingsInUse(db, run),
+    db.calibration.findMany({ where: { equipmentId: run.cellId }, orderBy: [{ calibratedAt: "desc" }, { createdAt: "desc" }], select: { values: true } }),
+  ]);
+  const panel = run.equipment.find((e) => e.role === BURETTE_PANEL_ROLE);
+  const leakage = cellCalibrations.map((c) => readLeakageCheck(c.values)).find((c) => c !== null) ?? null;
+  return {
+    methodCode: run.methodCode as TestMethod,
+    specimen: run.specimen,
+    postTestThicknessMm: run.postTestThicknessMm,
+    readings,
+    burettePanel: readBurettePanel(panel?.calibration?.values),
+    settings,
+    instruments: run.equipment.map((e) => ({ role: e.role, assetTag: e.equipment.assetTag, kind: e.equipment.kind, calibrationReference: e.calibration?.reference ?? null, values: e.calibration?.values ?? null })),
+    cellLeakage: leakage ? { cell: run.cell.assetTag, check: leakage } : null,
+  };
+}
+
+/**
+ * The hydraulics library's verdict on a run's current readings, or why there is none yet, with how it was
+ * computed. The gradient uses the post-test bentonite layer thickness once it is measured, the initial
+ * specimen thickness before.
+ */
+export async function evaluateRunRecords(db: Source, runId: string): Promise<RunVerdict> {
+  return evaluateRunContext(await loadRunEvaluationContext(db, runId));
 }

@@ -6,7 +6,7 @@ import { getDb } from "../db/client";
 import { runDeviations } from "@/lib/runs/deviations";
 import { evaluateRunRecords } from "./evaluate-run-records";
 
-/** A run with its specimen, instruments, stages and reviews, and the hydraulics verdict on its readings. */
+/** A run with its specimen, instruments, stages and reviews, its deviations, and the verdict on its readings (lib/evaluation). */
 export async function getRun(options: { actor: CurrentUser; labNumber: string }) {
   requirePermission(options.actor, "run.view");
   const db = getDb();
@@ -25,6 +25,6 @@ export async function getRun(options: { actor: CurrentUser; labNumber: string })
   });
   if (!run) throw new AppError("NOT_FOUND");
   const [verdict, correctedReadings] = await Promise.all([evaluateRunRecords(db, run.id), db.reading.count({ where: { runId: run.id, correctsId: { not: null } } })]);
-  const deviations = runDeviations({ ...run, checklist: run.specimen.checklist, correctedReadings });
-  return { run, deviations, ...verdict };
+  const deviations = runDeviations({ ...run, checklist: run.specimen.checklist, correctedReadings, leakage: verdict.leakage?.flagged ? { statement: verdict.leakage.statement, acknowledgedBy: null } : null });
+  return { run, deviations, verdict };
 }

@@ -32,7 +32,8 @@ export async function prepareSpecimen(options: { actor: CurrentUser; input: unkn
     const specimen = await tx.specimen.create({
       data: {
         labNumber, couponId: input.couponId, dieDiameterMm: input.dieDiameterMm, initialThicknessMm: input.initialThicknessMm, initialMassG: input.initialMassG,
-        moistureContentPct: input.moistureContentPct ?? null, intendedMethodCode: input.intendedMethodCode, preparedById: options.actor.id, preparedAt: input.preparedAt,
+        moistureContentPct: input.moistureContentPct ?? null, bentoniteDryMassG: input.bentoniteDryMassG ?? null,
+        bentoniteMassPerAreaKgPerM2: input.bentoniteMassPerAreaKgPerM2 ?? null, specificGravity: input.specificGravity ?? null, intendedMethodCode: input.intendedMethodCode, preparedById: options.actor.id, preparedAt: input.preparedAt,
         storageLocationId: input.storageLocationId,
         checklist: { create: checklist.map((item) => ({ itemKey: item.key, question: item.question, answer: input.checklist[item.key] === true })) },
       },

@@ -32,8 +32,18 @@ describe("certificate document", () => {
     expect(t).toContain("8.7 × 10⁻¹¹ m/s ± 0.92 × 10⁻¹¹ m/s"); // the unit is not printed twice, nor "(k = 2)" under a heading saying it
     expect(t).not.toMatch(/m\/s m\/s/);
     expect(t).toContain("8.7e-11 m/s, rounded to 9e-11 (ASTM E29, half to even), exceeds the maximum of 5e-11 m/s: does not conform.");
-    expect(t).toContain("Compared value 9e-11 m/s Limit maximum 5e-11 m/s");
+    expect(t).toContain("Measured value 8.70 × 10⁻¹¹ m/s Rounded value compared 9e-11 m/s Limit maximum 5e-11 m/s");
+    // ASTM E29 in words: where rounding to the limit's place gives 0, the certificate says what that 0 means.
+    expect(t).toContain("Measured 2.43 × 10⁻⁹ m³/m²/s; rounded to the nearest 1 × 10⁻⁸ m³/m²/s it reads 0. That 0 is not a measured zero: the result is smaller than half of 1 × 10⁻⁸ m³/m²/s, so it does not exceed the maximum.");
+    expect(t).toContain("Measured 8.70 × 10⁻¹¹ m/s; rounded 9 × 10⁻¹¹ m/s.");
     expect(t).toContain("4 results were compared with the specification: 3 conform, 1 does not.");
+    // How the first test's result was obtained: calculation, refills, criteria with their settings version, leakage, contributors.
+    expect(t).toContain("Calculation. Falling head with rising tail (ASTM D5084 method C)");
+    expect(t).toContain("The burettes were refilled or drained 1 time; no interval spans a refill.");
+    expect(t).toContain("Termination criteria of ASTM D5887 settings, version 2: Outflow/inflow ratio: 0.75 ≤ outflow/inflow ≤ 1.25 for each of the last 4 intervals");
+    expect(t).toContain("Apparatus leakage. Apparatus leakage of cell CELL-01");
+    expect(t).toContain("Uncertainty of index flux: expanded, coverage factor k = 2 (about 95 %); largest contributors (relative standard uncertainty): burette readings 1.8 % (BP-01 calibration CAL-BP-01-2026); die diameter");
+    expect(html(s).match(/data-refill=""/g)).toHaveLength(2);
     const markup = html(s);
     expect(markup.match(/data-testid="chart-flux"/g)).toHaveLength(3);
     expect(markup.match(/<polyline /g)).toHaveLength(6);

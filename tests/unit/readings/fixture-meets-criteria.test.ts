@@ -1,10 +1,10 @@
 import { readFileSync } from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
-import { evaluateRun } from "@/lib/hydraulics";
+import { evaluateRunContext } from "@/lib/evaluation/run-evaluation-context";
+import { D5887_SETTINGS } from "@/lib/methods/d5887/settings";
 import { prepareReadings } from "@/lib/readings/prepare-readings";
 import { applyReadingsMapping, parseReadingsCsv, suggestReadingsMapping } from "@/lib/readings/readings-csv";
-import { toHydraulicsReadings } from "@/lib/server/readings/to-hydraulics-input";
 
 const fixture = (name: string) => readFileSync(path.resolve(import.meta.dirname, "../../../e2e/fixtures", name), "utf8");
 // Areas as the e2e test's burette panel calibration holds them (invented): 31.4 mm² in, 31.2 mm² out.
@@ -18,14 +18,24 @@ function read(name: string) {
 }
 
 describe("the invented D5887 data-logger file of the end-to-end test", () => {
-  it("reads cleanly with the suggested mapping, and lib/hydraulics says the termination criteria are met at about 2e-9 m³/m²/s", () => {
+  it("reads cleanly with the suggested mapping, and the app's evaluation says the termination criteria are met at about 2e-9 m³/m²/s", () => {
     const { mapped, rows, problems } = read("readings-d5887.csv");
     expect(mapped.flatMap((m) => m.errors)).toEqual([]);
     expect(problems).toEqual([]);
     expect(rows.length).toBeGreaterThanOrEqual(10);
     expect(rows.length).toBeLessThanOrEqual(14);
-    const readings = toHydraulicsReadings(rows.map((r) => ({ ...r })));
-    const evaluation = evaluateRun({ method: "D5887", specimen: { diameterMm: 100, thicknessMm: 6 }, readings });
+    const verdict = evaluateRunContext({
+      methodCode: "D5887",
+      specimen: { dieDiameterMm: 100, initialThicknessMm: 6, moistureContentPct: null, bentoniteDryMassG: null, bentoniteMassPerAreaKgPerM2: null, specificGravity: null },
+      postTestThicknessMm: null,
+      readings: rows,
+      burettePanel: { inflowAreaMm2: AREAS_MM2.inflow, outflowAreaMm2: AREAS_MM2.outflow, inflowZeroAboveDatumMm: 0, outflowZeroAboveDatumMm: 0, scaleRangeMm: null },
+      settings: { versionId: null, methodCode: "D5887", version: 1, label: "ASTM D5887 settings, version 1", chosen: null, values: D5887_SETTINGS.defaults },
+      instruments: [],
+      cellLeakage: null,
+    });
+    expect(verdict.calculation.key).toBe("falling-head-rising-tail");
+    const evaluation = verdict.evaluation!;
     expect(evaluation.termination.met).toBe(true);
     expect(evaluation.reported.flux).toBeGreaterThan(1.5e-9);
     expect(evaluation.reported.flux).toBeLessThan(2.5e-9);

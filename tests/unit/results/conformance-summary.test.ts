@@ -14,12 +14,31 @@ const FLUX_MAX = limit("1e-8", "m3/m2/s", "MAXIMUM");
 const SWELL_MIN = limit("24", "mL/2 g", "MINIMUM");
 const MASS_MIN = limit("3.66", "kg/m2", "MINIMUM");
 
+describe("ASTM E29 in plain words", () => {
+  it("a small flux that rounds to 0 at the limit's place is explained as a rounded comparison, not a measured zero", () => {
+    // 2.4e-9 against GRI-GCL3's 1e-8 m³/m²/s (DOMAIN.md), rounded to the nearest 1e-8, half to even: 0.24 → 0.
+    const s = conformanceSummary({ value: 2.4e-9, unit: "m3/m2/s" }, limit("1e-8", "m3/m2/s", "MAXIMUM"));
+    expect(s).toMatchObject({ comparedValue: "0", conforms: true, measuredValue: "2.40 × 10⁻⁹ m³/m²/s" });
+    expect(s.plainRule).toContain("rounded to the nearest 1 × 10⁻⁸ m³/m²/s it reads 0. That 0 is not a measured zero: the result is smaller than half of 1 × 10⁻⁸ m³/m²/s, so it does not exceed the maximum.");
+  });
+
+  it("for a minimum, a result that rounds to 0 falls short of it; the absolute method says so in words too", () => {
+    const s = conformanceSummary({ value: 0.4, unit: "kg/m2" }, limit("3", "kg/m2", "MINIMUM"));
+    expect(s).toMatchObject({ comparedValue: "0", conforms: false });
+    expect(s.plainRule).toMatch(/so it falls short of the minimum\.$/);
+    const a = conformanceSummary({ value: 5.01e-11, unit: "m/s" }, { ...limit("5e-11", "m/s", "MAXIMUM"), conformanceMethod: "ABSOLUTE" });
+    expect(a.plainRule).toBe("The result as measured, 5.01 × 10⁻¹¹ m/s, is compared with the limit; any excursion beyond it fails (ASTM E29 absolute method).");
+  });
+});
+
 describe("hydraulic conductivity against the GRI-GCL3 maximum of 5e-11 m/s", () => {
   it("5.4e-11 rounds to 5e-11 and conforms (rounding method)", () => {
     const s = conformanceSummary({ value: 5.4e-11, unit: "m/s" }, K_MAX);
     expect(s).toEqual({
       limitText: "5e-11", unit: "m/s", direction: "MAXIMUM", method: "ROUNDING", comparedValue: "5e-11", conforms: true,
       statement: "5.4e-11 m/s, rounded to 5e-11 (ASTM E29, half to even), does not exceed the maximum of 5e-11 m/s: conforms.",
+      measuredValue: "5.40 × 10⁻¹¹ m/s",
+      plainRule: "The specification states its limit to the nearest 1 × 10⁻¹¹ m/s, so the result is rounded once to that place, halves to even, and the rounded value is compared with the limit (ASTM E29 rounding method). Measured 5.40 × 10⁻¹¹ m/s; rounded 5 × 10⁻¹¹ m/s.",
     });
   });
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { evaluateRun, validateDeclaredUncertainties, type Reading, type RunInput } from "../../../lib/hydraulics";
-import { DEMO_LAB_DECLARED_UNCERTAINTIES } from "../../../lib/results/declared-uncertainties";
+import { DEMO_LAB_DECLARED_UNCERTAINTIES } from "../../../prisma/seed/demo-uncertainties";
 import { resultsFromEvaluation } from "../../../lib/results/results-from-evaluation";
 
 const specimen = { diameterMm: 100, thicknessMm: 5 };

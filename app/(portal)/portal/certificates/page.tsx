@@ -12,7 +12,8 @@ export default async function PortalCertificatesPage() {
       <h1>Certificates</h1>
       <p className="muted">
         Every certificate the laboratory has issued to your organisation, with each revision. A superseded revision stays
-        downloadable and says which revision replaced it; anyone can check a certificate with its verification code.
+        downloadable and says which revision replaced it; a revoked one is marked revoked and no longer offered, since its
+        results must not be relied on. Anyone can check a certificate with its verification code.
       </p>
       <section className="card">
         <h2>Issued certificates <span className="count">{certificates.length === 0 ? "none yet" : certificates.length}</span></h2>

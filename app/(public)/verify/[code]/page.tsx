@@ -2,6 +2,7 @@ import Link from "next/link";
 import { notFound, redirect } from "next/navigation";
 import { Wordmark } from "@/components/shell/wordmark";
 import { formatDate } from "@/lib/format/dates";
+import { revisionStanding } from "@/lib/certificates/revision-standing";
 import { normaliseVerificationCode } from "@/lib/certificates/verification-code";
 import { verifyCertificate, type CertificateVerification } from "@/lib/server/certificates/verify-certificate";
 import { getLabName } from "@/lib/server/lab/get-lab-name";
@@ -11,19 +12,18 @@ export const dynamic = "force-dynamic";
 
 const NOWRAP = { whiteSpace: "nowrap" } as const;
 
+const TONE = { ok: "notice-ok", warn: "notice-caution", bad: "notice-error" } as const;
+const STATUS_NAME = { VALID: "valid", SUPERSEDED: "superseded", REVOKED: "revoked" } as const;
+
 function Status({ result }: { result: CertificateVerification }) {
-  if (result.status === "VALID")
-    return <div className="notice notice-ok" data-testid="verify-status" data-status="valid"><strong>Valid.</strong> This is the current revision of the certificate.</div>;
-  if (result.status === "SUPERSEDED")
-    return (
-      <div className="notice notice-caution" data-testid="verify-status" data-status="superseded">
-        <strong>Superseded{result.supersededBy ? ` by revision ${result.supersededBy.revision}` : ""}.</strong> This revision has been replaced
-        and no longer stands; ask the issuer for the {result.supersededBy ? `revision ${result.supersededBy.revision} certificate` : "current revision"}.
-      </div>
-    );
+  const standing = revisionStanding({
+    status: result.status === "VALID" ? "ISSUED" : result.status,
+    supersededByRevision: result.supersededBy?.revision ?? null,
+    since: result.since,
+  });
   return (
-    <div className="notice notice-error" data-testid="verify-status" data-status="revoked">
-      <strong>Revoked.</strong> The laboratory has withdrawn this certificate; its results must not be relied on.
+    <div className={`notice ${TONE[standing.tone]}`} data-testid="verify-status" data-status={STATUS_NAME[result.status]}>
+      <strong>{standing.headline}</strong> {standing.detail}
     </div>
   );
 }

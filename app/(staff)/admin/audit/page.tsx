@@ -1,37 +1,55 @@
-import { QueueCard } from "@/components/ui/queue-card";
-import { formatDateTime } from "@/lib/format/dates";
+import { AuditFilterForm } from "@/components/audit/audit-filter-form";
+import { AuditPager } from "@/components/audit/audit-pager";
+import { AuditTable } from "@/components/audit/audit-table";
+import styles from "@/components/audit/audit.module.css";
+import { AUDIT_TABLE_CHOICES } from "@/lib/audit/audit-tables";
+import { isAppError } from "@/lib/errors/app-error";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
-import { listAuditEntries } from "@/lib/server/audit/list-audit-entries";
+import { findAuditEntries, type AuditEntryPage } from "@/lib/server/audit/find-audit-entries";
+import { listAuditPeople } from "@/lib/server/audit/list-audit-people";
+import { AUDIT_PAGE_SIZE, auditSearch, readAuditFilterText, readAuditPaging } from "@/lib/validation/audit";
 
 export const metadata = { title: "Audit trail" };
 
-function changedFields(before: unknown, after: unknown): string {
-  if (!before || !after || typeof before !== "object" || typeof after !== "object") return "";
-  const b = before as Record<string, unknown>;
-  const a = after as Record<string, unknown>;
-  return Object.keys(a).filter((k) => k !== "updatedAt" && JSON.stringify(a[k]) !== JSON.stringify(b[k])).join(", ");
-}
+type SearchParams = Record<string, string | string[] | undefined>;
 
-export default async function AuditPage() {
+export default async function AuditPage({ searchParams }: { searchParams: Promise<SearchParams> }) {
   const actor = await requirePageUser("audit.view");
-  const entries = await listAuditEntries({ actor });
+  const raw = await searchParams;
+  const filter = readAuditFilterText(raw);
+  const paging = readAuditPaging(raw);
+  const pageSize = paging.pageSize ?? AUDIT_PAGE_SIZE;
+  const people = await listAuditPeople({ actor });
+  // A refused filter shows its sentence and no rows: nothing else is searched.
+  let page: AuditEntryPage | null = null;
+  let refusal: { message: string; fieldErrors: Record<string, string> } | null = null;
+  try {
+    page = await findAuditEntries({ actor, input: { ...filter, ...paging } });
+  } catch (error) {
+    if (!isAppError(error) || error.code !== "INVALID_INPUT") throw error;
+    const messages = [...new Set(Object.values(error.fieldErrors))];
+    refusal = { message: messages.length ? messages.join(" ") : error.message, fieldErrors: error.fieldErrors };
+  }
+  const filtered = Object.keys(filter).length > 0;
   return (
     <>
       <h1>Audit trail</h1>
-      <p className="muted">Every insert, update and delete on the record tables, written by the database itself. These rows cannot be changed or removed.</p>
-      <QueueCard title="Latest changes" count={entries.length} empty="No change recorded yet." testId="audit-list">
-        <table className="list">
-          <thead><tr><th>When</th><th>Who</th><th>Table</th><th>Change</th><th>Fields changed</th></tr></thead>
-          <tbody>
-            {entries.map((e) => (
-              <tr key={e.id}>
-                <td>{formatDateTime(e.occurredAt)}</td><td>{e.actorName}</td><td className="mono">{e.tableName}</td>
-                <td>{e.operation.toLowerCase()}</td><td className="muted">{e.operation === "UPDATE" ? changedFields(e.before, e.after) : ""}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </QueueCard>
+      <p className="muted">
+        Every change to the laboratory's records, written by the database itself as it happens; these rows cannot be changed or removed.
+        Values are shown in words and in your units; times are UTC.
+      </p>
+      <AuditFilterForm values={filter} pageSize={pageSize} serverErrors={refusal?.fieldErrors ?? {}} tables={AUDIT_TABLE_CHOICES} people={people} />
+      {refusal && <div className="notice notice-error" role="alert" data-testid="audit-refusal">{refusal.message}</div>}
+      {page && (
+        <section className="card" data-testid="audit-list">
+          <div className={styles.head}>
+            <h2>{filtered ? "Changes that match" : "All changes"} <span className="count">{page.entries.length === 0 ? "none" : `${page.entries.length} on this page`}</span></h2>
+            {page.entries.length > 0 && <a className="button button-quiet" href={`/api/audit/export${auditSearch(filter)}`} download data-testid="audit-csv">Download all that match (CSV)</a>}
+          </div>
+          {page.entries.length === 0 ? <p className="empty">No change matches this filter.</p> : <div className="table-wrap"><AuditTable entries={page.entries} /></div>}
+          <AuditPager filter={filter} pageSize={pageSize} newer={page.newer} older={page.older} paged={Boolean(paging.before || paging.after)} />
+        </section>
+      )}
     </>
   );
 }

@@ -1,8 +1,11 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { ReadingsPanel } from "@/components/readings/readings-panel";
+import { ChooseSettingsForm } from "@/components/review/choose-settings-form";
+import { ResultPreview } from "@/components/review/result-preview";
 import { ReviewDecision } from "@/components/review/review-decision";
 import { CriteriaPanel } from "@/components/runs/criteria-panel";
+import { EvaluationBasis } from "@/components/runs/evaluation-basis";
 import { RunCharts } from "@/components/runs/run-charts";
 import { RunStagesTable } from "@/components/runs/run-stages-table";
 import { RecordFacts } from "@/components/samples/record-facts";
@@ -12,7 +15,9 @@ import { formatDateTime } from "@/lib/format/dates";
 import { canApproveRun } from "@/lib/policy/permissions";
 import { toChartPoints } from "@/lib/runs/chart-points";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
+import { listMethodSettings } from "@/lib/server/methods/list-method-settings";
 import { getRun } from "@/lib/server/runs/get-run";
+import type { TestMethod } from "@/lib/hydraulics";
 
 type Props = { params: Promise<{ labNumber: string }> };
 
@@ -23,11 +28,13 @@ export async function generateMetadata({ params }: Props) {
 export default async function ReviewRunPage({ params }: Props) {
   const actor = await requirePageUser("run.review");
   const { labNumber } = await params;
-  const { run, evaluation, reason, deviations, inputReadings } = await getRun({ actor, labNumber }).catch((error) => {
+  const { run, deviations, verdict } = await getRun({ actor, labNumber }).catch((error) => {
     if (isAppError(error) && error.code === "NOT_FOUND") notFound();
     throw error;
   });
+  const { evaluation, reason, inputReadings } = verdict;
   const allowed = canApproveRun(actor, run);
+  const versions = run.state === "SUBMITTED" && allowed.ok ? ((await listMethodSettings({ actor, methodCode: run.methodCode }))[0]?.versions ?? []) : [];
   return (
     <>
       <div className="page-head">
@@ -53,15 +60,24 @@ export default async function ReviewRunPage({ params }: Props) {
         <ReadingsPanel runId={run.id} labNumber={run.labNumber} actor={actor} />
         {evaluation ? (
           <>
-            <CriteriaPanel met={evaluation.termination.met} criteria={evaluation.termination.criteria} />
-            <RunCharts points={toChartPoints(evaluation.intervals, inputReadings)} ratioBand={[evaluation.settings.ratioMin, evaluation.settings.ratioMax]} />
+            <EvaluationBasis verdict={verdict} />
+            <CriteriaPanel met={evaluation.termination.met} criteria={evaluation.termination.criteria} trend={verdict.trend} settingsLabel={verdict.settings.label} />
+            {run.state === "SUBMITTED" && <ResultPreview verdict={verdict} method={run.methodCode as TestMethod} earlyEnd={run.terminationKind === "EARLY_END"} />}
+            <RunCharts points={toChartPoints(evaluation.intervals, inputReadings, verdict.poreVolume.ml)} ratioBand={[evaluation.settings.ratioMin, evaluation.settings.ratioMax]} refillHours={verdict.refillsAtS.map((s) => s / 3600)} />
           </>
         ) : <p className="notice notice-caution">{reason}</p>}
         {run.reviews.length > 0 && <section className="card"><h2>Earlier reviews</h2><ul>{run.reviews.map((r) => <li key={r.id}>{formatDateTime(r.createdAt)} · {r.reviewer.name}: {r.decision.toLowerCase()} {r.comments && `— ${r.comments}`}</li>)}</ul></section>}
         {run.state === "SUBMITTED" && (
           <section className="card">
             <h2>Decision</h2>
-            {allowed.ok ? <ReviewDecision runId={run.id} version={run.version} /> : <p className="notice notice-caution" data-testid="review-refused">{allowed.reason}</p>}
+            {allowed.ok ? <ReviewDecision runId={run.id} version={run.version} leakageWarning={verdict.leakage?.flagged ? verdict.leakage.statement : null} /> : <p className="notice notice-caution" data-testid="review-refused">{allowed.reason}</p>}
+          </section>
+        )}
+        {run.state === "SUBMITTED" && allowed.ok && (
+          <section className="card">
+            <h2>Settings version</h2>
+            <p className="muted">The run is judged by {verdict.settings.label}. To judge it by another version of the method&apos;s settings, choose it with the reason; the result and the certificate will name it.</p>
+            <ChooseSettingsForm runId={run.id} version={run.version} versions={versions} currentId={verdict.settings.versionId} />
           </section>
         )}
       </div>

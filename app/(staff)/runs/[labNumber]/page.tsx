@@ -2,6 +2,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { RecordFacts } from "@/components/samples/record-facts";
 import { CriteriaPanel } from "@/components/runs/criteria-panel";
+import { EvaluationBasis } from "@/components/runs/evaluation-basis";
 import { PressureCaution } from "@/components/runs/pressure-caution";
 import { RunCharts } from "@/components/runs/run-charts";
 import { RunStagesTable } from "@/components/runs/run-stages-table";
@@ -32,10 +33,11 @@ function projectedText(permeationStart: Date | null, projectedAtS: number | null
 export default async function RunPage({ params }: Props) {
   const actor = await requirePageUser("run.view");
   const { labNumber } = await params;
-  const { run, evaluation, reason, thicknessBasis, inputReadings } = await getRun({ actor, labNumber }).catch((error) => {
+  const { run, verdict } = await getRun({ actor, labNumber }).catch((error) => {
     if (isAppError(error) && error.code === "NOT_FOUND") notFound();
     throw error;
   });
+  const { evaluation, reason, inputReadings } = verdict;
   const steps = allowedRunSteps(run.state as RunStateName);
   const mine = can(actor.role, "run.operate") && run.performedById === actor.id;
   const permeation = run.stages.find((s) => s.kind === "PERMEATION") ?? null;
@@ -79,14 +81,19 @@ export default async function RunPage({ params }: Props) {
         {permeation && <ReadingsPanel runId={run.id} labNumber={run.labNumber} actor={actor} />}
         {evaluation ? (
           <>
-            <CriteriaPanel met={evaluation.termination.met} criteria={evaluation.termination.criteria} />
+            <CriteriaPanel met={evaluation.termination.met} criteria={evaluation.termination.criteria} trend={verdict.trend} settingsLabel={verdict.settings.label} />
             <section className="card" data-testid="projection">
               <h2>Projected end</h2>
               <p>{evaluation.termination.met ? "The criteria are met now." : projectedText(permeation?.startedAt ?? null, evaluation.projection.projectedAtS, evaluation.projection.reason)}</p>
-              <p className="muted">Gradient from the {thicknessBasis === "post-test" ? "post-test bentonite layer thickness" : "initial specimen thickness (until the post-test thickness is recorded)"}; unit weight of water: {evaluation.unitWeightBasis}.</p>
               {evaluation.warnings.map((w) => <p key={w} className="notice notice-caution">{w}</p>)}
             </section>
-            <RunCharts points={toChartPoints(evaluation.intervals, inputReadings)} ratioBand={ratioBand} />
+            <EvaluationBasis verdict={verdict} />
+            <RunCharts
+              points={toChartPoints(evaluation.intervals, inputReadings, verdict.poreVolume.ml)}
+              ratioBand={ratioBand}
+              refillHours={verdict.refillsAtS.map((s) => s / 3600)}
+              {...(evaluation.settings.criteria.includes("pore-volumes") && { minPoreVolumes: evaluation.settings.minPoreVolumes })}
+            />
           </>
         ) : permeation ? <p className="notice notice-caution">{reason}</p> : null}
         {mine && steps.includes("terminate") && <section className="card"><h2>End permeation</h2><TerminateForm runId={run.id} version={run.version} criteriaMet={evaluation?.termination.met ?? false} /></section>}

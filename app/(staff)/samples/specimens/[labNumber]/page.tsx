@@ -42,7 +42,8 @@ export default async function SpecimenPage({ params }: Props) {
         <section className="card">
           <RecordFacts facts={[
             ["Intended method", `ASTM ${specimen.intendedMethodCode}`], ["Die diameter (mm)", specimen.dieDiameterMm], ["Initial thickness (mm)", specimen.initialThicknessMm],
-            ["Initial mass (g)", specimen.initialMassG], ["Moisture content (%)", specimen.moistureContentPct ?? "—"], ["Prepared by", specimen.preparedBy.name],
+            ["Initial mass (g)", specimen.initialMassG], ["Moisture content (%)", specimen.moistureContentPct ?? "—"],
+            ["Dry bentonite mass (g)", specimen.bentoniteDryMassG ?? "—"], ["Bentonite mass per area (kg/m²)", specimen.bentoniteMassPerAreaKgPerM2 ?? "—"], ["Specific gravity", specimen.specificGravity ?? "default"], ["Prepared by", specimen.preparedBy.name],
             ["Prepared at", formatDateTime(specimen.preparedAt)], ["Kept at", specimen.storageLocation ? `${specimen.storageLocation.code} · ${specimen.storageLocation.name}` : "—"],
             ["Retained until", formatDate(specimen.retainUntil)],
           ]} />

@@ -1,9 +1,10 @@
-import type { DeclaredUncertainties } from "../hydraulics";
+import type { DeclaredUncertainties } from "@/lib/hydraulics";
 
 /**
  * The declared standard uncertainties (k = 1) of the instruments of the invented demo laboratory, in the
- * units named. These are the demo lab's declarations, not values from any real calibration: each lab
- * must set its own from its calibration certificates (an expanded uncertainty U stated with k = 2 is
+ * units named. Demo data only: the seed writes them into the demo instruments' calibration records and the
+ * demo lab's method settings, which is where the app reads uncertainties from. Each lab sets its own from
+ * its calibration certificates (an expanded uncertainty U stated with k = 2 is
  * U / 2; a resolution or tolerance ±a is a / √3 — see lib/hydraulics/uncertainty.ts).
  */
 export const DEMO_LAB_DECLARED_UNCERTAINTIES: Readonly<DeclaredUncertainties> = Object.freeze({
