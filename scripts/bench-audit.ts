@@ -71,7 +71,9 @@ async function main() {
   if (!process.env.DATABASE_URL) throw new Error("set DATABASE_URL to a local PostgreSQL server, e.g. postgresql://postgres@127.0.0.1:5432/postgres");
   const database = await createTestDatabase("bench_audit");
   const keep = process.env.SEEPLINE_BENCH_KEEP_DB === "1";
-  const sql = new pg.Client({ connectionString: database.url });
+  // The log is filled straight with SQL and an index dropped for a baseline, which only the owner may do;
+  // the filter itself runs as the app's role.
+  const sql = new pg.Client({ connectionString: database.ownerUrl });
   try {
     await sql.connect();
     const seedStart = performance.now();
