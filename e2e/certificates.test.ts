@@ -12,8 +12,9 @@ async function reviewRun(qa: Page, runNumber: string, decision: "Approve" | "Ret
   await qa.goto(`${baseUrl()}/review/${runNumber}`);
   if (comments) await fill(qa, "Comments for the technician", comments);
   await qa.click(`button::-p-text(${decision})`);
-  await qa.waitForSelector('[data-testid="review-message"]', { timeout: 30_000 });
-  return textOf(qa, '[data-testid="review-message"]');
+  // Read in the same step as found: once approved, the refreshed page no longer shows the decision form.
+  const message = await qa.waitForFunction(() => document.querySelector('[data-testid="review-message"]')?.textContent || null, { timeout: 30_000 });
+  return String(await message.jsonValue());
 }
 
 describe.skipIf(!browserAvailable())("QA review, signed certificates, verification and the client portal (headless Chromium)", () => {

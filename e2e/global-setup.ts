@@ -10,6 +10,10 @@ declare module "vitest" {
   export interface ProvidedContext {
     baseUrl: string;
     browserPath: string;
+    /** The app's database as its runtime role, and as the migration owner (the probe's direct SQL). */
+    appDatabaseUrl: string;
+    ownerDatabaseUrl: string;
+    databaseMode: "external" | "embedded";
   }
 }
 
@@ -25,6 +29,9 @@ export default async function setup(project: TestProject) {
     console.warn("\n*** END-TO-END TESTS SKIPPED: no Chromium found (install Debian's chromium or set CHROME_PATH). ***\n");
     project.provide("browserPath", "");
     project.provide("baseUrl", "");
+    project.provide("appDatabaseUrl", "");
+    project.provide("ownerDatabaseUrl", "");
+    project.provide("databaseMode", "embedded");
     return;
   }
 
@@ -36,8 +43,9 @@ export default async function setup(project: TestProject) {
 
   const port = await findFreePort();
   const baseUrl = `http://localhost:${port}`;
+  // One trusted reverse proxy: the probe (e2e/probe) plays clients at other addresses with X-Forwarded-For.
   const app: ChildProcess = startNext(
-    { port, databaseUrl: db.url, databaseMode: db.mode, authSecret: "end-to-end-tests-only-secret-0123456789", baseUrl },
+    { port, databaseUrl: db.url, databaseMode: db.mode, authSecret: "end-to-end-tests-only-secret-0123456789", baseUrl, trustedProxies: 1 },
     { quiet: true },
   );
   let appErrors = "";
@@ -52,6 +60,9 @@ export default async function setup(project: TestProject) {
   console.log(`end-to-end tests: app at ${baseUrl} on a ${db.mode} database, browser ${browserPath}`);
   project.provide("browserPath", browserPath);
   project.provide("baseUrl", baseUrl);
+  project.provide("appDatabaseUrl", db.url);
+  project.provide("ownerDatabaseUrl", db.ownerUrl);
+  project.provide("databaseMode", db.mode);
 
   return async () => {
     const exited = new Promise((resolve) => app.once("exit", resolve));

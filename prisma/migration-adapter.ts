@@ -1,5 +1,6 @@
 import { PrismaPg } from "@prisma/adapter-pg";
 import pg from "pg";
+import { UTC_SESSION_OPTIONS } from "../lib/server/db/utc-session";
 
 // Two defects of @prisma/adapter-pg 6.19 on the migration path, mended here for the migration CLI only:
 // 1. The JavaScript schema engine reads catalog columns of type `name` (oid 19) and `"char"` (oid 18), which the
@@ -53,7 +54,7 @@ class MigrationAdapterFactory extends PrismaPg {
 }
 
 export function createMigrationAdapter(connectionString: string): PrismaPg {
-  const pool = new pg.Pool({ connectionString, max: 2 });
+  const pool = new pg.Pool({ connectionString, max: 2, options: UTC_SESSION_OPTIONS });
   pool.on("connect", patchClient);
   return new MigrationAdapterFactory(pool, { disposeExternalPool: true });
 }

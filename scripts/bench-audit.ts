@@ -11,6 +11,7 @@ import pg from "pg";
 import type { CurrentUser } from "../lib/server/auth/current-user";
 import { createTestDatabase } from "../tests/support/test-database";
 import { median } from "./support/median";
+import { UTC_SESSION_OPTIONS } from "../lib/server/db/utc-session";
 
 const ROWS = Number(process.env.SEEPLINE_BENCH_AUDIT_ROWS ?? 2_000_000);
 const READINGS = 2_000; // of the one run the record filter looks for
@@ -71,7 +72,9 @@ async function main() {
   if (!process.env.DATABASE_URL) throw new Error("set DATABASE_URL to a local PostgreSQL server, e.g. postgresql://postgres@127.0.0.1:5432/postgres");
   const database = await createTestDatabase("bench_audit");
   const keep = process.env.SEEPLINE_BENCH_KEEP_DB === "1";
-  const sql = new pg.Client({ connectionString: database.url });
+  // The log is filled straight with SQL and an index dropped for a baseline, which only the owner may do;
+  // the filter itself runs as the app's role.
+  const sql = new pg.Client({ connectionString: database.ownerUrl, options: UTC_SESSION_OPTIONS });
   try {
     await sql.connect();
     const seedStart = performance.now();

@@ -1,12 +1,14 @@
 // Database chores with the project's offline Prisma set-up (see prisma.config.ts):
 //   npm run db:generate                    generate the Prisma client
-//   npm run db:migrate                     apply committed migrations to DATABASE_URL
+//   npm run db:migrate                     apply committed migrations (MIGRATION_DATABASE_URL, else DATABASE_URL)
+//   npm run db:create-roles -- <admin url> create the migration owner and the app's runtime role on a server
 //   npm run db:new-migration -- <name>     write a new migration from the schema change, no database needed
 import { execFileSync } from "node:child_process";
 import { mkdirSync, writeFileSync } from "node:fs";
 import path from "node:path";
 import { ROOT } from "./support/paths";
 import { applyMigrations, generateClient, runPrisma } from "./support/prisma-cli";
+import { createRoles } from "./support/create-roles";
 
 async function newMigration(name: string | undefined) {
   if (!name || !/^[a-z0-9_]+$/.test(name)) throw new Error("give the migration a name of lower-case letters, digits and _.");
@@ -28,11 +30,13 @@ async function main() {
   const [command, arg] = process.argv.slice(2);
   if (command === "generate") return generateClient();
   if (command === "migrate") {
-    if (!process.env.DATABASE_URL) throw new Error("DATABASE_URL is not set.");
-    return applyMigrations(process.env.DATABASE_URL);
+    const url = process.env.MIGRATION_DATABASE_URL || process.env.DATABASE_URL;
+    if (!url) throw new Error("MIGRATION_DATABASE_URL (or DATABASE_URL) is not set.");
+    return applyMigrations(url);
   }
+  if (command === "create-roles") return createRoles(arg);
   if (command === "new-migration") return newMigration(arg);
-  throw new Error("usage: db.ts generate | migrate | new-migration <name>");
+  throw new Error("usage: db.ts generate | migrate | new-migration <name> | create-roles <admin url>");
 }
 
 main().catch((error) => {

@@ -3,6 +3,7 @@
 import { mkdirSync } from "node:fs";
 import { PGlite } from "@electric-sql/pglite";
 import { PGLiteSocketServer } from "@electric-sql/pglite-socket";
+import { prepareEmbeddedRoles } from "./support/embedded-roles";
 
 async function main() {
   const [dataDir, portText] = process.argv.slice(2);
@@ -11,6 +12,8 @@ async function main() {
   if (!dataDir.startsWith("memory://")) mkdirSync(dataDir, { recursive: true });
 
   const db = await PGlite.create(dataDir);
+  // The roles of a production server, on the one shared session PGlite has (see support/embedded-roles.ts).
+  await prepareEmbeddedRoles(db);
   // The app's pool, the migration CLI and a seed may all connect at once; queries are queued per transaction.
   const server = new PGLiteSocketServer({ db, port, host: "127.0.0.1", maxConnections: 64 });
   await server.start();

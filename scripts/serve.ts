@@ -2,7 +2,8 @@
 // migrations, demo seed when empty, production build when the sources changed, then the app itself.
 import type { ChildProcess } from "node:child_process";
 import { resolveAuthSecret } from "./support/auth-secret";
-import { startEmbeddedDb, type EmbeddedDb } from "./support/embedded-db";
+import { describeRole } from "./support/database-roles";
+import { migrateEmbeddedDb, startEmbeddedDb, type EmbeddedDb } from "./support/embedded-db";
 import { isPortFree } from "./support/free-port";
 import { generateClientIfNeeded } from "./support/generate-client";
 import { buildIfNeeded, startNext, waitForHealthy } from "./support/next-app";
@@ -33,7 +34,11 @@ async function main() {
   }
 
   log("applying migrations...");
-  await applyMigrations(databaseUrl);
+  if (embedded) await migrateEmbeddedDb(embedded);
+  else {
+    await applyMigrations(process.env.MIGRATION_DATABASE_URL || databaseUrl);
+    await refuseOwnerRole(databaseUrl);
+  }
 
   const wantDemo = !external || process.env.SEEPLINE_SEED_DEMO === "1";
   if (wantDemo) {
@@ -60,6 +65,16 @@ async function main() {
   });
   await waitForHealthy(`http://127.0.0.1:${port}`);
   printBanner(baseUrl, wantDemo);
+}
+
+// The app's own connection must not be able to switch off the record's protections (README, "Production").
+async function refuseOwnerRole(databaseUrl: string) {
+  const role = await describeRole(databaseUrl);
+  if (!role.superuser && !role.ownsTables) return;
+  const what = role.superuser ? "a superuser" : "the owner of the tables";
+  const message = `DATABASE_URL signs in as ${role.role}, ${what}, so the app could switch off the database's protections. Give the app the runtime role and the migrations the owner (MIGRATION_DATABASE_URL); see README, "Production".`;
+  if (process.env.SEEPLINE_ALLOW_OWNER_DATABASE_ROLE !== "1") throw new Error(`${message} (SEEPLINE_ALLOW_OWNER_DATABASE_ROLE=1 starts anyway.)`);
+  log(`WARNING: ${message}`);
 }
 
 function isLoopback(url: string): boolean {

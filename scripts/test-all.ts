@@ -4,6 +4,7 @@ import { mkdirSync, readFileSync } from "node:fs";
 import path from "node:path";
 import { generateClientIfNeeded } from "./support/generate-client";
 import { BIN, ROOT } from "./support/paths";
+import { probeTable } from "./support/probe-table";
 import { runCommand } from "./support/run-command";
 
 const RESULTS = path.join(ROOT, "tmp", "vitest-results.json");
@@ -15,6 +16,7 @@ async function step(title: string, work: () => Promise<unknown>) {
 
 async function main() {
   const only = process.argv.slice(2); // e.g. `npm test -- --project unit`
+  const started = Date.now();
   await step("Prisma client", generateClientIfNeeded);
   if (only.length === 0) {
     await step("Type check (tsc, strict)", () => runCommand(BIN("tsc"), ["--noEmit", "-p", "."], { cwd: ROOT }));
@@ -26,6 +28,8 @@ async function main() {
     runCommand(BIN("vitest"), ["run", "--reporter=default", "--reporter=json", `--outputFile.json=${RESULTS}`, ...only], { cwd: ROOT }),
   ).catch((error) => (failed = error));
 
+  const probe = probeTable(started);
+  if (probe.length > 0) console.log(`\n${probe.join("\n")}`);
   const summary = JSON.parse(readFileSync(RESULTS, "utf8")) as { numPassedTests: number; numFailedTests: number; numPendingTests: number; numTodoTests: number };
   console.log(`\nTests: ${summary.numPassedTests} passed, ${summary.numFailedTests} failed, ${summary.numPendingTests + summary.numTodoTests} skipped`);
   if (failed || summary.numFailedTests > 0) process.exit(1);

@@ -15,6 +15,9 @@ export type CsvImportProps = { runId: string };
 /** Rows shown in the preview besides every row with an error. */
 const PREVIEW_ROWS = 50;
 
+// Leaves room under the 1 MB request limit for the rest of the request (mapping, escapes).
+const MAX_FILE_BYTES = 900_000;
+
 /**
  * Import of a data-logger CSV: choose a file or paste its text, check the suggested column mapping,
  * see every row as it would be saved with the problems of each, then save all rows or none. The preview
@@ -50,6 +53,11 @@ export function CsvImport({ runId }: CsvImportProps) {
     });
 
   const read = (next: { fileName: string; text: string }) => {
+    // The app accepts at most 1 MB in one request (scripts/app-server.mjs); say so before sending more.
+    if (new Blob([next.text]).size > MAX_FILE_BYTES) {
+      setNotice({ ok: false, text: `${next.fileName} is larger than Seepline accepts at once (about 900 kB); split it by date into parts and import each.` });
+      return;
+    }
     setSource(next);
     send(next, undefined, "preview");
   };

@@ -20,6 +20,8 @@ export function sequenceKey(kind: LabNumberKind, year: number): string {
 /** Formats a lab number; `value` is the counter's new value (1 or more). */
 export function formatLabNumber(kind: LabNumberKind, year: number, value: number): string {
   if (!Number.isInteger(value) || value < 1) throw new RangeError(`counter value must be a positive integer, got ${value}`);
+  // Two digits name the year only within one century; record dates are kept inside it (lib/validation/record-dates).
+  if (!Number.isInteger(year) || year < 2000 || year > 2099) throw new RangeError(`lab numbers are for the years 2000 to 2099, got ${year}`);
   const yy = String(year % 100).padStart(2, "0");
   return `${LAB_NUMBER_KINDS[kind]}${yy}-${String(value).padStart(5, "0")}`;
 }

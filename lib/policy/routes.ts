@@ -5,6 +5,7 @@ import type { Action } from "./permissions";
  * pages check again with fresh user data. Longest prefix wins; addresses not listed need only a session.
  */
 const ROUTE_ACTIONS: ReadonlyArray<readonly [prefix: string, action: Action]> = [
+  ["/", "workspace.view"], // the staff start page only: "/" matches no longer path
   ["/admin/users", "user.manage"],
   ["/admin/audit", "audit.view"],
   ["/admin/clients", "client.manage"],

@@ -7,6 +7,7 @@
 import { enteredPressureToPa, type PressureUnit } from "@/lib/units/pressure-entry";
 import type { ReadingDraft } from "./reading-draft";
 import { fromWallTime } from "../format/time-zone";
+import { readCalendarDate } from "../validation/record-dates";
 
 export const READING_CSV_TARGETS = [
   "takenAt", "elapsed", "inflowLevelMm", "outflowLevelMm", "influentPressure", "effluentPressure", "cellPressure",
@@ -210,10 +211,7 @@ export function parseDateTimeCell(text: string, timeZone?: string): Date | strin
   let m = /^(\d{4})-(\d{2})-(\d{2})[T ](\d{1,2}):(\d{2})(?::(\d{2})(?:\.(\d+))?)?\s*(Z|[+-]\d{2}:?\d{2})?$/i.exec(t);
   let parts: number[] | null = null;
   if (m) {
-    if (m[8]) {
-      const d = new Date(t.replace(" ", "T"));
-      return Number.isNaN(d.getTime()) ? "is not a date and time" : d;
-    }
+    if (m[8]) return readCalendarDate(t) ?? "is not a real date and time";
     parts = [m[1], m[2], m[3], m[4], m[5], m[6] ?? "0"].map(Number);
   } else if ((m = /^(\d{1,2})\.(\d{1,2})\.(\d{4})[ T](\d{1,2}):(\d{2})(?::(\d{2}))?$/.exec(t))) {
     parts = [m[3], m[2], m[1], m[4], m[5], m[6] ?? "0"].map(Number);

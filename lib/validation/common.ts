@@ -18,12 +18,8 @@ export const requiredText = (label: string, max = 200) =>
 
 export const reasonSchema = z.string({ message: "Say why, in a few words (at least 5 characters)." }).trim().min(5, "Say why, in a few words (at least 5 characters).").max(500);
 
-/** A date-time from a datetime-local input or ISO text; not in the future by more than a few minutes. */
-export const pastDateTime = (label: string) =>
-  z.coerce
-    .date({ message: `Enter ${label} as a date and time.` })
-    .refine((d) => !Number.isNaN(d.getTime()), `Enter ${label} as a date and time.`)
-    .refine((d) => d.getTime() <= Date.now() + 5 * 60_000, `${capitalise(label)} cannot be in the future.`);
+/** A date-time from a datetime-local input or ISO text: a real date, within the lab's records, not in the future. */
+export { pastDateTime } from "./record-dates";
 
 export const versionSchema = z.coerce.number().int().positive();
 

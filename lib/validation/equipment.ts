@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { PRESSURE_UNITS, enteredPressureToPa, type PressureUnit } from "../units/pressure-entry";
 import { optionalMeasured, pastDateTime, reasonSchema, requiredText, versionSchema } from "./common";
+import { futureDate } from "./record-dates";
 
 // Mirrors the EquipmentKind and EquipmentStatus enums of prisma/schema.prisma (lib/ may not import Prisma).
 export const EQUIPMENT_KINDS = ["PERMEAMETER_CELL", "BURETTE_PANEL", "PRESSURE_TRANSDUCER", "THERMOMETER", "THICKNESS_GAUGE", "TIMER"] as const;
@@ -30,7 +31,8 @@ export const assetTagSchema = z
 
 /** For a cross-field rule: run it once the fields it reads parsed, whatever else is wrong. */
 function validFields(...fields: string[]) {
-  return (payload: { issues: ReadonlyArray<{ path?: PropertyKey[] }> }) => !payload.issues.some((issue) => fields.includes(String(issue.path?.[0])));
+  // An issue with no path is the value itself being of the wrong kind (null, a list): then no field is valid.
+  return (payload: { issues: ReadonlyArray<{ path?: PropertyKey[] }> }) => !payload.issues.some((issue) => !issue.path?.length || fields.includes(String(issue.path[0])));
 }
 
 const pressureUnitSchema = z.enum(PRESSURE_UNITS, { message: "Choose kPa or psi." });
@@ -99,7 +101,7 @@ export const recordCalibrationSchema = z
     equipmentId: z.string().min(1),
     equipmentKind: z.enum(EQUIPMENT_KINDS).optional(),
     calibratedAt: pastDateTime("the calibration date"),
-    dueAt: z.coerce.date({ message: "Enter the date the next calibration is due." }).refine((d) => !Number.isNaN(d.getTime()), "Enter the date the next calibration is due."),
+    dueAt: futureDate("the date the next calibration is due"),
     reference: requiredText("the certificate or report reference", 120),
     performedBy: requiredText("who performed the calibration", 120),
     passed: checkbox("Say whether the calibration passed."),

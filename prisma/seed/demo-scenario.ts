@@ -206,10 +206,10 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
   // Computed as the app computes at approval; only the index flux goes on the demo's issued certificate.
   const [result] = await recordDemoResults(tx, approved.run.id, { approvedById: users.qa!, approvedAt: ago(11) });
   const certificate = await tx.certificate.create({ data: { number: await allocateLabNumber(tx, "certificate", ago(10)), projectId: projects["MWA-C4"]!, clientOrganizationId: orgs.MWA! } });
-  // Drafted with its results, then issued: the database keeps an issued revision's parts fixed.
+  // Drafted with its results, signed, then issued: the database keeps an issued revision's parts fixed.
   const revision = await tx.certificateRevision.create({ data: { certificateId: certificate.id, revision: 1, status: "DRAFT", verificationCode: "DEMO-7Q4K-2M9X", results: { create: [{ resultId: result!.id }] } } });
-  await tx.certificateRevision.update({ where: { id: revision.id }, data: { status: "ISSUED", issuedAt: ago(10) } });
   await tx.signature.create({ data: { revisionId: revision.id, signerId: users.qa!, signerRole: "QA_MANAGER", meaning: "Reviewed and approved for issue", signedAt: ago(10) } });
+  await tx.certificateRevision.update({ where: { id: revision.id }, data: { status: "ISSUED", issuedAt: ago(10) } });
   const retainedAt = ago(9.9);
   await custody({ kind: "specimen", id: certifiedSpecimen.id }, "RETAINED", "TESTED", "RETAINED", users.technician!, retainedAt, { toLocationId: locations["RETAIN-1"]!, note: "Retained after certificate issue" });
   await tx.specimen.update({ where: { id: certifiedSpecimen.id }, data: { state: "RETAINED", storageLocationId: locations["RETAIN-1"]!, retainUntil: new Date(retainedAt.getTime() + 90 * DAY) } });

@@ -1,7 +1,10 @@
 import { spawn, type ChildProcess } from "node:child_process";
 import path from "node:path";
+import pg from "pg";
+import { APP_ROLE, OWNER_ROLE } from "./database-roles";
 import { BIN, ROOT } from "./paths";
 import { findFreePort } from "./free-port";
+import { applyMigrations } from "./prisma-cli";
 
 export type EmbeddedDb = { url: string; port: number; stop(): Promise<void> };
 
@@ -19,6 +22,30 @@ export async function startEmbeddedDb(dataDir: string, options: { quiet?: boolea
   await waitForReady(child, options.quiet ?? false);
   const url = `postgresql://postgres@127.0.0.1:${port}/postgres?sslmode=disable`;
   return { url, port, stop: () => stopChild(child) };
+}
+
+/**
+ * Sets the role of the embedded database's one shared session (scripts/support/embedded-roles.ts): every
+ * connection, present and future, then acts as that role.
+ */
+export async function setEmbeddedRole(db: EmbeddedDb, role: typeof OWNER_ROLE | typeof APP_ROLE): Promise<void> {
+  const client = new pg.Client({ connectionString: db.url });
+  await client.connect();
+  try {
+    await client.query(`SET ROLE ${role}`);
+  } finally {
+    await client.end();
+  }
+}
+
+/** Applies the migrations as the migration owner, then hands the session back to the app role. */
+export async function migrateEmbeddedDb(db: EmbeddedDb): Promise<void> {
+  await setEmbeddedRole(db, OWNER_ROLE);
+  try {
+    await applyMigrations(db.url);
+  } finally {
+    await setEmbeddedRole(db, APP_ROLE);
+  }
 }
 
 function waitForReady(child: ChildProcess, quiet: boolean): Promise<void> {

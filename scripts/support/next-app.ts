@@ -1,4 +1,5 @@
 import { spawn, type ChildProcess } from "node:child_process";
+import path from "node:path";
 import { BIN, ROOT } from "./paths";
 import { buildIsCurrent, recordBuild, sourceHash } from "./build-stamp";
 import { runCommand } from "./run-command";
@@ -12,21 +13,26 @@ export async function buildIfNeeded(log: (line: string) => void = console.log): 
   recordBuild(hash);
 }
 
-export type AppEnv = { port: number; databaseUrl: string; databaseMode: "embedded" | "external"; authSecret: string; baseUrl: string };
+export type AppEnv = { port: number; databaseUrl: string; databaseMode: "embedded" | "external"; authSecret: string; baseUrl: string; trustedProxies?: number };
 
-/** Starts `next start` with the app's environment; output passed through unless `quiet`. */
+/**
+ * Starts the production build behind the app's front door (scripts/app-server.mjs: client address, request
+ * checks, security headers) with the app's environment; output passed through unless `quiet`.
+ */
 export function startNext(env: AppEnv, options: { quiet?: boolean } = {}): ChildProcess {
-  return spawn(BIN("next"), ["start", "-p", String(env.port)], {
+  return spawn(process.execPath, [path.join(ROOT, "scripts", "app-server.mjs")], {
     cwd: ROOT,
     stdio: options.quiet ? ["ignore", "ignore", "pipe"] : "inherit",
     env: {
       ...process.env,
+      NODE_ENV: "production",
       NEXT_TELEMETRY_DISABLED: "1",
       PORT: String(env.port),
       DATABASE_URL: env.databaseUrl,
       SEEPLINE_DATABASE_MODE: env.databaseMode,
       NEXTAUTH_SECRET: env.authSecret,
       NEXTAUTH_URL: env.baseUrl,
+      ...(env.trustedProxies !== undefined ? { SEEPLINE_TRUSTED_PROXIES: String(env.trustedProxies) } : {}),
     },
   });
 }

@@ -12,6 +12,7 @@ import { chooseRunSettings } from "@/lib/server/review/choose-run-settings";
 import { evaluateRunRecords } from "@/lib/server/runs/evaluate-run-records";
 import { readResultRecord } from "@/lib/results/result-record";
 import { db, makeUser, unique } from "../support/factories";
+import { withOwner } from "../support/owner";
 import { failure } from "../support/refusals";
 import { makePermeatingRun, makeSettingsVersion, readingsOf } from "../support/run-fixtures";
 
@@ -97,7 +98,12 @@ describe("the lab's own criteria, versioned", () => {
     const audit = await db().auditLog.findFirstOrThrow({ where: { tableName: "MethodSettingsVersion", rowId: created.id } });
     expect(audit).toMatchObject({ operation: "INSERT", actorId: admin.id });
     expect((await failure(createMethodSettingsVersion({ actor: admin, input: { ...input, values: { ...values, ratioMin: 0.7 } } }))).code).toBe("CONFLICT");
-    await expect(withActor(admin, (tx) => tx.methodSettingsVersion.update({ where: { id: created.id }, data: { reason: "rewritten" } }))).rejects.toThrow(/append-only/);
+    // The app's role has no right to rewrite a version; the owner is stopped by the trigger.
+    await expect(withActor(admin, (tx) => tx.methodSettingsVersion.update({ where: { id: created.id }, data: { reason: "rewritten" } }))).rejects.toThrow(/permission denied/);
+    await expect(withOwner(admin, (tx) => tx.methodSettingsVersion.update({ where: { id: created.id }, data: { reason: "rewritten" } }))).rejects.toThrow(/append-only/);
+    await expect(withOwner(admin, (tx) => tx.methodSettingsVersion.delete({ where: { id: created.id } }))).rejects.toThrow(/append-only/);
+    await expect(withOwner(admin, (tx) => tx.$executeRawUnsafe(`TRUNCATE "MethodSettingsVersion" CASCADE`))).rejects.toThrow(/append-only/);
+    expect(await db().methodSettingsVersion.findUniqueOrThrow({ where: { id: created.id } })).toMatchObject({ reason: input.reason, version: created.version });
   });
 
   it("a run is judged by its own version; QA may choose another with a reason, and approval records it with the criteria, the uncertainty budget and the leakage check", async () => {

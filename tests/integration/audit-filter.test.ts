@@ -9,6 +9,7 @@ import { createUser } from "@/lib/server/users/create-user";
 import type { AuditQueryInput } from "@/lib/validation/audit";
 import { db, makeUser, unique } from "../support/factories";
 import { at, gridRow, makeRun } from "../support/make-permeating-run";
+import { withOwner } from "../support/owner";
 import { codeOf, failure } from "../support/refusals";
 
 /** A run with three readings, reading 2 corrected (inflow level 442.1 -> 441.2 mm, temperature 20.1 -> 20.4 °C). */
@@ -21,11 +22,14 @@ async function runWithCorrectedReading() {
   return made;
 }
 
-/** Audit rows written straight into the log (INSERT is what the triggers do too), at chosen times, by `actorId`. */
+/**
+ * Audit rows written straight into the log (INSERT is what the triggers do too), at chosen times, by `actorId`.
+ * Only the owner may write the log directly; the runtime role's rows come from the audit trigger.
+ */
 async function insertAuditRows(actorId: string, times: Date[], tableName = "Roll") {
   for (const [i, time] of times.entries())
-    await db().$executeRaw`INSERT INTO "AuditLog" ("occurredAt", "actorId", "tableName", "rowId", operation, "before", "after", "txId")
-      VALUES (${time.toISOString().slice(0, 23).replace("T", " ")}::timestamp, ${actorId}, ${tableName}, ${unique("row")}, 'INSERT', NULL, ${JSON.stringify({ rollNumber: `N${i}` })}::jsonb, txid_current())`;
+    await withOwner({ id: actorId }, (tx) => tx.$executeRaw`INSERT INTO "AuditLog" ("occurredAt", "actorId", "tableName", "rowId", operation, "before", "after", "txId")
+      VALUES (${time.toISOString().slice(0, 23).replace("T", " ")}::timestamp, ${actorId}, ${tableName}, ${unique("row")}, 'INSERT', NULL, ${JSON.stringify({ rollNumber: `N${i}` })}::jsonb, txid_current())`);
 }
 
 /** Every page, following `older` from the newest, then `newer` back from the oldest. */
@@ -170,9 +174,9 @@ describe("the audit trail filter", () => {
     expect(people.entries[0]!.changes.map((c) => c.label)).toEqual(expect.arrayContaining(["Email", "Name", "Role", "Active"]));
 
     const clerk = await makeUser("INTAKE_CLERK");
-    await db().$executeRaw`INSERT INTO "AuditLog" ("actorId", "tableName", "rowId", operation, "before", "after", "txId")
+    await withOwner(clerk, (tx) => tx.$executeRaw`INSERT INTO "AuditLog" ("actorId", "tableName", "rowId", operation, "before", "after", "txId")
       VALUES (${clerk.id}, 'User', 'leaky', 'UPDATE', '{"name": "A", "passwordHash": "$2b$old", "tokenHash": "t1", "data": "AAAA", "apiSecret": "s1"}'::jsonb,
-              '{"name": "B", "passwordHash": "$2b$new", "tokenHash": "t2", "data": "BBBB", "apiSecret": "s2"}'::jsonb, txid_current())`;
+              '{"name": "B", "passwordHash": "$2b$new", "tokenHash": "t2", "data": "BBBB", "apiSecret": "s2"}'::jsonb, txid_current())`);
     const [leaky] = (await findAuditEntries({ actor: admin, input: { person: clerk.id } })).entries;
     expect(leaky!.changes).toEqual([{ field: "name", label: "Name", old: "A", new: "B" }]);
   });

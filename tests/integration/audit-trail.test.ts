@@ -3,6 +3,7 @@ import { createUser } from "@/lib/server/users/create-user";
 import { setUserActive } from "@/lib/server/users/set-user-active";
 import { withActor } from "@/lib/server/db/transaction";
 import { db, makeProject, makeUser, unique } from "../support/factories";
+import { withOwner } from "../support/owner";
 
 async function auditRows(tableName: string, rowId: string) {
   return db().auditLog.findMany({ where: { tableName, rowId }, orderBy: { id: "asc" } });
@@ -34,19 +35,25 @@ describe("audit trail kept by the database", () => {
     const admin = await makeUser("LAB_ADMIN");
     const code = unique("LOC").toUpperCase();
     const location = await withActor(admin, (tx) => tx.storageLocation.create({ data: { code, name: "Temporary shelf" } }));
-    await withActor(admin, (tx) => tx.storageLocation.delete({ where: { id: location.id } }));
+    // The app's runtime role deletes nothing; the owner's delete shows the trigger records deletes too.
+    await expect(withActor(admin, (tx) => tx.storageLocation.delete({ where: { id: location.id } }))).rejects.toThrow(/permission denied/);
+    await withOwner(admin, (tx) => tx.storageLocation.delete({ where: { id: location.id } }));
     const rows = await auditRows("StorageLocation", location.id);
     expect(rows.map((r) => [r.operation, r.actorId])).toEqual([["INSERT", admin.id], ["DELETE", admin.id]]);
     expect(rows[1]!.before).toMatchObject({ code });
     expect(rows[1]!.after).toBeNull();
   });
 
-  it("refuses to update, delete or truncate audit rows", async () => {
+  it("refuses to update, delete or truncate audit rows, to the app's role by rights and to the owner by trigger", async () => {
     await makeProject();
     const row = await db().auditLog.findFirstOrThrow({ orderBy: { id: "desc" } });
-    await expect(db().$executeRaw`DELETE FROM "AuditLog" WHERE id = ${row.id}`).rejects.toThrow(/append-only/);
-    await expect(db().$executeRaw`UPDATE "AuditLog" SET "actorId" = 'someone else' WHERE id = ${row.id}`).rejects.toThrow(/append-only/);
-    await expect(db().$executeRawUnsafe(`TRUNCATE "AuditLog"`)).rejects.toThrow(/append-only/);
+    await expect(db().$executeRaw`DELETE FROM "AuditLog" WHERE id = ${row.id}`).rejects.toThrow(/permission denied/);
+    await expect(db().$executeRaw`UPDATE "AuditLog" SET "actorId" = 'someone else' WHERE id = ${row.id}`).rejects.toThrow(/permission denied/);
+    await expect(db().$executeRawUnsafe(`TRUNCATE "AuditLog"`)).rejects.toThrow(/permission denied/);
+    const system = { id: "system:test" };
+    await expect(withOwner(system, (tx) => tx.$executeRaw`DELETE FROM "AuditLog" WHERE id = ${row.id}`)).rejects.toThrow(/append-only/);
+    await expect(withOwner(system, (tx) => tx.$executeRaw`UPDATE "AuditLog" SET "actorId" = 'someone else' WHERE id = ${row.id}`)).rejects.toThrow(/append-only/);
+    await expect(withOwner(system, (tx) => tx.$executeRawUnsafe(`TRUNCATE "AuditLog"`))).rejects.toThrow(/append-only/);
     expect(await db().auditLog.findUnique({ where: { id: row.id } })).toMatchObject({ actorId: row.actorId });
   });
 
@@ -62,7 +69,9 @@ describe("audit trail kept by the database", () => {
       });
       return tx.custodyEvent.create({ data: { action: "RECEIVED", rollId: roll.id, toState: "RECEIVED", actorId: clerk.id } });
     });
-    await expect(db().custodyEvent.update({ where: { id: event.id }, data: { note: "rewritten" } })).rejects.toThrow(/append-only/);
-    await expect(db().custodyEvent.delete({ where: { id: event.id } })).rejects.toThrow(/append-only/);
+    await expect(db().custodyEvent.update({ where: { id: event.id }, data: { note: "rewritten" } })).rejects.toThrow(/permission denied/);
+    await expect(db().custodyEvent.delete({ where: { id: event.id } })).rejects.toThrow(/permission denied/);
+    await expect(withOwner(clerk, (tx) => tx.custodyEvent.update({ where: { id: event.id }, data: { note: "rewritten" } }))).rejects.toThrow(/append-only/);
+    await expect(withOwner(clerk, (tx) => tx.custodyEvent.delete({ where: { id: event.id } }))).rejects.toThrow(/append-only/);
   });
 });

@@ -4,6 +4,7 @@ import { createTestDatabase } from "../support/test-database";
 declare module "vitest" {
   export interface ProvidedContext {
     databaseUrl: string;
+    ownerDatabaseUrl: string;
   }
 }
 
@@ -12,5 +13,6 @@ export default async function setup(project: TestProject) {
   const db = await createTestDatabase("it");
   console.log(`integration tests: ${db.mode} database, fresh for this run`);
   project.provide("databaseUrl", db.url);
+  project.provide("ownerDatabaseUrl", db.ownerUrl);
   return async () => db.drop();
 }

@@ -3,6 +3,7 @@ import { allocateLabNumber } from "@/lib/server/db/allocate-lab-number";
 import { withActor } from "@/lib/server/db/transaction";
 import { getHealth } from "@/lib/server/health/get-health";
 import { db } from "../support/factories";
+import { withOwner } from "../support/owner";
 
 const actor = { id: "system:test" };
 
@@ -31,7 +32,8 @@ describe("lab numbering", () => {
   it("refuses to wind a counter back or remove it", async () => {
     await withActor(actor, (tx) => allocateLabNumber(tx, "run", new Date(Date.UTC(2092, 0, 1))));
     await expect(db().numberSequence.update({ where: { key: "run-2092" }, data: { lastValue: 0 } })).rejects.toThrow(/may only increase/);
-    await expect(db().numberSequence.delete({ where: { key: "run-2092" } })).rejects.toThrow(/may only increase/);
+    await expect(db().numberSequence.delete({ where: { key: "run-2092" } })).rejects.toThrow(/permission denied/);
+    await expect(withOwner(actor, (tx) => tx.numberSequence.delete({ where: { key: "run-2092" } }))).rejects.toThrow(/may only increase/);
   });
 });
 

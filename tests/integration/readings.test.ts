@@ -10,6 +10,7 @@ import { evaluateRunRecords } from "@/lib/server/runs/evaluate-run-records";
 import { failure } from "../support/refusals";
 import { db } from "../support/factories";
 import { at, gridRow, makeRun } from "../support/make-permeating-run";
+import { withOwner } from "../support/owner";
 
 const fixture = (name: string) => readFileSync(path.resolve(import.meta.dirname, "../../e2e/fixtures", name), "utf8");
 
@@ -173,7 +174,9 @@ describe("correcting a reading", () => {
     const { technician, run, permeationStartedAt } = await makeRun();
     await recordReadings({ actor: technician, input: { runId: run.id, pressureUnit: "KPA", readings: [gridRow(at(permeationStartedAt, 0), "452", "18")] } });
     const reading = await db().reading.findFirstOrThrow({ where: { runId: run.id } });
-    await expect(withActor(technician, (tx) => tx.reading.update({ where: { id: reading.id }, data: { temperatureC: 22 } }))).rejects.toThrow(/cannot be changed; record a correction instead/);
+    await expect(withActor(technician, (tx) => tx.reading.update({ where: { id: reading.id }, data: { temperatureC: 22 } }))).rejects.toThrow(/permission denied/);
+    await expect(withOwner(technician, (tx) => tx.reading.update({ where: { id: reading.id }, data: { temperatureC: 22 } }))).rejects.toThrow(/cannot be changed; record a correction instead/);
+    await expect(withOwner(technician, (tx) => tx.reading.update({ where: { id: reading.id }, data: { createdAt: new Date(0) } }))).rejects.toThrow(/cannot be changed/);
     await expect(withActor(technician, (tx) => tx.reading.delete({ where: { id: reading.id } }))).rejects.toThrow();
     expect(await db().reading.findUniqueOrThrow({ where: { id: reading.id } })).toEqual(reading);
   });

@@ -9,6 +9,7 @@ import { findBrowser } from "../../e2e/support/find-browser";
 import { db, makeUser, TEST_PASSWORD } from "../support/factories";
 import { makePermeatingRun } from "../support/run-fixtures";
 import { failure } from "../support/refusals";
+import { withOwner } from "../support/owner";
 
 const SYSTEM = { id: "system:test" };
 const browser = findBrowser();
@@ -85,7 +86,8 @@ describe.skipIf(!browser)("certificates", () => {
     expect((stored.snapshot as { number: string }).number).toBe(certificate.number);
 
     await expect(db().certificateRevision.update({ where: { id: draft.id }, data: { reason: "edited later" } })).rejects.toThrow(/issued and cannot be changed/);
-    await expect(db().certificateRevision.delete({ where: { id: draft.id } })).rejects.toThrow(/cannot be deleted/);
+    await expect(db().certificateRevision.delete({ where: { id: draft.id } })).rejects.toThrow(/permission denied/);
+    await expect(withOwner(qa, (tx) => tx.certificateRevision.delete({ where: { id: draft.id } }))).rejects.toThrow(/cannot be deleted/);
 
     const revision2 = await reviseCertificate({ actor: qa, input: { certificateId: certificate.id, reason: "Client name spelt wrongly" } });
     await issueCertificate({ actor: qa, input: { revisionId: revision2.id, password: TEST_PASSWORD } });

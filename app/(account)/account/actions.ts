@@ -1,12 +1,16 @@
 "use server";
 
 import { toActionResult } from "@/lib/server/actions/action-result";
+import { requestClientAddress } from "@/lib/server/auth/request-client-address";
+import { reissueOwnSession } from "@/lib/server/auth/reissue-session";
 import { requireUser } from "@/lib/server/auth/require-permission";
 import { changeOwnPassword } from "@/lib/server/users/change-own-password";
 
 export async function changeOwnPasswordAction(input: unknown) {
   return toActionResult(async () => {
-    await changeOwnPassword({ actor: await requireUser("account.self"), input });
+    const { sessionVersion } = await changeOwnPassword({ actor: await requireUser("account.self"), input, clientAddress: await requestClientAddress() });
+    // Every other session has ended; this browser carries on with a fresh one.
+    await reissueOwnSession(sessionVersion);
     return null;
-  }, "Your password has been changed.");
+  }, "Your password has been changed; you have been signed out everywhere else.");
 }

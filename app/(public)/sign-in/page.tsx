@@ -3,19 +3,15 @@ import { SignInForm } from "@/components/auth/sign-in-form";
 import { Wordmark } from "@/components/shell/wordmark";
 import { getCurrentUser } from "@/lib/server/auth/current-user";
 import { getLabName } from "@/lib/server/lab/get-lab-name";
+import { safeRedirectPath } from "@/lib/security/safe-redirect-path";
 
 export const metadata = { title: "Sign in" };
 export const dynamic = "force-dynamic";
 
-function safeCallback(value: string | string[] | undefined): string {
-  const url = Array.isArray(value) ? value[0] : value;
-  // Only paths on this site, so a crafted link cannot send people elsewhere after signing in.
-  return url && url.startsWith("/") && !url.startsWith("//") ? url : "/";
-}
-
 export default async function SignInPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const params = await searchParams;
-  const callbackUrl = safeCallback(params.callbackUrl);
+  // Only paths on this site, so a crafted link cannot send people elsewhere after signing in.
+  const callbackUrl = safeRedirectPath(params.callbackUrl);
   if (await getCurrentUser()) redirect(callbackUrl);
   return (
     <div className="plain">

@@ -2,6 +2,7 @@
 
 import { revalidatePath } from "next/cache";
 import { toActionResult } from "@/lib/server/actions/action-result";
+import { requestClientAddress } from "@/lib/server/auth/request-client-address";
 import { requireUser } from "@/lib/server/auth/require-permission";
 import { createCertificateDraft } from "@/lib/server/certificates/create-certificate-draft";
 import { issueCertificate } from "@/lib/server/certificates/issue-certificate";
@@ -17,7 +18,7 @@ export async function createCertificateDraftAction(input: unknown) {
 
 export async function issueCertificateAction(input: unknown) {
   return toActionResult(async () => {
-    const issued = await issueCertificate({ actor: await requireUser("certificate.issue"), input });
+    const issued = await issueCertificate({ actor: await requireUser("certificate.issue"), input, clientAddress: await requestClientAddress() });
     revalidatePath("/certificates", "layout");
     return issued;
   }, "Certificate signed and issued.");

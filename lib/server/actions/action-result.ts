@@ -1,6 +1,7 @@
 import "server-only";
 import { unstable_rethrow } from "next/navigation";
 import { isAppError, type FieldErrors } from "@/lib/errors/app-error";
+import { faultToAppError } from "../db/fault-to-app-error";
 
 export type ActionResult<T = null> =
   | { ok: true; data: T; message: string }
@@ -15,7 +16,8 @@ export async function toActionResult<T>(work: () => Promise<T>, successMessage =
     return { ok: true, data: await work(), message: successMessage };
   } catch (error) {
     unstable_rethrow(error);
-    if (isAppError(error)) return { ok: false, message: error.message, fieldErrors: error.fieldErrors, code: error.code, details: error.details };
+    const known = isAppError(error) ? error : faultToAppError(error);
+    if (known) return { ok: false, message: known.message, fieldErrors: known.fieldErrors, code: known.code, details: known.details };
     console.error("server action failed", error);
     return { ok: false, message: "The change could not be saved because of a fault on the server; nothing was changed. Try again.", fieldErrors: {}, code: "INTERNAL" };
   }

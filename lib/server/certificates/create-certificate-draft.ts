@@ -8,6 +8,7 @@ import { requirePermission } from "../auth/require-permission";
 import { allocateLabNumber } from "../db/allocate-lab-number";
 import { withActor } from "../db/transaction";
 import { parseOrThrow } from "../validation/parse";
+import { explainCertificateCollision, refuseResultsOnLiveCertificates } from "./certificate-collision";
 
 /** A QA manager gathers approved results of one project's rolls into a new certificate, as a draft with its own number. */
 export async function createCertificateDraft(options: { actor: CurrentUser; input: unknown; now?: Date }) {
@@ -25,6 +26,8 @@ export async function createCertificateDraft(options: { actor: CurrentUser; inpu
     if (stray) throw new AppError("INVALID_INPUT", `The result of ${stray.run.labNumber} belongs to another project.`);
     const unapproved = results.find((r) => !r.approvedAt);
     if (unapproved) throw new AppError("INVALID_INPUT", `The result of ${unapproved.run.labNumber} is not approved yet.`);
+    // A trigger decides a race between two drafts taking the same result (explained below).
+    await refuseResultsOnLiveCertificates(tx, input.resultIds);
     const certificate = await tx.certificate.create({
       data: { number: await allocateLabNumber(tx, "certificate", options.now), projectId: project.id, clientOrganizationId: project.clientOrganizationId },
       select: { id: true, number: true },
@@ -33,5 +36,7 @@ export async function createCertificateDraft(options: { actor: CurrentUser; inpu
       data: { certificateId: certificate.id, revision: 1, status: "DRAFT", verificationCode: newVerificationCode(randomBytes(12)), results: { create: results.map((r) => ({ resultId: r.id })) } },
     });
     return certificate;
+  }).catch((error: unknown) => {
+    throw explainCertificateCollision(error) ?? error;
   });
 }

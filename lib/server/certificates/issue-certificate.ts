@@ -5,27 +5,27 @@ import { issueCertificateSchema } from "@/lib/validation/certificates";
 import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
 import { verifyPassword } from "../auth/password";
+import { checkPasswordThrottled } from "../auth/password-throttle";
 import { getDb } from "../db/client";
 import { withActor } from "../db/transaction";
+import { publicBaseUrl } from "../public-address";
 import { parseOrThrow } from "../validation/parse";
 import { buildCertificateSnapshot } from "./build-certificate-snapshot";
 import { renderCertificatePdf } from "./render-certificate-pdf";
-
-function publicBaseUrl(): string {
-  return (process.env.NEXTAUTH_URL ?? "http://localhost:3000").replace(/\/$/, "");
-}
 
 /**
  * A QA manager signs and issues a draft revision: their password is asked again, the certificate's
  * content is frozen as a snapshot, its PDF rendered and its SHA-256 digest stored with a signature
  * record. A revision that supersedes an issued one marks that one superseded in the same transaction.
  */
-export async function issueCertificate(options: { actor: CurrentUser; input: unknown; now?: Date }) {
+export async function issueCertificate(options: { actor: CurrentUser; input: unknown; now?: Date; clientAddress?: string | null }) {
   requirePermission(options.actor, "certificate.issue");
   const input = parseOrThrow(issueCertificateSchema, options.input);
   const db = getDb();
   const signer = await db.user.findUniqueOrThrow({ where: { id: options.actor.id }, omit: { passwordHash: false } });
-  if (!(await verifyPassword(input.password, signer.passwordHash)))
+  // The signing password is throttled like a sign-in: guessing it here is no easier than at the door.
+  const attempt = { email: signer.email, address: options.clientAddress ?? null };
+  if (!(await checkPasswordThrottled(attempt, () => verifyPassword(input.password, signer.passwordHash))))
     throw new AppError("INVALID_INPUT", "That password is not right; nothing was signed.", { fieldErrors: { password: "Not your password." } });
 
   const draft = await db.certificateRevision.findUnique({ where: { id: input.revisionId }, select: { status: true, revision: true, _count: { select: { results: true } }, certificate: { select: { number: true } } } });
@@ -41,13 +41,15 @@ export async function issueCertificate(options: { actor: CurrentUser; input: unk
 
   return withActor(options.actor, async (tx) => {
     const revision = await tx.certificateRevision.findUniqueOrThrow({ where: { id: input.revisionId }, select: { status: true, supersedesId: true } });
-    if (revision.status !== "DRAFT") throw new AppError("CONFLICT", "Someone issued this revision a moment ago; reload the page.");
+    if (revision.status !== "DRAFT") throw new AppError("CONFLICT", `${snapshot.number} revision ${snapshot.revision} was issued by someone else a moment ago; reload the page.`);
     if (revision.supersedesId) {
       const previous = await tx.certificateRevision.updateMany({ where: { id: revision.supersedesId, status: "ISSUED" }, data: { status: "SUPERSEDED", supersededAt: now } });
       if (previous.count !== 1) throw new AppError("CONFLICT", "The revision this one corrects is no longer the issued one; reload the page.");
     }
-    await tx.certificateRevision.update({ where: { id: input.revisionId }, data: { status: "ISSUED", issuedAt: now, pdf: new Uint8Array(pdf), pdfSha256, snapshot } });
+    // Signed while still a draft: the database accepts no signature on an issued revision.
     await tx.signature.create({ data: { revisionId: input.revisionId, signerId: options.actor.id, signerRole: options.actor.role, meaning: input.meaning, signedAt: now } });
+    const issued = await tx.certificateRevision.updateMany({ where: { id: input.revisionId, status: "DRAFT" }, data: { status: "ISSUED", issuedAt: now, pdf: new Uint8Array(pdf), pdfSha256, snapshot } });
+    if (issued.count !== 1) throw new AppError("CONFLICT", `${snapshot.number} revision ${snapshot.revision} was issued by someone else a moment ago; reload the page.`);
     return { number: snapshot.number, revision: snapshot.revision, pdfSha256, verificationCode: snapshot.verificationCode };
   }, { timeoutMs: 30_000 });
 }

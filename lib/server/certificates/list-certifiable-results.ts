@@ -2,12 +2,13 @@ import "server-only";
 import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
 import { getDb } from "../db/client";
+import { LIVE_REVISION_STATES } from "./certificate-collision";
 
-/** Approved results not yet on any certificate, grouped by project, for drafting a new certificate. */
+/** Approved results not on a live (draft or issued) certificate, grouped by project, for drafting a new certificate. */
 export async function listCertifiableResults(options: { actor: CurrentUser }) {
   requirePermission(options.actor, "certificate.issue");
   const results = await getDb().result.findMany({
-    where: { approvedAt: { not: null }, certificateResults: { none: {} } },
+    where: { approvedAt: { not: null }, certificateResults: { none: { revision: { status: { in: [...LIVE_REVISION_STATES] } } } } },
     orderBy: { approvedAt: "asc" },
     select: {
       id: true, property: true, value: true, unit: true, approvedAt: true,

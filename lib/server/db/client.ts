@@ -2,9 +2,11 @@ import "server-only";
 import { PrismaPg } from "@prisma/adapter-pg";
 import { PrismaClient } from "@/lib/generated/prisma/client";
 import { getEnv } from "../env";
+import { UTC_SESSION_OPTIONS } from "./utc-session";
 
 function createClient(connectionString: string) {
-  const adapter = new PrismaPg({ connectionString, max: 10 });
+  // Every session in UTC: timestamp columns hold UTC (lib/server/db/utc-session.ts).
+  const adapter = new PrismaPg({ connectionString, max: 10, options: UTC_SESSION_OPTIONS });
   // Password hashes never leave the database unless an operation asks for them by name.
   return new PrismaClient({ adapter, omit: { user: { passwordHash: true } } });
 }

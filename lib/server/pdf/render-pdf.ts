@@ -1,9 +1,8 @@
 import "server-only";
-import { existsSync, mkdtempSync, rmSync } from "node:fs";
-import os from "node:os";
-import path from "node:path";
+import { existsSync, rmSync } from "node:fs";
 import type { Browser, PDFMargin } from "puppeteer";
 import { AppError } from "@/lib/errors/app-error";
+import { newProfileDir, sweepOrphanProfiles, watchBrowser } from "./browser-watchdog";
 import { CHROMIUM_FLAGS } from "./chromium";
 import { createFifoLimiter } from "./create-fifo-limiter";
 
@@ -40,7 +39,8 @@ async function launchBrowser(s: PdfState): Promise<Browser> {
   const binary = executablePath();
   const { default: puppeteer } = await import("puppeteer");
   if (s.userDataDir) rmSync(/* turbopackIgnore: true */ s.userDataDir, { recursive: true, force: true });
-  s.userDataDir = mkdtempSync(path.join(/* turbopackIgnore: true */ os.tmpdir(), "seepline-pdf-"));
+  sweepOrphanProfiles();
+  s.userDataDir = newProfileDir();
   installExitHook(s);
   try {
     // The app owns its signals; puppeteer's own handlers would call process.exit.
@@ -52,6 +52,8 @@ async function launchBrowser(s: PdfState): Promise<Browser> {
       handleSIGHUP: false,
     });
     s.current = browser;
+    const pid = browser.process()?.pid;
+    if (pid) watchBrowser(pid, s.userDataDir);
     browser.once("disconnected", () => {
       if (s.current !== browser) return;
       s.current = null;

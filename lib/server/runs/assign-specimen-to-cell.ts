@@ -1,5 +1,4 @@
 import "server-only";
-import { holdsCell, RUN_STATES, type RunStateName } from "@/lib/runs/run-state-machine";
 import { AppError } from "@/lib/errors/app-error";
 import { enteredPressureToPa } from "@/lib/units/pressure-entry";
 import { readBuretteAreasM2 } from "@/lib/validation/equipment";
@@ -14,8 +13,7 @@ import { readLabTimeZone } from "../lab/read-lab-time-zone";
 import { findEquipmentStatuses } from "../equipment/find-usable-equipment";
 import { findSettingsVersionInForce } from "../methods/settings-in-use";
 import { parseOrThrow } from "../validation/parse";
-
-const ACTIVE_STATES = RUN_STATES.filter((s) => holdsCell(s as RunStateName));
+import { ACTIVE_RUN_STATES, explainRunCollision } from "./run-collision";
 
 /**
  * The technician mounts a prepared specimen in a free cell: the run starts, with the instruments it uses
@@ -27,6 +25,8 @@ export async function assignSpecimenToCell(options: { actor: CurrentUser; input:
   requirePermission(options.actor, "run.operate");
   const input = parseOrThrow(assignSpecimenSchema, options.input);
   const now = options.now ?? new Date();
+  // The database keeps one active run per cell and per specimen; the checks below give the usual sentence,
+  // the unique indexes decide a race between two people starting runs at the same moment.
   return withActor(options.actor, async (tx) => {
     const specimen = await tx.specimen.findUnique({ where: { id: input.specimenId }, select: { labNumber: true, preparedAt: true } });
     if (!specimen) throw new AppError("INVALID_INPUT", undefined, { fieldErrors: { specimenId: "Choose a prepared specimen." } });
@@ -58,7 +58,7 @@ export async function assignSpecimenToCell(options: { actor: CurrentUser; input:
     if (refusals.length > 0)
       throw new AppError("ILLEGAL_TRANSITION", `This equipment cannot be used for a new run: ${refusals.join(" ")} Use calibrated equipment, or ask a QA manager to allow it with a reason.`);
 
-    const busy = await tx.run.findFirst({ where: { cellId: input.cellId, state: { in: ACTIVE_STATES } }, select: { labNumber: true } });
+    const busy = await tx.run.findFirst({ where: { cellId: input.cellId, state: { in: ACTIVE_RUN_STATES } }, select: { labNumber: true } });
     if (busy) throw new AppError("CONFLICT", `That cell is holding run ${busy.labNumber}; choose a free cell.`, { fieldErrors: { cellId: "Not free." } });
     const burette = statuses.get(input.burettePanelId)!;
     if (!readBuretteAreasM2(burette.latestValues))
@@ -81,5 +81,7 @@ export async function assignSpecimenToCell(options: { actor: CurrentUser; input:
       select: { id: true, labNumber: true },
     });
     return run;
+  }).catch(async (error: unknown) => {
+    throw (await explainRunCollision(error, input)) ?? error;
   });
 }

@@ -4,6 +4,7 @@ import { resetPasswordSchema } from "@/lib/validation/account";
 import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
 import { hashPassword } from "../auth/password";
+import { clearPasswordThrottle } from "../auth/password-throttle";
 import { withActor } from "../db/transaction";
 import { parseOrThrow } from "../validation/parse";
 
@@ -20,6 +21,6 @@ export async function resetPassword(options: { actor: CurrentUser; input: unknow
       data: { passwordHash, passwordChangedAt: new Date(), sessionVersion: { increment: 1 }, version: { increment: 1 } },
     });
     // A reset also lifts any sign-in block, so the person can use the new password at once.
-    await tx.signInThrottle.deleteMany({ where: { key: `email:${user.email}` } });
+    await clearPasswordThrottle(tx, user.email);
   });
 }

@@ -57,7 +57,9 @@ describe("navigation and page addresses", () => {
     expect(actionForPath("/admin/lab")).toBe("lab.configure");
     expect(actionForPath("/runs/T26-00001")).toBe("run.view");
     expect(actionForPath("/runsheet")).toBeNull();
-    expect(actionForPath("/")).toBeNull();
+    // The staff start page needs the workspace; "/" names no other address.
+    expect(actionForPath("/")).toBe("workspace.view");
+    expect(actionForPath("/unknown-page")).toBeNull();
   });
 
   it("treats sign-in, health and verification as public, and nothing else", () => {
