@@ -46,7 +46,7 @@ describe.skipIf(!browserAvailable())("probe: races between two people, decided b
   }
 
   const assignInput = (specimenId: string, cellId: string, kit: { panel: string; transducer: string }) => ({
-    specimenId, cellId, burettePanelId: kit.panel, transducerId: kit.transducer, methodCode: "D5887", pressureUnit: "KPA", effectiveStress: "34.5",
+    specimenId, cellId, burettePanelId: kit.panel, transducerId: kit.transducer, methodCode: "D5887", pressureUnit: "KPA", effectiveStress: "34.5", mountedAt: new Date().toISOString(),
   });
 
   it("one free cell, two technicians mounting different specimens: one run, the other told which run has the cell", async () => {

@@ -46,7 +46,7 @@ describe("invariants kept by the database", () => {
     const [tech1, tech2, qa] = await Promise.all([makeUser("TECHNICIAN"), makeUser("TECHNICIAN"), makeUser("QA_MANAGER")]);
     const [cell, panel, transducer] = await Promise.all([makeInstrument("PERMEAMETER_CELL", qa.id), makeInstrument("BURETTE_PANEL", qa.id), makeInstrument("PRESSURE_TRANSDUCER", qa.id)]);
     const [a, b] = await Promise.all([makeSpecimen(tech1.id), makeSpecimen(tech2.id)]);
-    const input = (specimenId: string) => ({ specimenId, cellId: cell.id, burettePanelId: panel.id, transducerId: transducer.id, methodCode: "D5887", pressureUnit: "KPA" });
+    const input = (specimenId: string) => ({ specimenId, cellId: cell.id, burettePanelId: panel.id, transducerId: transducer.id, methodCode: "D5887", pressureUnit: "KPA", mountedAt: new Date().toISOString() });
     const outcomes = await Promise.allSettled([assignSpecimenToCell({ actor: tech1, input: input(a.specimen.id) }), assignSpecimenToCell({ actor: tech2, input: input(b.specimen.id) })]);
     const won = outcomes.filter((o) => o.status === "fulfilled");
     expect(won).toHaveLength(1);

@@ -5,17 +5,19 @@ import { readLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 import { updateLabDetails } from "@/lib/server/lab/update-lab-details";
 import { logShipment } from "@/lib/server/intake/log-shipment";
 import { cutCoupon } from "@/lib/server/samples/cut-coupon";
+import { withOwner } from "../support/owner";
 import { failure } from "../support/refusals";
 import { couponInput, daysAgo, receiveRolls } from "../support/custody-chain";
 import { db, makeProject, makeStorageLocation, makeUser, unique } from "../support/factories";
 
 // Other tests read times in the lab's zone (UTC while unset): put the lab row back as it was after each test.
+const SYSTEM = { id: "system:test" };
 let saved: Awaited<ReturnType<typeof snapshot>> | undefined;
 const snapshot = () => db().laboratory.findUnique({ where: { id: "lab" } });
 afterEach(async () => {
   if (saved === undefined) return;
   if (saved) await db().laboratory.update({ where: { id: "lab" }, data: { name: saved.name, address: saved.address, accreditation: saved.accreditation, timeZone: saved.timeZone } });
-  else await db().laboratory.deleteMany({ where: { id: "lab" } });
+  else await withOwner(SYSTEM, (tx) => tx.laboratory.deleteMany({ where: { id: "lab" } })); // the app's role may not delete
   saved = undefined;
 });
 
