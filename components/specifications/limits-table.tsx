@@ -13,7 +13,7 @@ export function LimitsTable({ limits, testId }: { limits: LimitRow[]; testId?: s
     <div className="table-wrap">
       <table className="list" data-testid={testId}>
         <thead>
-          <tr><th>Property</th><th>Limit</th><th>Unit</th><th>Direction</th><th>Sig. digits</th><th>Conformance</th><th>Test method</th></tr>
+          <tr><th>Property</th><th>Limit</th><th>Unit</th><th>Direction</th><th>Sig. digits</th><th>Conformance</th><th>Test method</th><th>Testing frequency</th></tr>
         </thead>
         <tbody>
           {limits.map((l) => (
@@ -25,12 +25,19 @@ export function LimitsTable({ limits, testId }: { limits: LimitRow[]; testId?: s
               <td>{l.significantDigits}</td>
               <td>{CONFORMANCE_METHOD_LABELS[l.conformanceMethod]}</td>
               <td>{formatTestMethod(l.testMethodCode)}</td>
+              <td>{describeTestingFrequency(l.testingFrequencyAreaM2 ?? null, l.testingFrequencyPerLot ?? false)}</td>
             </tr>
           ))}
         </tbody>
       </table>
     </div>
   );
+}
+
+/** "1 per 4,000 m² delivered and 1 per lot"; "every roll" when the specification sets no frequency. */
+export function describeTestingFrequency(areaM2: number | null, perLot: boolean): string {
+  const parts = [areaM2 !== null ? `1 per ${areaM2.toLocaleString("en-GB")} m² delivered` : null, perLot ? "1 per lot" : null].filter(Boolean);
+  return parts.length === 0 ? "every roll" : parts.join(" and ");
 }
 
 /** "D5887" reads "ASTM D5887"; a code that names its own body ("GRI-GCL3", "ASTM D5887") is shown as entered. */
