@@ -1,4 +1,5 @@
 import { formatUnit } from "@/lib/results/format-result";
+import { describeTestingFrequency } from "@/lib/conformance/sampling-coverage";
 import { TEST_PROPERTY_LABELS, type SpecificationLimitRow } from "@/lib/results/property-units";
 import { CONFORMANCE_METHOD_LABELS, LIMIT_DIRECTION_LABELS } from "@/lib/validation/specifications";
 import styles from "./specifications.module.css";
@@ -32,12 +33,6 @@ export function LimitsTable({ limits, testId }: { limits: LimitRow[]; testId?: s
       </table>
     </div>
   );
-}
-
-/** "1 per 4,000 m² delivered and 1 per lot"; "every roll" when the specification sets no frequency. */
-export function describeTestingFrequency(areaM2: number | null, perLot: boolean): string {
-  const parts = [areaM2 !== null ? `1 per ${areaM2.toLocaleString("en-GB")} m² delivered` : null, perLot ? "1 per lot" : null].filter(Boolean);
-  return parts.length === 0 ? "every roll" : parts.join(" and ");
 }
 
 /** "D5887" reads "ASTM D5887"; a code that names its own body ("GRI-GCL3", "ASTM D5887") is shown as entered. */

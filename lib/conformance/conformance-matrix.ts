@@ -6,7 +6,7 @@
 import { explainConformance, type SpecificationLimitInput } from "../results/conformance-summary";
 import type { TestProperty } from "../results/property-units";
 
-export type MatrixLimit = SpecificationLimitInput & { property: TestProperty; testMethodCode: string | null };
+export type MatrixLimit = SpecificationLimitInput & { property: TestProperty; testMethodCode: string | null; testingFrequencyAreaM2?: number | null; testingFrequencyPerLot?: boolean };
 export type MatrixRoll = { id: string; labNumber: string; rollNumber: string; lotNumber: string };
 /** A result or a test in progress for a roll. `stage`: approved, awaiting review, returned for changes, or under way. */
 export type MatrixEntry = {

@@ -25,6 +25,12 @@ export type PropertyCoverage = {
   rollsLacking: string[];
 };
 
+/** "1 per 4,000 m² delivered and 1 per lot"; "every roll" when the specification sets no frequency. */
+export function describeTestingFrequency(areaM2: number | null, perLot: boolean): string {
+  const parts = [areaM2 !== null ? `1 per ${areaM2.toLocaleString("en-GB")} m² delivered` : null, perLot ? "1 per lot" : null].filter(Boolean);
+  return parts.length === 0 ? "every roll" : parts.join(" and ");
+}
+
 /** Area of a delivered roll, m², or null when its size was not recorded. */
 export function deliveredAreaM2(roll: Pick<CoverageRoll, "deliveredLengthM" | "deliveredWidthM">): number | null {
   return roll.deliveredLengthM !== null && roll.deliveredWidthM !== null ? roll.deliveredLengthM * roll.deliveredWidthM : null;

@@ -13,7 +13,7 @@ export async function getIndexTest(options: { actor: CurrentUser; id: string }) 
       id: true, methodCode: true, property: true, value: true, unit: true, testedAt: true, state: true, version: true, observations: true, evaluation: true,
       performedById: true, performedBy: { select: { name: true } }, approvedBy: { select: { name: true } }, approvedAt: true, correctsId: true,
       correctedBy: { select: { id: true } },
-      methodSettingsVersion: { select: { version: true } },
+      methodSettingsVersion: { select: { version: true, settings: true } },
       roll: { select: { id: true, labNumber: true, rollNumber: true, lotNumber: true, project: { select: { code: true, name: true } } } },
       coupon: { select: { labNumber: true } },
       results: { select: { property: true, value: true, unit: true, standardDeviation: true, specimenCount: true, expandedUncertainty: true, coverageFactor: true } },

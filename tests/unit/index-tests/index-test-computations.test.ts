@@ -154,3 +154,14 @@ describe("peel strength (ASTM D6496)", () => {
     expect(peelStrengthD6496([{ widthMm: 100, peelForceN: 40 }]).standardDeviation).toBeNull();
   });
 });
+
+describe("reported values (lab settings: reporting unit and decimal places, rounded half to even)", () => {
+  it("rounds once in the reporting unit", async () => {
+    const { reportIndexValue } = await import("@/lib/index-tests/reported-value");
+    // 9.02 kN/m to one decimal: 9.0; 0.592 kN/m reported in N/m to whole units: 592; 3.665 kg/m² to 0.01, half to even: 3.66 (decimal.js, ROUND_HALF_EVEN)
+    expect(reportIndexValue(9.02, "kN/m", { reportingUnit: "kN/m", reportingDecimals: 1 })).toBe("9.0 kN/m");
+    expect(reportIndexValue(0.592, "kN/m", { reportingUnit: "N/m", reportingDecimals: 0 })).toBe("592 N/m");
+    expect(reportIndexValue(3.665, "kg/m2", { reportingUnit: "kg/m2", reportingDecimals: 2 })).toBe("3.66 kg/m²");
+    expect(reportIndexValue(3.675, "kg/m2", { reportingUnit: "kg/m2", reportingDecimals: 2 })).toBe("3.68 kg/m²");
+  });
+});
