@@ -32,7 +32,7 @@ export function specimenAreaM2(lengthMm: number, widthMm: number): number {
 /** GCL and clay (0 % moisture) mass per unit area of each specimen and their means, kg/m^2. */
 export function massPerAreaD5993(specimens: readonly MassPerAreaSpecimen[], moisture: MoistureObservations): MassPerAreaResult {
   if (specimens.length === 0) throw new RangeError("At least one specimen is needed.");
-  const w = moistureContentD2216(moisture);
+  const w = moistureContentD2216({ wetWithTareG: moisture.wetWithTareG, dryWithTareG: moisture.dryWithTareG, tareG: moisture.tareG });
   const rows = specimens.map((s, i) => {
     if (!(s.lengthMm > 0) || !(s.widthMm > 0)) throw new RangeError(`Specimen ${i + 1}: its length and width must be more than 0 mm.`);
     if (!(s.totalMassG > 0)) throw new RangeError(`Specimen ${i + 1}: its total mass must be more than 0 g.`);

@@ -22,7 +22,8 @@ export type MoistureContent = {
 
 /** Moisture content of one oven-dried specimen. Throws a RangeError for a dry mass above the wet or a tare not below the dry. */
 export function moistureContentD2216(o: MoistureObservations): MoistureContent {
-  for (const [k, v] of Object.entries(o)) if (!Number.isFinite(v) || v < 0) throw new RangeError(`${k} must be a mass of 0 g or more, got ${v}.`);
+  // Only the three masses are read: callers may pass a whole test's observations.
+  for (const k of ["wetWithTareG", "dryWithTareG", "tareG"] as const) if (!Number.isFinite(o[k]) || o[k] < 0) throw new RangeError(`${k} must be a mass of 0 g or more, got ${o[k]}.`);
   if (o.dryWithTareG > o.wetWithTareG) throw new RangeError("The dry mass is above the wet mass: water cannot be gained in the oven.");
   if (o.tareG >= o.dryWithTareG) throw new RangeError("The tare is not below the dry mass: there are no dry solids.");
   const waterMassG = o.wetWithTareG - o.dryWithTareG;

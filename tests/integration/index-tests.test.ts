@@ -102,6 +102,24 @@ describe("review of an index test", () => {
   });
 });
 
+describe("each method through the operation", () => {
+  it("records mass per unit area (two results) and moisture content with the worked examples' numbers", async () => {
+    const { clerk, technician } = await people();
+    const { rolls, location } = await receiveProjectRolls(clerk, 5, [{ lot: "L1" }]);
+    const i = await makeIndexInstruments();
+    const squares = await cutCoupon({ actor: technician, input: { ...(await couponInput(rolls[0]!.id, location.id, daysAgo(3))), intendedMethodCode: "D5993" } });
+    const mass = await recordIndexTest({ actor: technician, input: testInput(rolls[0]!.id, { balanceId: i.balanceId, ovenId: i.ovenId }, OBSERVATIONS.D5993(), { couponId: squares.id }) });
+    const massResults = await db().indexTestResult.findMany({ where: { indexTestId: mass.id }, orderBy: { property: "asc" } });
+    // ASTM D5993 worked example (tests/unit/index-tests): clay at 0 % = 170.0 g / 1.120 / 0.0400 m² = 3.7946 kg/m²; GCL 5.25 kg/m².
+    expect(massResults.map((r) => [r.property, Number(r.value.toFixed(4)), r.specimenCount])).toEqual([["BENTONITE_MASS_PER_AREA", 3.7946, 3], ["GCL_MASS_PER_AREA", 5.25, 3]]);
+    const moisture = await recordIndexTest({ actor: technician, input: testInput(rolls[0]!.id, { balanceId: i.balanceId, ovenId: i.ovenId }, OBSERVATIONS.D2216()) });
+    // ASTM D2216 worked example: 5.20 g of water over 25.00 g of solids = 20.8 %.
+    expect((await db().indexTest.findUniqueOrThrow({ where: { id: moisture.id } })).value).toBeCloseTo(20.8, 10);
+    const peel = await recordIndexTest({ actor: technician, input: testInput(rolls[0]!.id, { tensileFrameId: i.tensileFrameId, loadCellId: i.loadCellId }, OBSERVATIONS.D6496(), { couponId: (await cutCoupon({ actor: technician, input: { ...(await couponInput(rolls[0]!.id, location.id, daysAgo(3))), intendedMethodCode: "D6496" } })).id }) });
+    expect((await db().indexTest.findUniqueOrThrow({ where: { id: peel.id } })).value).toBeCloseTo(592, 9);
+  });
+});
+
 describe("conformance matrix and sampling coverage of a project", () => {
   it("marks the failing roll, counts the tests against the area delivered and names the lots and rolls lacking a test", async () => {
     const { clerk, technician, qa } = await people();
