@@ -35,7 +35,9 @@ export function IndexTestForm(props: {
   const observations: Record<string, unknown> = { methodCode };
   for (const f of layout.fields) observations[f.key] = setting(f.fromSetting);
   if (layout.choice) observations[layout.choice.key] = layout.choice.options[0]!.value;
-  if (layout.specimenColumns.length) observations.specimens = Array.from({ length: rows }, () => Object.fromEntries(layout.specimenColumns.map((c) => [c.key, setting(c.fromSetting)])));
+  // The method's fixed values (strip width) fill the rows the method asks for; spare rows stay blank, so they are left out.
+  const asked = Number(settings.minSpecimens ?? 1);
+  if (layout.specimenColumns.length) observations.specimens = Array.from({ length: rows }, (_, n) => Object.fromEntries(layout.specimenColumns.map((c) => [c.key, n < asked ? setting(c.fromSetting) : ""])));
   const form = useForm<Record<string, unknown>>({
     resolver: zodResolver(schema as never),
     defaultValues: {
@@ -96,7 +98,7 @@ export function IndexTestForm(props: {
                     <td>{n + 1}</td>
                     {layout.specimenColumns.map((c) => (
                       <td key={c.key}>
-                        <input aria-label={`Specimen ${n + 1} ${c.label.toLowerCase()}`} inputMode="decimal" autoComplete="off" {...register(`observations.specimens.${n}.${c.key}`)} />
+                        <input aria-label={`Specimen ${n + 1} ${c.label}`} inputMode="decimal" autoComplete="off" {...register(`observations.specimens.${n}.${c.key}`)} />
                         {error(`observations.specimens.${n}.${c.key}`) && <div className="field-error">{error(`observations.specimens.${n}.${c.key}`)}</div>}
                       </td>
                     ))}
