@@ -127,6 +127,7 @@ describe.skipIf(!browserAvailable())("a roll's whole conformance job: index test
     await fill(tech, "Clay moisture: container and wet clay (g)", "38.40");
     await fill(tech, "Clay moisture: container and oven-dried clay (g)", "36.00");
     await fill(tech, "Clay moisture: container (g)", "16.00");
+    await tech.screenshot({ path: "tmp/e2e-roll-conformance-entry.png", fullPage: true });
     await typeSpecimens(tech, [210, 214, 205].map((m) => ({ "Length (mm)": "200", "Width (mm)": "200", "Total mass (g)": String(m), "Geotextile mass (g)": "40" })));
     tests.push(await submitIndexTest(tech));
     // ASTM D5993 worked example (tests/unit/index-tests): the clay at 0 % moisture, mean of the three squares.
@@ -165,11 +166,13 @@ describe.skipIf(!browserAvailable())("a roll's whole conformance job: index test
       await qa.click("button::-p-text(Approve the test)");
       await qa.waitForFunction(() => document.querySelector('[data-testid="index-test-state"]')?.textContent === "Approved", { timeout: 30_000 });
     }
+    await qa.screenshot({ path: "tmp/e2e-roll-conformance-test-page.png", fullPage: true });
     // The project page: the roll's row conforms on every property the specification lists.
     await qa.goto(`${baseUrl()}/samples/rolls/${roll}`);
     await qa.click('a[href^="/projects/"]');
     await qa.waitForSelector('[data-testid="conformance-matrix"]');
     const staffRow = await textOf(qa, `[data-testid="conformance-matrix"] tr[data-roll="${roll}"]`);
+    await qa.screenshot({ path: "tmp/e2e-roll-conformance-project.png", fullPage: true });
     expect(staffRow).toContain("Conforms");
     await qa.browserContext().close();
 

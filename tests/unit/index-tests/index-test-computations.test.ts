@@ -165,3 +165,22 @@ describe("reported values (lab settings: reporting unit and decimal places, roun
     expect(reportIndexValue(3.675, "kg/m2", { reportingUnit: "kg/m2", reportingDecimals: 2 })).toBe("3.68 kg/m²");
   });
 });
+
+describe("evaluateIndexTest: the results a test gives, with the lab's declared uncertainty", () => {
+  it("D5993 gives the clay's and the GCL's mass per area; the declared expanded uncertainty goes with the clay result only", async () => {
+    const { evaluateIndexTest } = await import("@/lib/index-tests/evaluate-index-test");
+    const { METHOD_SETTINGS } = await import("@/lib/methods/registry");
+    const settings = { ...(METHOD_SETTINGS.D5993!.defaults as Record<string, unknown>), expandedUncertainty: 0.05, coverageFactor: 2 } as never;
+    const r = evaluateIndexTest({ methodCode: "D5993", wetWithTareG: 38.4, dryWithTareG: 36, tareG: 16, specimens: [{ lengthMm: 200, widthMm: 200, totalMassG: 210, geotextileMassG: 40 }] }, settings);
+    expect(r.results.map((x) => [x.property, Number(x.value.toFixed(4)), x.expandedUncertainty, x.coverageFactor])).toEqual([
+      ["BENTONITE_MASS_PER_AREA", 3.7946, 0.05, 2],
+      ["GCL_MASS_PER_AREA", 5.25, null, null],
+    ]);
+  });
+  it("no uncertainty declared (the shipped default): none stated", async () => {
+    const { evaluateIndexTest } = await import("@/lib/index-tests/evaluate-index-test");
+    const { METHOD_SETTINGS } = await import("@/lib/methods/registry");
+    const r = evaluateIndexTest({ methodCode: "D5891", clayMassG: 22.5, waterVolumeMl: 350, pressureKPa: 690, filtrationMinutes: 30, filtrateVolumeMl: 16.4 }, METHOD_SETTINGS.D5891!.defaults as never);
+    expect(r.results[0]).toMatchObject({ property: "FLUID_LOSS", value: 16.4, unit: "mL", expandedUncertainty: null, coverageFactor: null, specimenCount: 1 });
+  });
+});
