@@ -67,9 +67,9 @@ export default async function RollPage({ params }: Props) {
             <h2>Coupons <span className="count">{roll.coupons.length}</span></h2>
             {roll.coupons.length === 0 ? <p className="empty">No coupon cut yet.</p> : (
               <table className="list" data-testid="roll-coupons">
-                <thead><tr><th>Coupon</th><th>Position</th><th>Cut</th><th>Specimens</th><th>State</th></tr></thead>
+                <thead><tr><th>Coupon</th><th>For</th><th>Position</th><th>Cut</th><th>Specimens</th><th>State</th></tr></thead>
                 <tbody>{roll.coupons.map((c) => (
-                  <tr key={c.id}><td><Link className="mono" href={`/samples/coupons/${c.labNumber}`}>{c.labNumber}</Link></td><td>{c.positionInSample}</td><td>{formatDate(c.cutAt, zone)}</td><td>{c._count.specimens}</td><td><StateTag state={c.state} /></td></tr>
+                  <tr key={c.id}><td><Link className="mono" href={`/samples/coupons/${c.labNumber}`}>{c.labNumber}</Link></td><td>{c.intendedMethodCode && isIndexMethodCode(c.intendedMethodCode) ? INDEX_METHODS[c.intendedMethodCode].title : "specimens"}</td><td>{c.positionInSample}</td><td>{formatDate(c.cutAt, zone)}</td><td>{c._count.specimens}</td><td><StateTag state={c.state} /></td></tr>
                 ))}</tbody>
               </table>
             )}
