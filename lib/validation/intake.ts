@@ -51,7 +51,7 @@ export const acknowledgeShipmentSchema = z.object({ shipmentId: z.string().min(1
 
 /** A change to an acknowledged receipt: one field, its new value and why. */
 export const SHIPMENT_CORRECTABLE_FIELDS = ["deliveredBy", "receivedAt", "conditionNotes"] as const;
-export const ROLL_CORRECTABLE_FIELDS = ["rollNumber", "lotNumber", "product", "manufacturer", "sampleLengthMm", "sampleWidthMm", "machineDirectionMarked", "conditionNotes"] as const;
+export const ROLL_CORRECTABLE_FIELDS = ["rollNumber", "lotNumber", "product", "manufacturer", "sampleLengthMm", "sampleWidthMm", "machineDirectionMarked", "conditionNotes", "deliveredLengthM", "deliveredWidthM"] as const;
 
 export const correctReceiptSchema = z.object({
   target: z.enum(["shipment", "roll"]),

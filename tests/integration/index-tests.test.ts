@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { loadProjectConformance } from "@/lib/server/conformance/load-project-conformance";
 import { recordIndexTest } from "@/lib/server/index-tests/record-index-test";
+import { correctReceipt } from "@/lib/server/intake/correct-receipt";
 import { reviewIndexTest } from "@/lib/server/index-tests/review-index-test";
 import { cutCoupon } from "@/lib/server/samples/cut-coupon";
 import { withActor } from "@/lib/server/db/transaction";
@@ -153,6 +154,24 @@ describe("conformance matrix and sampling coverage of a project", () => {
     expect(tensileCoverage).toMatchObject({ rule: "by area", testsRequired: 2, testsApproved: 1, covered: false });
     expect(tensileCoverage.rollsLacking.sort()).toEqual([a.labNumber, c.labNumber].sort());
     expect(m.waiting.get(c.id)!.map((w) => w.methodCode)).toEqual(["D5890", "D6768"]);
+  });
+});
+
+describe("a delivered size given later", () => {
+  it("is a receipt correction with a reason, and the coverage counts the area from then on", async () => {
+    const { clerk, qa } = await people();
+    const { project, rolls } = await receiveProjectRolls(clerk, 5, [{ lot: "L1", lengthM: 45, widthM: 4.5 }, { lot: "L1" }]);
+    await specify(qa, project.id, [{ property: "TENSILE_STRENGTH", limitText: "4", unit: "kN/m", direction: "MINIMUM", testingFrequencyAreaM2: "300" }]);
+    const before = (await loadProjectConformance({ projectId: project.id })).coverage[0]!;
+    expect(before).toMatchObject({ testsRequired: 1, rollsWithoutSize: [rolls[1]!.labNumber] });
+    expect(before.deliveredAreaM2).toBeCloseTo(202.5, 9);
+    const roll = rolls[1]!;
+    expect((await failure(correctReceipt({ actor: clerk, input: { target: "roll", id: roll.id, field: "deliveredLengthM", value: "0", reason: "Roll length from the delivery note", version: 1 } }))).fieldErrors.value).toMatch(/more than 0/);
+    await correctReceipt({ actor: clerk, input: { target: "roll", id: roll.id, field: "deliveredLengthM", value: "45", reason: "Roll length from the delivery note", version: 1 } });
+    await correctReceipt({ actor: clerk, input: { target: "roll", id: roll.id, field: "deliveredWidthM", value: "4.5", reason: "Roll width from the delivery note", version: 2 } });
+    // 2 × 202.5 m² = 405 m² at one tensile test per 300 m²: 2 tests.
+    const after = (await loadProjectConformance({ projectId: project.id })).coverage[0]!;
+    expect(after).toMatchObject({ testsRequired: 2, rollsWithoutSize: [] });
   });
 });
 
