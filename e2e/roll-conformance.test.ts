@@ -217,4 +217,18 @@ describe.skipIf(!browserAvailable())("a roll's whole conformance job: index test
     expect(labNumber(roll, "R")).toBe(roll);
     await client.browserContext().close();
   }, 600_000);
+
+  it("client A sees the demo roll whose swell index fails its limit marked, with the decision in words, and the rolls still pending", async () => {
+    const client = await pageSignedInAs(browser, "portal@marrowdale.test");
+    await client.goto(`${baseUrl()}/portal`);
+    await client.click('[data-testid="portal-projects"] a[href="/portal/projects/MWA-C4"]');
+    await client.waitForSelector('[data-testid="conformance-matrix"]');
+    const rows = await client.$$eval('[data-testid="conformance-matrix"] tbody tr', (trs) => trs.map((tr) => (tr as HTMLElement).innerText));
+    const failing = rows.find((r) => r.includes("R-4102"))!;
+    expect(failing).toContain("Does not conform");
+    expect(await textOf(client, '[data-testid="failing-decision"]')).toMatch(/22 mL\/2 g.*is below the minimum of 24 mL\/2 g: does not conform/);
+    expect(rows.find((r) => r.includes("R-4101"))).toContain("Conforms");
+    expect(rows.find((r) => r.includes("R-4103"))).toContain("Pending");
+    await client.browserContext().close();
+  });
 });
