@@ -46,6 +46,7 @@ const OWNERS: Record<string, (row: Row) => AuditOwner> = {
   Specification: (row) => self(text(row.name), `/specifications/${encodeURIComponent(text(row.id))}`),
   ApiToken: (row) => partOf("user", "userId", row, `API token “${text(row.name)}”`),
   ApiRequest: (row) => partOf("user", "userId", row, `${text(row.method)} ${text(row.path)} with API token “${text(row.tokenName)}”`),
+  NoticeDelivery: (row) => self(`notice “${text(row.subject)}”`),
   ApiReadingKey: (row) => partOf("run", "runId", row, `reading ${text(row.sequence)} posted under key “${text(row.key)}”`),
   SpecificationLimit: (row) => partOf("specification", "specificationId", row, `limit on ${property(row.property)}`),
   ShipmentPhoto: (row) => partOf("shipment", "shipmentId", row, `photo ${text(row.fileName)}`),
