@@ -54,6 +54,7 @@ async function until(what: string, check: () => Promise<boolean>, timeoutMs = 60
 describe.skipIf(!browserAvailable())("the data-logger bridge (a real process against the app)", () => {
   let browser: Browser;
   let bridge: ChildProcess | null = null;
+  let made: { token: string; tokenName: string } | null = null;
   const relay = makeRelay(new URL(inject("baseUrl") || "http://127.0.0.1:1"));
   const db = new pg.Client({ connectionString: inject("appDatabaseUrl") });
   beforeAll(async () => {
@@ -80,6 +81,7 @@ describe.skipIf(!browserAvailable())("the data-logger bridge (a real process aga
     await tech.click("button::-p-text(Create token)");
     await tech.waitForSelector('[data-testid="new-token"] pre', { timeout: 30_000 });
     const token = (await textOf(tech, '[data-testid="new-token"] pre')).trim();
+    made = { token, tokenName };
     expect(token).toMatch(/^slp_[A-Za-z0-9_-]{43}$/);
     await tech.waitForFunction((name) => document.querySelector(`[data-token-name="${name}"]`) !== null, { timeout: 30_000 }, tokenName);
     expect(await textOf(tech, `[data-token-name="${tokenName}"]`)).toMatch(/CELL-03[\s\S]*valid until/);
@@ -159,4 +161,27 @@ describe.skipIf(!browserAvailable())("the data-logger bridge (a real process aga
     expect(log).toMatch(/3 line\(s\) posted: 0 saved, 3 already there|posted: \d+ saved, [1-9]\d* already there/);
     expect(log).toMatch(/the app did not answer/);
   }, 180_000);
+
+  it("administrator: sees every person's tokens and revokes the logger's; the API refuses it from then on; the reference is public", async () => {
+    expect(made).not.toBeNull();
+    const rolls = () => fetch(`${baseUrl()}/api/v1/runs/T26-99999/readings`, { method: "POST", headers: { authorization: `Bearer ${made!.token}`, "content-type": "application/json" }, body: "{}" });
+    expect((await rolls()).status).toBe(400);
+    const admin = await pageSignedInAs(browser, "admin@quillfen.test");
+    await admin.goto(`${baseUrl()}/`);
+    await admin.click("a::-p-text(API tokens)");
+    await admin.waitForSelector('[data-testid="api-token-list"]');
+    expect(await textOf(admin, `[data-token-name="${made!.tokenName}"]`)).toMatch(/Bram Oyelaran[\s\S]*CELL-03[\s\S]*valid until[\s\S]*requests\)/);
+    await admin.click(`button[aria-label="Revoke ${made!.tokenName}"]`);
+    await admin.waitForFunction((name) => /revoked/.test(document.querySelector(`[data-token-name="${name}"]`)?.textContent ?? ""), { timeout: 30_000 }, made!.tokenName);
+    const refused = await rolls();
+    expect(refused.status).toBe(401);
+    expect(((await refused.json()) as { error: { message: string } }).error.message).toMatch(/revoked/);
+    await admin.browserContext().close();
+
+    const docs = await fetch(`${baseUrl()}/api-docs`);
+    expect(docs.status).toBe(200);
+    expect(await docs.text()).toContain("POST /api/v1/runs/{labNumber}/readings");
+    const spec = (await (await fetch(`${baseUrl()}/api/v1/openapi.json`)).json()) as { openapi: string };
+    expect(spec.openapi).toBe("3.1.0");
+  });
 });
