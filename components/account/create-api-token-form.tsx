@@ -41,7 +41,7 @@ export function CreateApiTokenForm({ scopes }: { scopes: ApiTokenScopeName[] }) 
         </div>
       )}
       {notice && <div className="notice notice-error" role="status">{notice}</div>}
-      <Field label="Name" hint="Where it is used, e.g. “Cell 3 logger” or “QA register”." error={formState.errors.name?.message}><input {...register("name")} /></Field>
+      <Field label="Token name" hint="Where it is used, e.g. “Cell 3 logger” or “QA register”." error={formState.errors.name?.message}><input {...register("name")} /></Field>
       <Field label="What it may do" error={formState.errors.scope?.message}>
         <select {...register("scope")}>{scopes.map((s) => <option key={s} value={s}>{API_TOKEN_SCOPE_LABELS[s]}</option>)}</select>
       </Field>
