@@ -26,7 +26,11 @@ export const idempotencyKeySchema = z
   .max(200, "An idempotencyKey has at most 200 characters.")
   .regex(/^[A-Za-z0-9._:\-]+$/, "An idempotencyKey uses letters, digits and . _ : - only.");
 
-export const apiReadingSchema = readingEntrySchema.safeExtend({ idempotencyKey: idempotencyKeySchema });
+export const apiReadingSchema = readingEntrySchema.safeExtend({
+  // The grid's own rule for the time, described for the API's readers.
+  takenAt: readingEntrySchema.shape.takenAt.describe("When the reading was taken: ISO 8601 with its zone, e.g. 2026-12-02T09:30:00Z. Not in the future, not before permeation began."),
+  idempotencyKey: idempotencyKeySchema,
+});
 
 export const postReadingsSchema = z
   .object({
