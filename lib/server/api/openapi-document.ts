@@ -13,11 +13,6 @@ const json = <T extends z.ZodType>(schema: T, description: string) => ({ descrip
 const listQuery = (extra: Record<string, z.ZodType> = {}) =>
   z.object({ cursor: z.string().optional().describe("From nextCursor of the previous page."), limit: z.string().optional().describe("1 to 200; 50 unless given."), ...extra });
 const labNumber = (example: string) => z.object({ labNumber: z.string().describe(`Lab number, e.g. ${example}.`) });
-const refusals = {
-  401: json(apiErrorSchema, "No token, or an unknown, revoked or expired one."),
-  403: json(apiErrorSchema, "The token's scope does not allow this."),
-  429: json(apiErrorSchema, "Too many requests with this token this minute (Retry-After says when to try again)."),
-};
 
 let cached: ReturnType<OpenApiGeneratorV31["generateDocument"]> | null = null;
 
@@ -39,18 +34,28 @@ export function getOpenApiDocument() {
     Certificate: named("Certificate", apiCertificateSchema),
     PostReadings: named("PostReadings", postReadingsSchema),
     PostReadingsAnswer: named("PostReadingsAnswer", postReadingsAnswerSchema),
+    RollPage: named("RollPage", apiRollPageSchema),
+    SpecimenPage: named("SpecimenPage", apiSpecimenPageSchema),
+    RunPage: named("RunPage", apiRunPageSchema),
+    ResultPage: named("ResultPage", apiResultPageSchema),
+    CertificatePage: named("CertificatePage", apiCertificatePageSchema),
+  };
+  const refusals = {
+    401: json(schemas.Error, "No token, or an unknown, revoked or expired one."),
+    403: json(schemas.Error, "The token's scope does not allow this."),
+    429: json(schemas.Error, "Too many requests with this token this minute (Retry-After says when to try again)."),
   };
   const get = (path: string, summary: string, responses: Record<number, ReturnType<typeof json>>, request: { params?: z.ZodObject; query?: z.ZodObject } = {}) =>
     registry.registerPath({ method: "get", path, summary, security: [{ token: [] }], request, responses: { ...responses, ...refusals } });
 
-  get("/rolls", "Rolls, by lab number", { 200: json(apiRollPageSchema, "A page of rolls.") }, { query: listQuery({ project: z.string().optional().describe("A project code.") }) });
+  get("/rolls", "Rolls, by lab number", { 200: json(schemas.RollPage, "A page of rolls.") }, { query: listQuery({ project: z.string().optional().describe("A project code.") }) });
   get("/rolls/{labNumber}", "One roll", { 200: json(schemas.Roll, "The roll."), 404: json(schemas.Error, "No such roll, or another organisation's.") }, { params: labNumber("R26-00001") });
-  get("/specimens", "Specimens, by lab number", { 200: json(apiSpecimenPageSchema, "A page of specimens.") }, { query: listQuery({ roll: z.string().optional().describe("A roll's lab number.") }) });
+  get("/specimens", "Specimens, by lab number", { 200: json(schemas.SpecimenPage, "A page of specimens.") }, { query: listQuery({ roll: z.string().optional().describe("A roll's lab number.") }) });
   get("/specimens/{labNumber}", "One specimen", { 200: json(schemas.Specimen, "The specimen."), 404: json(schemas.Error, "Not found.") }, { params: labNumber("S26-00001") });
-  get("/runs", "Runs, by lab number", { 200: json(apiRunPageSchema, "A page of runs.") }, { query: listQuery({ state: z.string().optional().describe("PERMEATING, TERMINATED, ...") }) });
+  get("/runs", "Runs, by lab number", { 200: json(schemas.RunPage, "A page of runs.") }, { query: listQuery({ state: z.string().optional().describe("PERMEATING, TERMINATED, ...") }) });
   get("/runs/{labNumber}", "One run, with its criteria and reported values so far", { 200: json(schemas.Run, "The run."), 404: json(schemas.Error, "Not found.") }, { params: labNumber("T26-00004") });
-  get("/results", "Results", { 200: json(apiResultPageSchema, "A page of results.") }, { query: listQuery({ project: z.string().optional(), run: z.string().optional() }) });
-  get("/certificates", "Certificates and their revisions", { 200: json(apiCertificatePageSchema, "A page of certificates.") }, { query: listQuery({ project: z.string().optional() }) });
+  get("/results", "Results", { 200: json(schemas.ResultPage, "A page of results.") }, { query: listQuery({ project: z.string().optional(), run: z.string().optional() }) });
+  get("/certificates", "Certificates and their revisions", { 200: json(schemas.CertificatePage, "A page of certificates.") }, { query: listQuery({ project: z.string().optional() }) });
   get("/certificates/{number}", "One certificate", { 200: json(schemas.Certificate, "The certificate."), 404: json(schemas.Error, "Not found.") }, { params: z.object({ number: z.string().describe("e.g. Q26-00001") }) });
   registry.registerPath({
     method: "get", path: "/certificates/{number}/pdf", summary: "A certificate revision's PDF", security: [{ token: [] }],
