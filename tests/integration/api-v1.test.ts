@@ -201,6 +201,17 @@ describe("API v1: posting readings", () => {
     expect(await db().reading.count({ where: { runId: world.run.id } })).toBe(before);
   });
 
+  it("saves a batch once when the same request arrives twice at the same moment (a logger's retry racing its first try)", async () => {
+    const fresh = await makeRun();
+    const cell = await db().equipment.findUniqueOrThrow({ where: { id: fresh.run.cellId } });
+    const { token } = await createApiToken({ actor: fresh.technician, input: { name: unique("racer"), scope: "READINGS_POST", cells: cell.assetTag } });
+    const body = { pressureUnit: "KPA", readings: [1, 2, 3].map((h) => ({ idempotencyKey: `race-key-000${h}`, ...gridRow(at(fresh.permeationStartedAt, h), String(452 - h), String(18 + h)) })) };
+    const answers = await Promise.all([post(token, fresh.run.labNumber, body), post(token, fresh.run.labNumber, body)]);
+    expect(answers.map((a) => a.status).sort()).toEqual([200, 201]);
+    expect(answers.map((a) => [a.json!.saved, a.json!.replayed]).sort()).toEqual([[0, 3], [3, 0]]);
+    expect(await db().reading.count({ where: { runId: fresh.run.id } })).toBe(3);
+  });
+
   it("writes every request with a token to the audit trail under the token's name and owner", async () => {
     const token = await db().apiToken.findFirstOrThrow({ where: { userId: world.technician.id, scope: "READINGS_POST" } });
     const requests = await db().apiRequest.findMany({ where: { tokenId: token.id } });
