@@ -6,7 +6,7 @@ import { randomBytes } from "node:crypto";
 async function main() {
   if (!process.env.DATABASE_URL) throw new Error("Set DATABASE_URL to the app's database (the running app checks by itself a minute after it starts and daily).");
   // No session is signed here; the configuration check still asks for a secret.
-  process.env.NEXTAUTH_SECRET ??= randomBytes(32).toString("hex");
+  process.env.NEXTAUTH_SECRET ||= randomBytes(32).toString("hex");
   const { notifyCalibrationsDue } = await import("../lib/server/notices/notify-calibrations-due");
   const result = await notifyCalibrationsDue();
   console.log(result.due ? `${result.due} calibration(s) due: ${result.outcome}.` : "No calibration falls due.");
