@@ -25,6 +25,20 @@ const HANDLER_POLICY: Record<string, (who: Who) => boolean> = {
   "/api/health": () => true,
   "/api/certificates/[number]/pdf": (who) => who !== "anonymous" && (can(who, "certificate.view") || can(who, "portal.view")),
   "/api/shipments/[labNumber]/receipt": (who) => who !== "anonymous" && (can(who, "shipment.view") || can(who, "portal.view")),
+  // The API answers API tokens only (lib/policy/api-tokens.ts): a browser session, whoever's, is 401 there.
+  "/api/v1/rolls": () => false,
+  "/api/v1/rolls/[labNumber]": () => false,
+  "/api/v1/specimens": () => false,
+  "/api/v1/specimens/[labNumber]": () => false,
+  "/api/v1/runs": () => false,
+  "/api/v1/runs/[labNumber]": () => false,
+  "/api/v1/runs/[labNumber]/readings": () => false,
+  "/api/v1/results": () => false,
+  "/api/v1/certificates": () => false,
+  "/api/v1/certificates/[number]": () => false,
+  "/api/v1/certificates/[number]/pdf": () => false,
+  // The API's description is public: it says what the API accepts, nothing of the lab's records.
+  "/api/v1/openapi.json": () => true,
 };
 
 type Verdict = "allowed" | "refused" | "fault" | "unclear";

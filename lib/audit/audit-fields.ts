@@ -93,6 +93,12 @@ export function auditFieldSpec(tableName: string, field: string): AuditFieldSpec
   // A custody event's sequence only keeps events of the same moment in the order they were recorded.
   if (field === "sequence" && tableName === "CustodyEvent") return { label, kind: "hidden" };
   if (field === "snapshot") return { label: "Certificate content", kind: "summary" };
+  // API records: the key a logger chose or a notice's own key, the token by its name (the id says nothing), the
+  // cells of a data-logger token as ids (their asset tags are on the token's page), scopes and transports in words.
+  if (field === "key" && (tableName === "ApiReadingKey" || tableName === "NoticeDelivery")) return { label: tableName === "ApiReadingKey" ? "Idempotency key" : "Notice key", kind: "plain" };
+  if (field === "tokenId" && tableName !== "ApiToken") return { label: "Token", kind: "hidden" };
+  if (field === "bodySha256") return { label: "Fingerprint of the reading's values (SHA-256)", kind: "plain" };
+  if (field === "cellIds") return { label: "Cells (equipment ids)", kind: "plain" };
   if (field === "evaluation") return { label: "Evaluation record", kind: "summary" };
   if ((field === "value" || field === "expandedUncertainty") && (tableName === "Result" || tableName === "IndexTest")) return { label, kind: "row-unit" };
   const words = enumWords(tableName, field);

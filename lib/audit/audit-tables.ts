@@ -8,6 +8,9 @@ type AuditTable = { slug: string; label: string; plural: string };
 export const AUDIT_TABLES = {
   User: { slug: "person", label: "Person", plural: "People" },
   ApiToken: { slug: "api-token", label: "API token", plural: "API tokens" },
+  ApiRequest: { slug: "api-request", label: "Request with an API token", plural: "Requests with API tokens" },
+  NoticeDelivery: { slug: "notice", label: "Notice by e-mail", plural: "Notices by e-mail" },
+  ApiReadingKey: { slug: "api-reading-key", label: "Reading key (API)", plural: "Reading keys (API)" },
   Laboratory: { slug: "laboratory", label: "Laboratory details", plural: "Laboratory details" },
   NumberSequence: { slug: "lab-number-counter", label: "Lab number counter", plural: "Lab number counters" },
   ClientOrganization: { slug: "client", label: "Client", plural: "Clients" },

@@ -10,7 +10,9 @@ export const ERROR_CODES = {
   CONFLICT: { status: 409, message: "Someone else changed this record while you were editing it; reload and try again." },
   ILLEGAL_TRANSITION: { status: 409, message: "That step is not allowed from the item's present state." },
   GONE: { status: 410, message: "That document was withdrawn and is no longer offered." },
+  TOO_LARGE: { status: 413, message: "The request is larger than Seepline accepts at once; send less at a time." },
   TOO_MANY_ATTEMPTS: { status: 429, message: "Too many failed attempts; wait a moment and try again." },
+  RATE_LIMITED: { status: 429, message: "Too many requests with this API token; wait a minute and try again." },
   UNAVAILABLE: { status: 503, message: "The service is not available right now." },
 } as const;
 export type ErrorCode = keyof typeof ERROR_CODES;

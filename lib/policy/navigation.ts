@@ -19,6 +19,7 @@ const NAV_ITEMS: NavItem[] = [
   { href: "/methods", label: "Methods", section: "Lab", action: "run.view" },
   { href: "/admin/clients", label: "Clients", section: "Lab", action: "client.manage" },
   { href: "/admin/users", label: "People", section: "Lab", action: "user.manage" },
+  { href: "/admin/api-tokens", label: "API tokens", section: "Lab", action: "user.manage" },
   { href: "/admin/lab", label: "Lab details", section: "Lab", action: "lab.configure" },
   { href: "/admin/audit", label: "Audit trail", section: "Lab", action: "audit.view" },
   { href: "/account", label: "My account", section: "Account", action: "account.self" },

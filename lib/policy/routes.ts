@@ -7,6 +7,7 @@ import type { Action } from "./permissions";
 const ROUTE_ACTIONS: ReadonlyArray<readonly [prefix: string, action: Action]> = [
   ["/", "workspace.view"], // the staff start page only: "/" matches no longer path
   ["/admin/users", "user.manage"],
+  ["/admin/api-tokens", "user.manage"],
   ["/admin/audit", "audit.view"],
   ["/admin/clients", "client.manage"],
   ["/admin/lab", "lab.configure"],
@@ -34,7 +35,7 @@ const ROUTE_ACTIONS: ReadonlyArray<readonly [prefix: string, action: Action]> = 
 ];
 
 /** Addresses anyone may open, signed in or not. */
-const PUBLIC_PREFIXES = ["/sign-in", "/verify", "/api/health", "/api/auth", "/forbidden"];
+const PUBLIC_PREFIXES = ["/sign-in", "/verify", "/api/health", "/api/auth", "/forbidden", "/api-docs"];
 
 export function isPublicPath(pathname: string): boolean {
   return PUBLIC_PREFIXES.some((prefix) => pathname === prefix || pathname.startsWith(`${prefix}/`));

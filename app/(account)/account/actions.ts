@@ -1,5 +1,8 @@
 "use server";
 
+import { revalidatePath } from "next/cache";
+import { createApiToken } from "@/lib/server/api-tokens/create-api-token";
+import { revokeApiToken } from "@/lib/server/api-tokens/revoke-api-token";
 import { toActionResult } from "@/lib/server/actions/action-result";
 import { requestClientAddress } from "@/lib/server/auth/request-client-address";
 import { reissueOwnSession } from "@/lib/server/auth/reissue-session";
@@ -13,4 +16,16 @@ export async function changeOwnPasswordAction(input: unknown) {
     await reissueOwnSession(sessionVersion);
     return null;
   }, "Your password has been changed; you have been signed out everywhere else.");
+}
+
+export async function createApiTokenAction(input: unknown) {
+  return toActionResult(async () => createApiToken({ actor: await requireUser("account.self"), input }), "Token created. Copy it now: it is shown only once.");
+}
+
+export async function revokeOwnApiTokenAction(input: unknown) {
+  return toActionResult(async () => {
+    await revokeApiToken({ actor: await requireUser("account.self"), input });
+    revalidatePath("/account");
+    return null;
+  }, "Token revoked; requests with it are refused from now on.");
 }

@@ -9,6 +9,7 @@ import { checkPasswordThrottled } from "../auth/password-throttle";
 import { getDb } from "../db/client";
 import { withActor } from "../db/transaction";
 import { publicBaseUrl } from "../public-address";
+import { notifyCertificateIssued } from "../notices/notify-certificate-issued";
 import { parseOrThrow } from "../validation/parse";
 import { buildCertificateSnapshot } from "./build-certificate-snapshot";
 import { renderCertificatePdf } from "./render-certificate-pdf";
@@ -39,7 +40,7 @@ export async function issueCertificate(options: { actor: CurrentUser; input: unk
   const pdf = await renderCertificatePdf(snapshot);
   const pdfSha256 = createHash("sha256").update(pdf).digest("hex");
 
-  return withActor(options.actor, async (tx) => {
+  const issued = await withActor(options.actor, async (tx) => {
     const revision = await tx.certificateRevision.findUniqueOrThrow({ where: { id: input.revisionId }, select: { status: true, supersedesId: true } });
     if (revision.status !== "DRAFT") throw new AppError("CONFLICT", `${snapshot.number} revision ${snapshot.revision} was issued by someone else a moment ago; reload the page.`);
     if (revision.supersedesId) {
@@ -52,4 +53,7 @@ export async function issueCertificate(options: { actor: CurrentUser; input: unk
     if (issued.count !== 1) throw new AppError("CONFLICT", `${snapshot.number} revision ${snapshot.revision} was issued by someone else a moment ago; reload the page.`);
     return { number: snapshot.number, revision: snapshot.revision, pdfSha256, verificationCode: snapshot.verificationCode };
   }, { timeoutMs: 30_000 });
+  // After the commit: the client's contacts are told (or the log, without SMTP settings); never fails the issue.
+  await notifyCertificateIssued(input.revisionId);
+  return issued;
 }

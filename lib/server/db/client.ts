@@ -7,8 +7,8 @@ import { UTC_SESSION_OPTIONS } from "./utc-session";
 function createClient(connectionString: string) {
   // Every session in UTC: timestamp columns hold UTC (lib/server/db/utc-session.ts).
   const adapter = new PrismaPg({ connectionString, max: 10, options: UTC_SESSION_OPTIONS });
-  // Password hashes never leave the database unless an operation asks for them by name.
-  return new PrismaClient({ adapter, omit: { user: { passwordHash: true } } });
+  // Password and token hashes never leave the database unless an operation asks for them by name.
+  return new PrismaClient({ adapter, omit: { user: { passwordHash: true }, apiToken: { tokenHash: true } } });
 }
 export type Db = ReturnType<typeof createClient>;
 

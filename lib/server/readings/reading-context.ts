@@ -23,20 +23,24 @@ export const readingLabel = (sequence: number) => `Reading ${sequence}`;
  * Everything a reading write needs, read inside the write's transaction with the run row locked, so two
  * batches for one run cannot interleave their sequence numbers or their order checks. Refuses another
  * technician's run, a run whose state does not allow readings, a run without a permeation start or
- * without calibrated burette areas.
+ * without calibrated burette areas. A data-logger's API token (`instrumentCellIds`) is not a person: it may
+ * record readings of any run in one of the cells it names, and of no other.
  */
-export async function loadReadingContext(tx: Tx, options: { actor: CurrentUser; runId: string }) {
+export async function loadReadingContext(tx: Tx, options: { actor: CurrentUser; runId: string; instrumentCellIds?: readonly string[] }) {
   await tx.$queryRaw`SELECT id FROM "Run" WHERE id = ${options.runId} FOR UPDATE`;
   const run = await tx.run.findUnique({
     where: { id: options.runId },
     select: {
-      id: true, labNumber: true, state: true, performedById: true,
+      id: true, labNumber: true, state: true, performedById: true, cellId: true, cell: { select: { assetTag: true } },
       stages: { where: { kind: "PERMEATION" }, orderBy: { sequence: "asc" }, take: 1, select: { startedAt: true } },
       equipment: { where: { role: BURETTE_PANEL_ROLE }, select: { equipment: { select: { assetTag: true } }, calibration: { select: { values: true, reference: true } } } },
     },
   });
   if (!run) throw new AppError("NOT_FOUND");
-  if (run.performedById !== options.actor.id)
+  if (options.instrumentCellIds) {
+    if (!options.instrumentCellIds.includes(run.cellId))
+      throw new AppError("FORBIDDEN", `${run.labNumber} is in cell ${run.cell.assetTag}, which this data-logger token does not name; it posts readings only to runs in its own cells.`);
+  } else if (run.performedById !== options.actor.id)
     throw new AppError("FORBIDDEN", `${run.labNumber} is another technician's run; only the person performing it records its readings.`);
   const step = runTransition(run.state as RunStateName, "record-reading");
   if (!step.ok) throw new AppError("ILLEGAL_TRANSITION", `${run.labNumber}: ${step.message}`, { details: { allowed: step.allowed } });

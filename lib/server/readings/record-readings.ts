@@ -3,10 +3,11 @@ import { AppError } from "@/lib/errors/app-error";
 import type { SequenceField } from "@/lib/readings/check-reading-sequence";
 import { prepareReadings } from "@/lib/readings/prepare-readings";
 import { readingEntryToDraft } from "@/lib/readings/reading-entry-to-draft";
-import { recordReadingsSchema } from "@/lib/validation/readings";
+import type { PressureUnit } from "@/lib/units/pressure-entry";
+import { recordReadingsSchema, type ReadingEntry } from "@/lib/validation/readings";
 import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
-import { withActor } from "../db/transaction";
+import { withActor, type Tx } from "../db/transaction";
 import { parseOrThrow } from "../validation/parse";
 import { asNeighbour, loadReadingContext, nothingSavedMessage, problemsToFieldErrors, readingRows } from "./reading-context";
 
@@ -21,22 +22,31 @@ const GRID_FIELD: Record<SequenceField, string> = { time: "takenAt", inflowLevel
 export async function recordReadings(options: { actor: CurrentUser; input: unknown; now?: Date }) {
   requirePermission(options.actor, "run.operate");
   const input = parseOrThrow(recordReadingsSchema, options.input);
-  return withActor(options.actor, async (tx) => {
-    const ctx = await loadReadingContext(tx, { actor: options.actor, runId: input.runId });
-    const { rows, problems } = prepareReadings({
-      drafts: input.readings.map((entry, i) => ({ label: `Row ${i + 1}`, draft: readingEntryToDraft(entry, input.pressureUnit) })),
-      permeationStartedAt: ctx.permeationStartedAt,
-      timeZone: ctx.timeZone,
-      now: options.now ?? new Date(),
-      areasMm2: ctx.areasMm2,
-      scaleRangeMm: ctx.scaleRangeMm,
-      reference: ctx.referenceAt(ctx.current.length - 1),
-      previous: asNeighbour(ctx.current[ctx.current.length - 1]),
-      pressureUnit: input.pressureUnit,
-    });
-    if (problems.length)
-      throw new AppError("INVALID_INPUT", nothingSavedMessage(problems.map((p) => p.message)), { fieldErrors: problemsToFieldErrors(problems, (p) => `readings.${p.index}.${GRID_FIELD[p.field]}`) });
-    await tx.reading.createMany({ data: readingRows(rows, { runId: ctx.run.id, firstSequence: ctx.nextSequence, source: "manual", recordedById: options.actor.id }) });
-    return { labNumber: ctx.run.labNumber, saved: rows.length, firstSequence: ctx.nextSequence };
+  return withActor(options.actor, (tx) => saveReadingEntries(tx, { actor: options.actor, runId: input.runId, pressureUnit: input.pressureUnit, entries: input.readings, now: options.now, source: "manual" }));
+}
+
+/**
+ * The checks and the save of recordReadings inside a caller's transaction, for the API's posts (which add
+ * their idempotency keys in the same transaction). `instrumentCellIds`: see loadReadingContext.
+ */
+export async function saveReadingEntries(
+  tx: Tx,
+  options: { actor: CurrentUser; runId: string; pressureUnit: PressureUnit; entries: readonly ReadingEntry[]; now?: Date; source: string; instrumentCellIds?: readonly string[] },
+) {
+  const ctx = await loadReadingContext(tx, { actor: options.actor, runId: options.runId, instrumentCellIds: options.instrumentCellIds });
+  const { rows, problems } = prepareReadings({
+    drafts: options.entries.map((entry, i) => ({ label: `Row ${i + 1}`, draft: readingEntryToDraft(entry, options.pressureUnit) })),
+    permeationStartedAt: ctx.permeationStartedAt,
+    timeZone: ctx.timeZone,
+    now: options.now ?? new Date(),
+    areasMm2: ctx.areasMm2,
+    scaleRangeMm: ctx.scaleRangeMm,
+    reference: ctx.referenceAt(ctx.current.length - 1),
+    previous: asNeighbour(ctx.current[ctx.current.length - 1]),
+    pressureUnit: options.pressureUnit,
   });
+  if (problems.length)
+    throw new AppError("INVALID_INPUT", nothingSavedMessage(problems.map((p) => p.message)), { fieldErrors: problemsToFieldErrors(problems, (p) => `readings.${p.index}.${GRID_FIELD[p.field]}`) });
+  await tx.reading.createMany({ data: readingRows(rows, { runId: ctx.run.id, firstSequence: ctx.nextSequence, source: options.source, recordedById: options.actor.id }) });
+  return { labNumber: ctx.run.labNumber, saved: rows.length, firstSequence: ctx.nextSequence };
 }

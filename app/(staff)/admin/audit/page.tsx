@@ -45,6 +45,7 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
           <div className={styles.head}>
             <h2>{filtered ? "Changes that match" : "All changes"} <span className="count">{page.entries.length === 0 ? "none" : `${page.entries.length} on this page`}</span></h2>
             {page.entries.length > 0 && <a className="button button-quiet" href={`/api/audit/export${auditSearch(filter)}`} download data-testid="audit-csv">Download all that match (CSV)</a>}
+            {page.entries.length > 0 && <a className="button button-quiet" href={`/api/audit/export/xlsx${auditSearch(filter)}`} download data-testid="audit-xlsx">(XLSX)</a>}
           </div>
           {page.entries.length === 0 ? <p className="empty">No change matches this filter.</p> : <div className="table-wrap"><AuditTable entries={page.entries} /></div>}
           <AuditPager filter={filter} pageSize={pageSize} newer={page.newer} older={page.older} paged={Boolean(paging.before || paging.after)} />

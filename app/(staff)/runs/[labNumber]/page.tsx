@@ -84,6 +84,7 @@ export default async function RunPage({ params }: Props) {
           )}
         </div>
         {permeation && <ReadingsPanel runId={run.id} labNumber={run.labNumber} actor={actor} zone={zone} />}
+        {permeation && <p><a className="button button-quiet" href={`/api/runs/${encodeURIComponent(run.labNumber)}/xlsx`} download data-testid="run-xlsx">Download readings and intervals (XLSX)</a></p>}
         {evaluation ? (
           <>
             <CriteriaPanel met={evaluation.termination.met} criteria={evaluation.termination.criteria} trend={verdict.trend} settingsLabel={verdict.settings.label} />

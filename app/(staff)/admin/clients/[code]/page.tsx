@@ -76,7 +76,7 @@ export default async function ClientPage({ params }: Props) {
                         <td className="mono">{p.code}</td>
                         <td>{p.name}<div className="muted">{p.siteName}{p.siteLocation ? `, ${p.siteLocation}` : ""}</div></td>
                         <td>{p.specifications[0] ? <Link href={`/specifications/${p.specifications[0].id}`}>{p.specifications[0].name}</Link> : <Link href="/specifications/new">none yet</Link>}</td>
-                        <td>{p._count.shipments}</td>
+                        <td>{p._count.shipments}<div><a href={`/api/projects/${encodeURIComponent(p.code)}/results-xlsx`} download data-testid="project-results-xlsx">Results (XLSX)</a></div></td>
                         <td><ActiveTag active={p.active} /></td>
                         <td>
                           <details className="row-more">
