@@ -68,7 +68,7 @@ INSERT INTO "Specimen" (id, "labNumber", "couponId", "dieDiameterMm", "initialTh
 ANALYZE;
 `;
 
-type Case = { kind: ListKind; name: string; params: Record<string, string> };
+type Case = { kind: Exclude<ListKind, "runs">; name: string; params: Record<string, string> };
 
 async function main() {
   if (!process.env.DATABASE_URL) throw new Error("set DATABASE_URL to a local PostgreSQL server, e.g. postgresql://postgres@127.0.0.1:5432/postgres");
