@@ -133,7 +133,7 @@ export async function ReadingsPanel({ runId, actor, zone = "UTC", page, basePath
           </div>
           <div>
             <h3>Import a data-logger file</h3>
-            <CsvImport runId={run.id} />
+            <CsvImport labNumber={run.labNumber} />
           </div>
         </>
       ) : (

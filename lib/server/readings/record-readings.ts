@@ -1,14 +1,13 @@
 import "server-only";
 import { AppError } from "@/lib/errors/app-error";
 import type { SequenceField } from "@/lib/readings/check-reading-sequence";
-import { prepareReadings } from "@/lib/readings/prepare-readings";
 import { readingEntryToDraft } from "@/lib/readings/reading-entry-to-draft";
 import { recordReadingsSchema } from "@/lib/validation/readings";
 import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
 import { withActor } from "../db/transaction";
 import { parseOrThrow } from "../validation/parse";
-import { asNeighbour, loadReadingContext, nothingSavedMessage, problemsToFieldErrors, readingRows } from "./reading-context";
+import { loadReadingContext, nothingSavedMessage, prepareOnRun, problemsToFieldErrors, readingRows } from "./reading-context";
 
 /** Which grid cell a cross-row problem belongs to. */
 const GRID_FIELD: Record<SequenceField, string> = { time: "takenAt", inflowLevelMm: "inflowLevelMm", outflowLevelMm: "outflowLevelMm", head: "effluentPressure", temperatureC: "temperatureC" };
@@ -23,17 +22,11 @@ export async function recordReadings(options: { actor: CurrentUser; input: unkno
   const input = parseOrThrow(recordReadingsSchema, options.input);
   return withActor(options.actor, async (tx) => {
     const ctx = await loadReadingContext(tx, { actor: options.actor, runId: input.runId });
-    const { rows, problems } = prepareReadings({
-      drafts: input.readings.map((entry, i) => ({ label: `Row ${i + 1}`, draft: readingEntryToDraft(entry, input.pressureUnit) })),
-      permeationStartedAt: ctx.permeationStartedAt,
-      timeZone: ctx.timeZone,
-      now: options.now ?? new Date(),
-      areasMm2: ctx.areasMm2,
-      scaleRangeMm: ctx.scaleRangeMm,
-      reference: ctx.referenceAt(ctx.current.length - 1),
-      previous: asNeighbour(ctx.current[ctx.current.length - 1]),
-      pressureUnit: input.pressureUnit,
-    });
+    const { rows, problems } = prepareOnRun(
+      ctx,
+      input.readings.map((entry, i) => ({ label: `Row ${i + 1}`, draft: readingEntryToDraft(entry, input.pressureUnit) })),
+      { ...(options.now && { now: options.now }), pressureUnit: input.pressureUnit },
+    );
     if (problems.length)
       throw new AppError("INVALID_INPUT", nothingSavedMessage(problems.map((p) => p.message)), { fieldErrors: problemsToFieldErrors(problems, (p) => `readings.${p.index}.${GRID_FIELD[p.field]}`) });
     await tx.reading.createMany({ data: readingRows(rows, { runId: ctx.run.id, firstSequence: ctx.nextSequence, source: "manual", recordedById: options.actor.id }) });
