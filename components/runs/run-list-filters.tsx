@@ -2,19 +2,20 @@ import Link from "next/link";
 import { RUN_STATE_LABELS } from "@/lib/format/states";
 import { RUN_STATES } from "@/lib/validation/list-query";
 import styles from "@/components/lists/lists.module.css";
+import { SearchableChoice, type Choice } from "@/components/lists/searchable-choice";
 
 type Choices = {
   cells: { id: string; assetTag: string }[];
   technicians: { id: string; name: string }[];
   methods: string[];
-  clients: { id: string; name: string }[];
 };
 
 /**
  * The runs list's filters as a plain GET form: the server reads the address and renders the page, so the
- * choices are sent once, as HTML, and the filters work without script. Sort and page size ride along.
+ * short choices (cells, technicians, methods) are sent once, as HTML; the client is a field that searches on the
+ * server. Sort and page size ride along.
  */
-export function RunListFilters({ values, keep, choices, basePath }: { values: Record<string, string | undefined>; keep: Record<string, string>; choices: Choices; basePath: string }) {
+export function RunListFilters({ values, keep, choices, client, basePath }: { values: Record<string, string | undefined>; keep: Record<string, string>; choices: Choices; client: Choice | null; basePath: string }) {
   const any = Object.values(values).some(Boolean);
   return (
     <form className={styles.filters} role="search" method="get" action={basePath} data-testid="run-filters">
@@ -47,13 +48,7 @@ export function RunListFilters({ values, keep, choices, basePath }: { values: Re
           {choices.methods.map((m) => <option key={m} value={m}>ASTM {m}</option>)}
         </select>
       </div>
-      <div className="field">
-        <label htmlFor="run-filter-client">Client</label>
-        <select id="run-filter-client" name="clientOrganizationId" defaultValue={values.clientOrganizationId ?? ""}>
-          <option value="">All clients</option>
-          {choices.clients.map((c) => <option key={c.id} value={c.id}>{c.name}</option>)}
-        </select>
-      </div>
+      <SearchableChoice id="run-filter-client" name="clientOrganizationId" label="Client" kind="clients" allLabel="All clients" value={client} />
       <div className="field">
         <label htmlFor="run-filter-from">Mounted from</label>
         <input id="run-filter-from" name="from" type="date" defaultValue={values.from ?? ""} />

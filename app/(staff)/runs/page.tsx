@@ -9,7 +9,7 @@ import { formatDate } from "@/lib/format/dates";
 import { can } from "@/lib/policy/permissions";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
-import { listFilterOptions } from "@/lib/server/lists/list-filter-options";
+import { readFilterSelection } from "@/lib/server/lists/list-filter-options";
 import { listRunFilterChoices, listRunPage } from "@/lib/server/lists/list-runs";
 import { listQueryToFilterParts, listQueryToSearch, parseListQuery, type RawSearchParams } from "@/lib/validation/list-query";
 
@@ -23,7 +23,7 @@ export default async function RunsPage({ searchParams }: { searchParams: Promise
   const zone = await getLabTimeZone();
   const { query, ignored } = parseListQuery("runs", await searchParams);
   const operates = can(actor.role, "run.operate");
-  const [list, choices, options] = await Promise.all([listRunPage({ actor, query }), listRunFilterChoices({ actor }), listFilterOptions({ actor })]);
+  const [list, choices, options] = await Promise.all([listRunPage({ actor, query }), listRunFilterChoices({ actor }), readFilterSelection({ actor, clientOrganizationId: query.clientOrganizationId })]);
   const sort = { kind: "runs" as const, query, basePath: BASE };
   const mine = operates && query.technicianId === actor.id;
   return (
@@ -38,7 +38,7 @@ export default async function RunsPage({ searchParams }: { searchParams: Promise
         </div>
         {operates && <div className="links"><Link className="button" href="/runs/new">Start a run</Link></div>}
       </div>
-      <RunListFilters {...listQueryToFilterParts("runs", query)} choices={{ ...choices, clients: options.clients }} basePath={BASE} />
+      <RunListFilters {...listQueryToFilterParts("runs", query)} choices={choices} client={options.client} basePath={BASE} />
       <IgnoredValues ignored={ignored} />
       <ListCard
         title={mine ? "My runs" : "Runs"} total={list.total} testId="run-list" empty="No run matches these filters."
