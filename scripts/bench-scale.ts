@@ -35,7 +35,7 @@ const say = (line: string) => {
   console.log(line);
   lines.push(line);
 };
-const ratio = (a: number, b: number) => `${(a / b).toFixed(2)}x`;
+const ratio = (a: number, b: number) => `${(a / b).toPrecision(2)}x`;
 const ms = (v: number) => `${v.toFixed(0)} ms`;
 const kb = (bytes: number) => `${(bytes / 1024).toFixed(0)} KB`;
 const p95 = (values: number[]) => [...values].sort((a, b) => a - b)[Math.min(values.length - 1, Math.ceil(values.length * 0.95) - 1)]!;
@@ -163,15 +163,15 @@ async function main() {
     const { listCoupons } = await import("../lib/server/lists/list-coupons");
     const { listSpecimens } = await import("../lib/server/lists/list-specimens");
     const { listShipments } = await import("../lib/server/lists/list-shipments");
-    const { listFilterOptions } = await import("../lib/server/lists/list-filter-options");
+    const { readFilterSelection } = await import("../lib/server/lists/list-filter-options");
     const { listRunPage, listRunFilterChoices } = await import("../lib/server/lists/list-runs");
     const lists = [
-      { path: "/samples", work: () => Promise.all([listRolls({ actor, query: parseListQuery("rolls", {}).query }), listFilterOptions({ actor })]) },
-      { path: "/samples/coupons", work: () => Promise.all([listCoupons({ actor, query: parseListQuery("coupons", {}).query }), listFilterOptions({ actor })]) },
-      { path: "/samples/specimens", work: () => Promise.all([listSpecimens({ actor, query: parseListQuery("specimens", {}).query }), listFilterOptions({ actor })]) },
-      { path: "/intake", work: () => Promise.all([listShipments({ actor, query: parseListQuery("shipments", {}).query }), listFilterOptions({ actor })]) },
-      { path: "/runs", work: () => Promise.all([listRunPage({ actor, query: parseListQuery("runs", {}).query }), listRunFilterChoices({ actor }), listFilterOptions({ actor })]) },
-      { path: "/runs?state=APPROVED&sort=state", work: () => Promise.all([listRunPage({ actor, query: parseListQuery("runs", { state: "APPROVED", sort: "state" }).query }), listRunFilterChoices({ actor }), listFilterOptions({ actor })]) },
+      { path: "/samples", work: () => Promise.all([listRolls({ actor, query: parseListQuery("rolls", {}).query }), readFilterSelection({ actor })]) },
+      { path: "/samples/coupons", work: () => Promise.all([listCoupons({ actor, query: parseListQuery("coupons", {}).query }), readFilterSelection({ actor })]) },
+      { path: "/samples/specimens", work: () => Promise.all([listSpecimens({ actor, query: parseListQuery("specimens", {}).query }), readFilterSelection({ actor })]) },
+      { path: "/intake", work: () => Promise.all([listShipments({ actor, query: parseListQuery("shipments", {}).query }), readFilterSelection({ actor })]) },
+      { path: "/runs", work: () => Promise.all([listRunPage({ actor, query: parseListQuery("runs", {}).query }), listRunFilterChoices({ actor }), readFilterSelection({ actor })]) },
+      { path: "/runs?state=APPROVED&sort=state", work: () => Promise.all([listRunPage({ actor, query: parseListQuery("runs", { state: "APPROVED", sort: "state" }).query }), listRunFilterChoices({ actor }), readFilterSelection({ actor })]) },
     ];
     const pool = Array.from({ length: USERS }, () => new pg.Client({ connectionString: database.url, options: UTC_SESSION_OPTIONS }));
     await Promise.all(pool.map((c) => c.connect()));

@@ -7,6 +7,7 @@ import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
 import { getDb } from "../db/client";
 import { currentVolumesMl } from "@/lib/evaluation/current-volumes";
+import { loadCurrentReadingsOnce } from "./load-current-readings";
 import { BURETTE_PANEL_ROLE, buretteAreasMm2 } from "./reading-context";
 
 const READING_SELECT = {
@@ -22,10 +23,6 @@ type ReadingRow = Prisma.ReadingGetPayload<{ select: typeof READING_SELECT }>;
 /** Readings shown a page at a time: a run logged every few minutes for weeks holds tens of thousands. */
 export const READINGS_PAGE_SIZE = 100;
 
-type CurrentRow = {
-  id: string; sequence: number; elapsedS: number; inflowLevelMm: number | null; outflowLevelMm: number | null;
-  inflowCumulativeMl: number; outflowCumulativeMl: number; afterRefill: boolean; corrected: boolean;
-};
 
 /**
  * A run's readings for the readings panel, one page of the current set (readings no other reading corrects,
@@ -47,11 +44,7 @@ export async function listRunReadings(options: { actor: CurrentUser; runId: stri
     },
   });
   if (!run) throw new AppError("NOT_FOUND");
-  const currentAll = await db.$queryRaw<CurrentRow[]>`
-    SELECT r.id, r.sequence, r."elapsedS", r."inflowLevelMm", r."outflowLevelMm", r."inflowCumulativeMl", r."outflowCumulativeMl", r."afterRefill", r."correctsId" IS NOT NULL AS corrected
-    FROM "Reading" r
-    WHERE r."runId" = ${run.id} AND NOT EXISTS (SELECT 1 FROM "Reading" c WHERE c."correctsId" = r.id)
-    ORDER BY r."elapsedS", r.sequence`;
+  const currentAll = await loadCurrentReadingsOnce(run.id);
 
   const pageSize = options.pageSize ?? READINGS_PAGE_SIZE;
   const pageCount = Math.max(1, Math.ceil(currentAll.length / pageSize));
