@@ -179,7 +179,7 @@ export function listQueryToFilterParts(kind: ListKind, query: ListQuery): { valu
 
 /** A searchable client or project field's question to the server (GET /api/filter-choices). */
 export const filterChoiceQuerySchema = z.object({
-  kind: z.enum(["clients", "projects"], { message: "Ask for clients or projects." }),
+  kind: z.enum(["clients", "projects"], { message: "Ask for clients or projects." }).default("projects"),
   q: z.string().trim().max(50, "Search for at most 50 characters.").default(""),
   clientOrganizationId: recordId.optional(),
 });
