@@ -5,6 +5,7 @@ type RequestLike = { method?: string; url?: string; headers: Record<string, stri
 
 export declare const CLIENT_ADDRESS_HEADER: string;
 export declare const BODY_LIMIT_BYTES: number;
+export declare const READINGS_UPLOAD_LIMIT_BYTES: number;
 export declare function clientAddress(request: RequestLike, trustedProxies?: number): string;
 export declare function targetProblem(rawTarget: string | undefined): string | null;
 export declare function bodyProblem(request: RequestLike, limit?: number): { status: number; message: string } | null;

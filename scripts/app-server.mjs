@@ -3,7 +3,8 @@
 // a request, so that no request reaches the app in a shape it would answer with a server error:
 // - the client's network address, for the password throttle, in a header the client cannot forge;
 // - a malformed address (broken %-escapes, NUL or control characters, broken UTF-8) is answered 400;
-// - a body over 1 MB is answered 413, and a body of unknown length 411, before anything reads it;
+// - a body over 1 MB (a data-logger file upload: 32 MB) is answered 413, and a body of unknown length 411,
+//   before anything reads it;
 // - the baseline security headers go on every response, static files included (lib/security).
 // Plain JavaScript, so that Node runs it as it is. Usage: node scripts/app-server.mjs (PORT, NEXTAUTH_URL,
 // SEEPLINE_TRUSTED_PROXIES from the environment).
@@ -15,6 +16,9 @@ import { baselineSecurityHeaders } from "../lib/security/baseline-headers.mjs";
 export const CLIENT_ADDRESS_HEADER = "x-seepline-client-address";
 /** The most a request body may hold: Next.js's own limit for server actions. */
 export const BODY_LIMIT_BYTES = 1024 * 1024;
+/** The data-logger upload route takes the file itself as its body (MAX_READINGS_FILE_BYTES in lib/validation/readings.ts). */
+export const READINGS_UPLOAD_LIMIT_BYTES = 32 * 1024 * 1024;
+const READINGS_UPLOAD = /^\/api\/runs\/[^/?#]+\/readings\/import(?:[?#]|$)/;
 
 /** The client's address: the socket's peer, or what the nearest `trustedProxies` reverse proxies reported. */
 export function clientAddress(request, trustedProxies = 0) {
@@ -65,6 +69,11 @@ export function bodyProblem(request, limit = BODY_LIMIT_BYTES) {
   if (length !== undefined) {
     const bytes = Number(length);
     if (!Number.isFinite(bytes) || bytes < 0) return { status: 400, message: "The request states an impossible length." };
+    if (READINGS_UPLOAD.test(String(request.url ?? "")) && method === "POST") {
+      if (bytes > READINGS_UPLOAD_LIMIT_BYTES)
+        return { status: 413, message: `The data-logger file is larger than ${READINGS_UPLOAD_LIMIT_BYTES / 1024 / 1024} MB, the most one import takes; split it by date and import each part in order. Nothing was saved.` };
+      return null;
+    }
     if (bytes > limit)
       return { status: 413, message: `The request is larger than ${Math.round(limit / 1024 / 1024)} MB, the most Seepline accepts at once; send less at a time (a long data-logger file can be imported in parts).` };
     return null;

@@ -8,6 +8,7 @@ import { isPortFree } from "./support/free-port";
 import { generateClientIfNeeded } from "./support/generate-client";
 import { buildIfNeeded, startNext, waitForHealthy } from "./support/next-app";
 import { EMBEDDED_DB_DIR } from "./support/paths";
+import { migrationsUpToDate } from "./support/migration-status";
 import { applyMigrations } from "./support/prisma-cli";
 import { DEMO_CLIENTS, DEMO_PASSWORD, DEMO_STAFF } from "../prisma/seed/demo-people";
 
@@ -33,12 +34,16 @@ async function main() {
     databaseUrl = embedded.url;
   }
 
-  log("applying migrations...");
-  if (embedded) await migrateEmbeddedDb(embedded);
+  const migrationUrl = embedded ? embedded.url : process.env.MIGRATION_DATABASE_URL || databaseUrl;
+  const checkStarted = performance.now();
+  // The migration tool takes seconds to start; one query says whether it has anything to do.
+  if (await migrationsUpToDate(migrationUrl)) log(`no migration pending (checked in ${Math.round(performance.now() - checkStarted)} ms).`);
   else {
-    await applyMigrations(process.env.MIGRATION_DATABASE_URL || databaseUrl);
-    await refuseOwnerRole(databaseUrl);
+    log("applying migrations...");
+    if (embedded) await migrateEmbeddedDb(embedded);
+    else await applyMigrations(migrationUrl);
   }
+  if (!embedded) await refuseOwnerRole(databaseUrl);
 
   const wantDemo = !external || process.env.SEEPLINE_SEED_DEMO === "1";
   if (wantDemo) {

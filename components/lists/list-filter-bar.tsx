@@ -5,6 +5,7 @@ import { useState, useTransition } from "react";
 import { ITEM_STATE_LABELS } from "@/lib/format/states";
 import { ITEM_STATES } from "@/lib/validation/list-query";
 import styles from "./lists.module.css";
+import { SearchableChoice, type Choice } from "./searchable-choice";
 
 export type FilterValues = { clientOrganizationId?: string; projectId?: string; state?: string; acknowledged?: string; from?: string; to?: string; q?: string };
 
@@ -12,8 +13,9 @@ type Props = {
   /** The filters as the address has them now (strings as typed), plus the list's sort and page size. */
   values: FilterValues;
   keep: Record<string, string>;
-  clients: { id: string; name: string }[];
-  projects: { id: string; name: string; code: string; clientOrganizationId: string }[];
+  /** The client and project the list is filtered by now (searchable fields: no page carries every project). */
+  client: Choice | null;
+  project: Choice | null;
   show: "state" | "acknowledged";
   dateLabel: string;
   searchHint: string;
@@ -23,7 +25,7 @@ type Props = {
  * Client, project, state and date filters and the search box of a list. Each change replaces the address
  * (back to page 1), so the server renders the filtered page and the address can be shared or bookmarked.
  */
-export function ListFilterBar({ values, keep, clients, projects, show, dateLabel, searchHint }: Props) {
+export function ListFilterBar({ values, keep, client, project, show, dateLabel, searchHint }: Props) {
   const router = useRouter();
   const pathname = usePathname();
   const [pending, startTransition] = useTransition();
@@ -36,7 +38,6 @@ export function ListFilterBar({ values, keep, clients, projects, show, dateLabel
     const search = params.toString();
     startTransition(() => router.replace(search ? `${pathname}?${search}` : pathname));
   };
-  const shownProjects = values.clientOrganizationId ? projects.filter((p) => p.clientOrganizationId === values.clientOrganizationId) : projects;
   const any = Object.values(values).some(Boolean);
 
   return (
@@ -49,20 +50,13 @@ export function ListFilterBar({ values, keep, clients, projects, show, dateLabel
         go({ q: q.trim() });
       }}
     >
-      <div className="field">
-        <label htmlFor="filter-client">Client</label>
-        <select id="filter-client" value={values.clientOrganizationId ?? ""} onChange={(e) => go({ clientOrganizationId: e.target.value, projectId: "" })}>
-          <option value="">All clients</option>
-          {clients.map((c) => <option key={c.id} value={c.id}>{c.name}</option>)}
-        </select>
-      </div>
-      <div className="field">
-        <label htmlFor="filter-project">Project</label>
-        <select id="filter-project" value={values.projectId ?? ""} onChange={(e) => go({ projectId: e.target.value })}>
-          <option value="">All projects</option>
-          {shownProjects.map((p) => <option key={p.id} value={p.id}>{p.code} · {p.name}</option>)}
-        </select>
-      </div>
+      <SearchableChoice key={`client-${client?.id ?? ""}`} id="filter-client" label="Client" kind="clients" allLabel="All clients" value={client} onChange={(c) => go({ clientOrganizationId: c?.id ?? "", projectId: "" })} />
+      <SearchableChoice
+        key={`project-${values.clientOrganizationId ?? ""}-${project?.id ?? ""}`}
+        id="filter-project" label="Project" kind="projects" allLabel="All projects" value={project}
+        {...(values.clientOrganizationId && { clientOrganizationId: values.clientOrganizationId })}
+        onChange={(p) => go({ projectId: p?.id ?? "" })}
+      />
       {show === "state" ? (
         <div className="field">
           <label htmlFor="filter-state">State</label>

@@ -4,12 +4,16 @@ import { listRunReadings, type RunReadingView } from "@/lib/server/readings/list
 import { PRESSURE_UNIT_SYMBOLS, type PressureUnit } from "@/lib/units/pressure-entry";
 import { CorrectReadingForm } from "./correct-reading-form";
 import { CsvImport } from "./csv-import";
+import { ReadingsPager } from "./readings-pager";
 import { elapsedHours, fixed, pressureCell, pressureInput } from "./reading-format";
 import { ReadingsGrid } from "./readings-grid";
 import styles from "./readings.module.css";
 
-/** Props of the readings panel of the run page. `labNumber` is accepted for the page's convenience; the run is found by id. */
-export type ReadingsPanelProps = { runId: string; labNumber?: string; actor: CurrentUser; zone?: string };
+/**
+ * Props of the readings panel of the run page. `labNumber` is accepted for the page's convenience; the run is
+ * found by id. `page` is the page of readings to show (the last when absent), `basePath` the page's address.
+ */
+export type ReadingsPanelProps = { runId: string; labNumber?: string; actor: CurrentUser; zone?: string; page?: number; basePath?: string };
 
 const entryValues = (r: RunReadingView, unit: PressureUnit) => ({
   takenAt: new Date(r.takenAt).toISOString(),
@@ -43,18 +47,18 @@ function versionText(v: RunReadingView, unit: PressureUnit, chemistry: boolean, 
  * temperature (EC and pH for D6766), each corrected reading with its earlier versions beside it; for the
  * technician performing a permeating run, the entry grid, the data-logger import and "Correct…".
  */
-export async function ReadingsPanel({ runId, actor, zone = "UTC" }: ReadingsPanelProps) {
-  const { run, current, history, canRecord, whyNot } = await listRunReadings({ actor, runId });
+export async function ReadingsPanel({ runId, actor, zone = "UTC", page, basePath = "" }: ReadingsPanelProps) {
+  const { run, current, last, window, history, canRecord, whyNot } = await listRunReadings({ actor, runId, ...(page !== undefined && { page }) });
   const unit = actor.pressureUnit;
   const p = PRESSURE_UNIT_SYMBOLS[unit];
   const chemistry = run.methodCode === "D6766";
   const versions = new Map(history.map((h) => [h.sequence, h.versions]));
-  const last = current[current.length - 1];
   const columns = 13 + (chemistry ? 4 : 0);
 
   return (
-    <section className={`card ${styles.panel}`} aria-label="Readings">
-      <h2>Readings <span className="count">{current.length} current{run.burettePanel ? ` · burette panel ${run.burettePanel.assetTag}` : ""}{run.areasMm2 ? ` · areas ${fixed(run.areasMm2.inflow, 1)} / ${fixed(run.areasMm2.outflow, 1)} mm²` : ""}</span></h2>
+    <section className={`card ${styles.panel}`} aria-label="Readings" id="readings">
+      <h2>Readings <span className="count">{window.total.toLocaleString("en-GB")} current{run.burettePanel ? ` · burette panel ${run.burettePanel.assetTag}` : ""}{run.areasMm2 ? ` · areas ${fixed(run.areasMm2.inflow, 1)} / ${fixed(run.areasMm2.outflow, 1)} mm²` : ""}</span></h2>
+      {window.pageCount > 1 && <ReadingsPager window={window} basePath={basePath} />}
       {current.length === 0 ? (
         <p className="empty">No readings yet.</p>
       ) : (
@@ -129,7 +133,7 @@ export async function ReadingsPanel({ runId, actor, zone = "UTC" }: ReadingsPane
           </div>
           <div>
             <h3>Import a data-logger file</h3>
-            <CsvImport runId={run.id} />
+            <CsvImport labNumber={run.labNumber} />
           </div>
         </>
       ) : (

@@ -8,6 +8,7 @@ import { enteredPressureToPa, type PressureUnit } from "@/lib/units/pressure-ent
 import type { ReadingDraft } from "./reading-draft";
 import { fromWallTime } from "../format/time-zone";
 import { readCalendarDate } from "../validation/record-dates";
+import { CsvRecordReader } from "./csv-record-reader";
 
 export const READING_CSV_TARGETS = [
   "takenAt", "elapsed", "inflowLevelMm", "outflowLevelMm", "influentPressure", "effluentPressure", "cellPressure",
@@ -50,67 +51,12 @@ export type MappedCsvRow = { row: number; values: ReadingDraft | null; errors: R
 
 const REQUIRED: readonly ReadingCsvTarget[] = ["inflowLevelMm", "outflowLevelMm", "influentPressure", "effluentPressure", "temperatureC"];
 
-/** Splits the text into a header and data rows. Throws nothing; an empty file gives an empty header. */
+/** Splits the text into a header and data rows (CsvRecordReader, all at once). Throws nothing; an empty file gives an empty header. */
 export function parseReadingsCsv(text: string): ParsedReadingsCsv {
-  const clean = text.replace(/^\uFEFF/, "").replace(/\r\n?/g, "\n");
-  const firstLine = clean.split("\n").find((l) => l.trim() !== "") ?? "";
-  const separator = detectSeparator(firstLine);
-  const records = splitRecords(clean, separator);
-  const nonBlank = records.filter((r) => !(r.cells.length === 1 && r.cells[0]!.trim() === ""));
-  const [head, ...rest] = nonBlank;
-  return { separator, header: head ? head.cells.map((c) => c.trim()) : [], rows: rest.map((r) => ({ row: r.line, cells: r.cells.map((c) => c.trim()) })) };
-}
-
-function detectSeparator(line: string): ParsedReadingsCsv["separator"] {
-  const unquoted = line.replace(/"[^"]*"/g, "");
-  const count = (ch: string) => unquoted.split(ch).length - 1;
-  const tabs = count("\t");
-  const semis = count(";");
-  const commas = count(",");
-  if (tabs > 0 && tabs >= semis && tabs >= commas) return "\t";
-  if (semis > 0 && semis >= commas) return ";";
-  return ",";
-}
-
-/** Character-level split so quoted cells may hold the separator, doubled quotes and line breaks. */
-function splitRecords(text: string, separator: string): Array<{ line: number; cells: string[] }> {
-  const records: Array<{ line: number; cells: string[] }> = [];
-  let cells: string[] = [];
-  let cell = "";
-  let quoted = false;
-  let line = 1;
-  let startLine = 1;
-  for (let i = 0; i < text.length; i++) {
-    const ch = text[i]!;
-    if (quoted) {
-      if (ch === '"' && text[i + 1] === '"') {
-        cell += '"';
-        i++;
-      } else if (ch === '"') quoted = false;
-      else {
-        if (ch === "\n") line++;
-        cell += ch;
-      }
-    } else if (ch === '"' && cell.trim() === "") {
-      quoted = true;
-      cell = "";
-    } else if (ch === separator) {
-      cells.push(cell);
-      cell = "";
-    } else if (ch === "\n") {
-      cells.push(cell);
-      records.push({ line: startLine, cells });
-      cells = [];
-      cell = "";
-      line++;
-      startLine = line;
-    } else cell += ch;
-  }
-  if (cell !== "" || cells.length > 0) {
-    cells.push(cell);
-    records.push({ line: startLine, cells });
-  }
-  return records;
+  const reader = new CsvRecordReader();
+  const records = [...reader.push(text), ...reader.end()];
+  const [head, ...rest] = records;
+  return { separator: reader.separator ?? ",", header: head ? head.cells.map((c) => c.trim()) : [], rows: rest.map((r) => ({ row: r.line, cells: r.cells.map((c) => c.trim()) })) };
 }
 
 const words = (header: string) => header.toLowerCase().replace(/°/g, " ").split(/[^a-z0-9µ]+/).filter(Boolean);

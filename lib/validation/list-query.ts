@@ -1,11 +1,11 @@
 import { z } from "zod";
 
 /**
- * Query strings of the four lists (shipments, rolls, coupons, specimens), read from the page address.
+ * Query strings of the lists (shipments, rolls, coupons, specimens, runs), read from the page address.
  * A list is never refused for a bad address: each value that does not read falls back to its default and
  * is named in `ignored`, so the page can say what it left out.
  */
-export const LIST_KINDS = ["shipments", "rolls", "coupons", "specimens"] as const;
+export const LIST_KINDS = ["shipments", "rolls", "coupons", "specimens", "runs"] as const;
 export type ListKind = (typeof LIST_KINDS)[number];
 
 export const PAGE_SIZES = [25, 50, 100] as const;
@@ -15,6 +15,8 @@ const MAX_PAGE = 100_000;
 
 export const ITEM_STATES = ["RECEIVED", "STORED", "CUT", "PREPARED", "ASSIGNED", "UNDER_TEST", "TESTED", "RETAINED", "DISPOSED"] as const;
 export type ItemStateName = (typeof ITEM_STATES)[number];
+export const RUN_STATES = ["SET_UP", "SATURATING", "EQUILIBRATING", "PERMEATING", "TERMINATED", "POST_TEST_RECORDED", "SUBMITTED", "RETURNED", "APPROVED", "ABANDONED"] as const;
+export type RunStateFilter = (typeof RUN_STATES)[number];
 
 /** The columns each list can be sorted by; the first is the default, newest first. */
 export const LIST_SORTS = {
@@ -22,12 +24,13 @@ export const LIST_SORTS = {
   rolls: ["received", "labNumber", "rollNumber", "state"],
   coupons: ["cut", "labNumber", "state"],
   specimens: ["prepared", "labNumber", "state"],
+  runs: ["mounted", "labNumber", "state"],
 } as const satisfies Record<ListKind, readonly [string, ...string[]]>;
 export type ListSort<K extends ListKind> = (typeof LIST_SORTS)[K][number];
 export type SortDirection = "asc" | "desc";
 
 /** Which date the from/to filter and the date column of each list mean. */
-export const LIST_DATE_LABELS: Record<ListKind, string> = { shipments: "Received", rolls: "Received", coupons: "Cut", specimens: "Prepared" };
+export const LIST_DATE_LABELS: Record<ListKind, string> = { shipments: "Received", rolls: "Received", coupons: "Cut", specimens: "Prepared", runs: "Mounted" };
 
 export type ListQuery<K extends ListKind = ListKind> = {
   page: number;
@@ -36,7 +39,12 @@ export type ListQuery<K extends ListKind = ListKind> = {
   dir: SortDirection;
   clientOrganizationId?: string;
   projectId?: string;
-  state?: ItemStateName;
+  /** An item state; on the runs list, a run state. */
+  state?: K extends "runs" ? RunStateFilter : ItemStateName;
+  /** Runs only: the cell, the technician performing it, the method. */
+  cellId?: string;
+  technicianId?: string;
+  methodCode?: string;
   /** Shipments only: true for acknowledged receipts, false for those still to acknowledge. */
   acknowledged?: boolean;
   /** Start of the first day, UTC, inclusive. */
@@ -72,6 +80,8 @@ const fieldSchemas = {
   clientOrganizationId: recordId,
   projectId: recordId,
   state: z.enum(ITEM_STATES, { message: "That is not an item state." }),
+  runState: z.enum(RUN_STATES, { message: "That is not a run state." }),
+  methodCode: z.string().trim().max(16, "That is not a method.").regex(/^[A-Z0-9]+$/, "That is not a method."),
   acknowledged: z.enum(["yes", "no"], { message: "Acknowledged is yes or no." }).transform((v) => v === "yes"),
   from: calendarDay,
   to: calendarDay,
@@ -114,7 +124,12 @@ export function parseListQuery<K extends ListKind>(kind: K, raw: RawSearchParams
     q: read("q", fieldSchemas.q) || undefined,
   };
   if (kind === "shipments") query.acknowledged = read("acknowledged", fieldSchemas.acknowledged);
-  else query.state = read("state", fieldSchemas.state);
+  else if (kind === "runs") {
+    (query as ListQuery<"runs">).state = read("state", fieldSchemas.runState);
+    query.cellId = read("cellId", fieldSchemas.clientOrganizationId);
+    query.technicianId = read("technicianId", fieldSchemas.clientOrganizationId);
+    query.methodCode = read("methodCode", fieldSchemas.methodCode);
+  } else (query as ListQuery<"rolls">).state = read("state", fieldSchemas.state);
 
   let from = read("from", fieldSchemas.from);
   let to = read("to", fieldSchemas.to);
@@ -133,6 +148,9 @@ export function listQueryToSearch(kind: ListKind, query: Partial<ListQuery>): st
   if (query.clientOrganizationId) params.set("clientOrganizationId", query.clientOrganizationId);
   if (query.projectId) params.set("projectId", query.projectId);
   if (query.state) params.set("state", query.state);
+  if (query.cellId) params.set("cellId", query.cellId);
+  if (query.technicianId) params.set("technicianId", query.technicianId);
+  if (query.methodCode) params.set("methodCode", query.methodCode);
   if (query.acknowledged !== undefined) params.set("acknowledged", query.acknowledged ? "yes" : "no");
   if (query.from) params.set("from", query.from.toISOString().slice(0, 10));
   if (query.to) params.set("to", new Date(query.to.getTime() - DAY_MS).toISOString().slice(0, 10));
@@ -145,7 +163,7 @@ export function listQueryToSearch(kind: ListKind, query: Partial<ListQuery>): st
   return text ? `?${text}` : "";
 }
 
-const FILTER_KEYS = ["clientOrganizationId", "projectId", "state", "acknowledged", "from", "to", "q"] as const;
+const FILTER_KEYS = ["clientOrganizationId", "projectId", "state", "cellId", "technicianId", "methodCode", "acknowledged", "from", "to", "q"] as const;
 
 /** For the filter bar: the filters as address strings, and the other settings a filter change keeps (sort, page size). */
 export function listQueryToFilterParts(kind: ListKind, query: ListQuery): { values: Partial<Record<(typeof FILTER_KEYS)[number], string>>; keep: Record<string, string> } {
@@ -158,3 +176,10 @@ export function listQueryToFilterParts(kind: ListKind, query: ListQuery): { valu
   }
   return { values, keep };
 }
+
+/** A searchable client or project field's question to the server (GET /api/filter-choices). */
+export const filterChoiceQuerySchema = z.object({
+  kind: z.enum(["clients", "projects"], { message: "Ask for clients or projects." }).default("projects"),
+  q: z.string().trim().max(50, "Search for at most 50 characters.").default(""),
+  clientOrganizationId: recordId.optional(),
+});

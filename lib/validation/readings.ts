@@ -49,22 +49,24 @@ export const readingsCsvMappingSchema = z.object({
   pressureUnit: pressureUnitSchema,
 });
 
-/** 400 000 characters is about 5 000 logger rows, and stays under the 1 MB server-action limit. */
-export const MAX_READINGS_CSV_CHARS = 400_000;
+/** The largest data-logger file one import takes (32 MiB, about 300,000 logger rows); the form says so. */
+export const MAX_READINGS_FILE_BYTES = 32 * 1024 * 1024;
+/** The most readings one import saves; a longer file is imported in parts. */
+export const MAX_READINGS_FILE_ROWS = 300_000;
+export const READINGS_FILE_LIMIT_TEXT = `Files up to 32 MB and ${MAX_READINGS_FILE_ROWS.toLocaleString("en-GB")} rows; split a longer logger file by date and import each part in order.`;
 
-/** A data-logger file: "preview" judges every row and saves nothing; "save" saves all rows or none. */
-export const importReadingsCsvSchema = z.object({
-  runId: z.string().min(1),
+/** An uploaded data-logger file's settings (the file itself is the request body): all rows saved or none. */
+export const importReadingsFileSchema = z.object({
+  labNumber: z.string().trim().min(1).max(40),
   fileName: z
     .string({ message: "Name the file." })
     .trim()
     .transform((name) => name.split(/[\\/]/).pop() ?? name)
     .pipe(z.string().min(1, "Name the file.").max(200, "The file name is longer than 200 characters.")),
-  text: z.string().min(1, "Choose a file or paste the readings.").max(MAX_READINGS_CSV_CHARS, `The file is larger than ${MAX_READINGS_CSV_CHARS.toLocaleString("en")} characters; split it into parts.`),
   mapping: readingsCsvMappingSchema.optional(),
-  mode: z.enum(["preview", "save"]),
+  mode: z.enum(["preview", "save"], { message: "Say whether to preview or save." }),
 });
-export type ImportReadingsCsvInput = z.input<typeof importReadingsCsvSchema>;
+export type ImportReadingsFileInput = z.input<typeof importReadingsFileSchema>;
 
 /** A correction: a new reading that replaces `readingId`, with the reason; the original stays. */
 export const correctReadingSchema = z.object({

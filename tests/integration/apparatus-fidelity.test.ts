@@ -5,7 +5,7 @@ import { createCertificateDraft } from "@/lib/server/certificates/create-certifi
 import { withActor } from "@/lib/server/db/transaction";
 import { recordCalibration } from "@/lib/server/equipment/record-calibration";
 import { createMethodSettingsVersion } from "@/lib/server/methods/create-method-settings-version";
-import { importReadingsCsv } from "@/lib/server/readings/import-readings-csv";
+import { importReadingsFile } from "@/lib/server/readings/import-readings-file";
 import { recordReadings } from "@/lib/server/readings/record-readings";
 import { approveRun } from "@/lib/server/review/approve-run";
 import { chooseRunSettings } from "@/lib/server/review/choose-run-settings";
@@ -30,7 +30,8 @@ const CSV = ["Elapsed (h),Inflow burette (mm),Outflow burette (mm),Influent kPa,
 
 async function recordTheReadings(technician: Awaited<ReturnType<typeof makeUser>>, runId: string, start: Date) {
   await recordReadings({ actor: technician, input: { runId, pressureUnit: "KPA", readings: GRID.map(([h, i, o, refill]) => gridRow(at(start, h), i, o, refill ? { afterRefill: true } : {})) } });
-  await importReadingsCsv({ actor: technician, input: { runId, fileName: "logger-after-refill.csv", text: CSV, mode: "save" } });
+  const labNumber = (await db().run.findUniqueOrThrow({ where: { id: runId } })).labNumber;
+  await importReadingsFile({ actor: technician, input: { labNumber, fileName: "logger-after-refill.csv", mode: "save" }, body: [new TextEncoder().encode(CSV)] });
 }
 
 /** The same run done by hand: levels above the datum (outflow zero 40 mm up), volumes across the refill, 14 kPa, 20 °C except where logged. */

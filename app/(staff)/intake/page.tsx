@@ -6,7 +6,7 @@ import { Pager } from "@/components/lists/pager";
 import { SortHeader } from "@/components/lists/sort-header";
 import { formatDateTime } from "@/lib/format/dates";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
-import { listFilterOptions } from "@/lib/server/lists/list-filter-options";
+import { readFilterSelection } from "@/lib/server/lists/list-filter-options";
 import { listShipments } from "@/lib/server/lists/list-shipments";
 import { can } from "@/lib/policy/permissions";
 import { listQueryToFilterParts, parseListQuery, type RawSearchParams } from "@/lib/validation/list-query";
@@ -20,13 +20,13 @@ export default async function IntakePage({ searchParams }: { searchParams: Promi
   const actor = await requirePageUser("shipment.view");
   const zone = await getLabTimeZone();
   const { query, ignored } = parseListQuery("shipments", await searchParams);
-  const [list, options] = await Promise.all([listShipments({ actor, query }), listFilterOptions({ actor })]);
+  const [list, options] = await Promise.all([listShipments({ actor, query }), readFilterSelection({ actor, clientOrganizationId: query.clientOrganizationId, projectId: query.projectId })]);
   const sort = { kind: "shipments" as const, query, basePath: BASE };
   return (
     <>
       <h1>Intake</h1>
       <p className="muted">Shipments as they arrived at the door, newest first.</p>
-      <ListFilterBar {...listQueryToFilterParts("shipments", query)} clients={options.clients} projects={options.projects} show="acknowledged" dateLabel="Received" searchHint="S26-00012 or a roll number" />
+      <ListFilterBar {...listQueryToFilterParts("shipments", query)} client={options.client} project={options.project} show="acknowledged" dateLabel="Received" searchHint="S26-00012 or a roll number" />
       <IgnoredValues ignored={ignored} />
       <ListCard
         title="Shipments" total={list.total} testId="shipment-list"

@@ -1,30 +1,67 @@
 import Link from "next/link";
-import { RunTable } from "@/components/runs/run-table";
-import { QueueCard } from "@/components/ui/queue-card";
+import { IgnoredValues } from "@/components/lists/ignored-values";
+import { ListCard } from "@/components/lists/list-card";
+import { Pager } from "@/components/lists/pager";
+import { SortHeader } from "@/components/lists/sort-header";
+import { RunListFilters } from "@/components/runs/run-list-filters";
+import { StateTag } from "@/components/ui/state-tag";
+import { formatDate } from "@/lib/format/dates";
 import { can } from "@/lib/policy/permissions";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
-import { listRuns } from "@/lib/server/runs/list-runs";
 import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
+import { readFilterSelection } from "@/lib/server/lists/list-filter-options";
+import { listRunFilterChoices, listRunPage } from "@/lib/server/lists/list-runs";
+import { listQueryToFilterParts, listQueryToSearch, parseListQuery, type RawSearchParams } from "@/lib/validation/list-query";
 
 export const metadata = { title: "Runs" };
 
-// A technician sees their own runs first; QA and everyone else see all of them.
-export default async function RunsPage({ searchParams }: { searchParams: Promise<{ all?: string }> }) {
+const BASE = "/runs";
+
+/** Every run, paged, filtered and sorted on the server; a technician has a link to their own. */
+export default async function RunsPage({ searchParams }: { searchParams: Promise<RawSearchParams> }) {
   const actor = await requirePageUser("run.view");
   const zone = await getLabTimeZone();
+  const { query, ignored } = parseListQuery("runs", await searchParams);
   const operates = can(actor.role, "run.operate");
-  const mine = operates && (await searchParams).all !== "1";
-  const runs = await listRuns({ actor, mine });
+  const [list, choices, options] = await Promise.all([listRunPage({ actor, query }), listRunFilterChoices({ actor }), readFilterSelection({ actor, clientOrganizationId: query.clientOrganizationId })]);
+  const sort = { kind: "runs" as const, query, basePath: BASE };
+  const mine = operates && query.technicianId === actor.id;
   return (
     <>
       <div className="page-head">
         <div>
           <h1>{mine ? "My runs" : "Runs"}</h1>
-          <p className="muted">Hydraulic tests, newest first. {operates && (mine ? <Link href="/runs?all=1">Show everyone&apos;s runs</Link> : <Link href="/runs">Show only mine</Link>)}</p>
+          <p className="muted">
+            Hydraulic tests, newest first.{" "}
+            {operates && (mine ? <Link href={BASE}>Show everyone&apos;s runs</Link> : <Link href={`${BASE}${listQueryToSearch("runs", { technicianId: actor.id })}`}>Show only mine</Link>)}
+          </p>
         </div>
         {operates && <div className="links"><Link className="button" href="/runs/new">Start a run</Link></div>}
       </div>
-      <QueueCard title={mine ? "My runs" : "Runs"} count={runs.length} empty="No run here yet." testId="run-list"><RunTable zone={zone} runs={runs} /></QueueCard>
+      <RunListFilters {...listQueryToFilterParts("runs", query)} choices={choices} client={options.client} basePath={BASE} />
+      <IgnoredValues ignored={ignored} />
+      <ListCard
+        title={mine ? "My runs" : "Runs"} total={list.total} testId="run-list" empty="No run matches these filters."
+        pager={<Pager kind="runs" query={query} total={list.total} pageCount={list.pageCount} basePath={BASE} noun="runs" />}
+      >
+        <table className="list">
+          <thead>
+            <tr>
+              <SortHeader label="Run" column="labNumber" {...sort} /><th>Method</th><th>Specimen</th><th>Client</th><th>Cell</th>
+              <SortHeader label="Mounted" column="mounted" {...sort} /><th>Technician</th><SortHeader label="State" column="state" {...sort} />
+            </tr>
+          </thead>
+          <tbody>
+            {list.rows.map((r) => (
+              <tr key={r.id}>
+                <td><Link className="mono" href={`/runs/${r.labNumber}`}>{r.labNumber}</Link></td><td>ASTM {r.methodCode}</td><td className="mono">{r.specimenLabNumber}</td>
+                <td>{r.clientName}</td><td className="mono">{r.cellAssetTag}</td><td>{formatDate(r.assignedAt, zone)}</td><td>{r.technicianName}</td>
+                <td><StateTag state={r.state} kind="run" /></td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </ListCard>
     </>
   );
 }

@@ -8,7 +8,7 @@ import { SortHeader } from "@/components/lists/sort-header";
 import { StateTag } from "@/components/ui/state-tag";
 import { formatDate } from "@/lib/format/dates";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
-import { listFilterOptions } from "@/lib/server/lists/list-filter-options";
+import { readFilterSelection } from "@/lib/server/lists/list-filter-options";
 import { listRolls } from "@/lib/server/lists/list-rolls";
 import { listQueryToFilterParts, parseListQuery, type RawSearchParams } from "@/lib/validation/list-query";
 import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
@@ -21,13 +21,13 @@ export default async function SamplesPage({ searchParams }: { searchParams: Prom
   const actor = await requirePageUser("sample.view");
   const zone = await getLabTimeZone();
   const { query, ignored } = parseListQuery("rolls", await searchParams);
-  const [list, options] = await Promise.all([listRolls({ actor, query }), listFilterOptions({ actor })]);
+  const [list, options] = await Promise.all([listRolls({ actor, query }), readFilterSelection({ actor, clientOrganizationId: query.clientOrganizationId, projectId: query.projectId })]);
   const sort = { kind: "rolls" as const, query, basePath: BASE };
   return (
     <>
       <h1>Samples</h1>
       <SampleTabs current="rolls" />
-      <ListFilterBar {...listQueryToFilterParts("rolls", query)} clients={options.clients} projects={options.projects} show="state" dateLabel="Received" searchHint="R26-00042 or a roll number" />
+      <ListFilterBar {...listQueryToFilterParts("rolls", query)} client={options.client} project={options.project} show="state" dateLabel="Received" searchHint="R26-00042 or a roll number" />
       <IgnoredValues ignored={ignored} />
       <ListCard
         title="Rolls" total={list.total} testId="roll-list" empty="No roll matches these filters."

@@ -1,11 +1,13 @@
 import "server-only";
 import { AppError } from "@/lib/errors/app-error";
+import type { Prisma } from "@/lib/generated/prisma/client";
 import { can } from "@/lib/policy/permissions";
 import { runTransition, type RunStateName } from "@/lib/runs/run-state-machine";
 import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
 import { getDb } from "../db/client";
 import { currentVolumesMl } from "@/lib/evaluation/current-volumes";
+import { loadCurrentReadingsOnce } from "./load-current-readings";
 import { BURETTE_PANEL_ROLE, buretteAreasMm2 } from "./reading-context";
 
 const READING_SELECT = {
@@ -16,14 +18,21 @@ const READING_SELECT = {
   recordedBy: { select: { id: true, name: true } },
   correctedBy: { select: { id: true } },
 } as const;
+type ReadingRow = Prisma.ReadingGetPayload<{ select: typeof READING_SELECT }>;
+
+/** Readings shown a page at a time: a run logged every few minutes for weeks holds tens of thousands. */
+export const READINGS_PAGE_SIZE = 100;
+
 
 /**
- * A run's readings for the readings panel: the current set (readings no other reading corrects, by
- * elapsed time, with volumes counted from the first of them as lib/hydraulics gets them) and, per
- * sequence number, every version oldest first with who recorded or corrected it, when and why.
- * `canRecord` says whether this person may add or correct readings now, and `whyNot` why not.
+ * A run's readings for the readings panel, one page of the current set (readings no other reading corrects,
+ * by elapsed time; `page` counts from 1, the last page when absent) with raw levels and volumes counted from
+ * the first current reading as lib/hydraulics gets them (so the volumes need every current reading's levels,
+ * read as a few columns), and, per sequence number of the page's corrected readings, every version oldest first
+ * with who recorded or corrected it, when and why. `canRecord` says whether this person may add or correct
+ * readings now, and `whyNot` why not.
  */
-export async function listRunReadings(options: { actor: CurrentUser; runId: string }) {
+export async function listRunReadings(options: { actor: CurrentUser; runId: string; page?: number; pageSize?: number }) {
   requirePermission(options.actor, "run.view");
   const db = getDb();
   const run = await db.run.findUnique({
@@ -35,22 +44,35 @@ export async function listRunReadings(options: { actor: CurrentUser; runId: stri
     },
   });
   if (!run) throw new AppError("NOT_FOUND");
-  const all = await db.reading.findMany({ where: { runId: run.id }, orderBy: [{ sequence: "asc" }, { createdAt: "asc" }], select: READING_SELECT });
+  const currentAll = await loadCurrentReadingsOnce(run.id);
 
-  const current = all.filter((r) => !r.correctedBy).sort((a, b) => a.elapsedS - b.elapsedS);
+  const pageSize = options.pageSize ?? READINGS_PAGE_SIZE;
+  const pageCount = Math.max(1, Math.ceil(currentAll.length / pageSize));
+  const page = Math.min(Math.max(1, options.page ?? pageCount), pageCount);
+  const slice = currentAll.slice((page - 1) * pageSize, page * pageSize);
+  const lastCurrent = currentAll[currentAll.length - 1];
+  const correctedSequences = slice.filter((r) => r.corrected).map((r) => r.sequence);
+  const [shown, earlier] = await Promise.all([
+    db.reading.findMany({ where: { id: { in: [...slice.map((r) => r.id), ...(lastCurrent ? [lastCurrent.id] : [])] } }, select: READING_SELECT }),
+    correctedSequences.length ? db.reading.findMany({ where: { runId: run.id, sequence: { in: correctedSequences } }, orderBy: [{ sequence: "asc" }, { createdAt: "asc" }], select: READING_SELECT }) : [],
+  ]);
+  const byId = new Map(shown.map((r) => [r.id, r]));
+
   const panel = run.equipment[0];
   const areasMm2 = buretteAreasMm2(panel?.calibration?.values);
-  const volumes = new Map(currentVolumesMl(current, areasMm2).map((v, i) => [current[i]!.id, v]));
-  const base = current[0];
-  const withVolumes = <R extends (typeof all)[number]>(r: R) => ({
+  const volumes = new Map(currentVolumesMl(currentAll, areasMm2).map((v, i) => [currentAll[i]!.id, v]));
+  const base = currentAll[0];
+  const withVolumes = <R extends ReadingRow>(r: R) => ({
     ...r,
     /** Cumulative inflow since the first current reading, mL, carried across refills (what lib/hydraulics gets). */
     inflowMl: volumes.get(r.id)?.inflowMl ?? (base ? r.inflowCumulativeMl - base.inflowCumulativeMl : r.inflowCumulativeMl),
     outflowMl: volumes.get(r.id)?.outflowMl ?? (base ? r.outflowCumulativeMl - base.outflowCumulativeMl : r.outflowCumulativeMl),
     corrected: r.correctsId !== null,
   });
+  const current = slice.map((r) => withVolumes(byId.get(r.id)!));
   const history = new Map<number, Array<ReturnType<typeof withVolumes>>>();
-  for (const r of all) history.set(r.sequence, [...(history.get(r.sequence) ?? []), withVolumes(r)]);
+  for (const r of earlier) history.set(r.sequence, [...(history.get(r.sequence) ?? []), withVolumes(r)]);
+  const last = lastCurrent ? withVolumes(byId.get(lastCurrent.id)!) : undefined;
 
   const permeationStartedAt = run.stages[0]?.startedAt ?? null;
   const step = runTransition(run.state as RunStateName, "record-reading");
@@ -68,7 +90,9 @@ export async function listRunReadings(options: { actor: CurrentUser; runId: stri
 
   return {
     run: { id: run.id, labNumber: run.labNumber, state: run.state, methodCode: run.methodCode, permeationStartedAt, areasMm2, burettePanel: panel ? { assetTag: panel.equipment.assetTag, calibrationReference: panel.calibration?.reference ?? null } : null },
-    current: current.map(withVolumes),
+    current,
+    last,
+    window: { page, pageCount, pageSize, total: currentAll.length, first: (page - 1) * pageSize + 1 },
     history: [...history.entries()].map(([sequence, versions]) => ({ sequence, versions })),
     canRecord: whyNot === null,
     whyNot,

@@ -2,7 +2,9 @@ import "server-only";
 import { AppError, type FieldErrors } from "@/lib/errors/app-error";
 import { readBurettePanel } from "@/lib/equipment/calibration-values";
 import type { NeighbourReading } from "@/lib/readings/check-reading-sequence";
-import type { PrepareProblem, PreparedReading, VolumeReference } from "@/lib/readings/prepare-readings";
+import { prepareReadings, type PrepareProblem, type PreparedReading, type VolumeReference } from "@/lib/readings/prepare-readings";
+import type { ReadingDraft } from "@/lib/readings/reading-draft";
+import type { PressureUnit } from "@/lib/units/pressure-entry";
 import { runTransition, type RunStateName } from "@/lib/runs/run-state-machine";
 import type { CurrentUser } from "../auth/current-user";
 import type { Tx } from "../db/transaction";
@@ -103,4 +105,23 @@ export function nothingSavedMessage(messages: readonly string[], what = "Nothing
 /** The rows of a save, numbered on from the run's last sequence. */
 export function readingRows(prepared: readonly PreparedReading[], options: { runId: string; firstSequence: number; source: string; recordedById: string }) {
   return prepared.map((r, i) => ({ ...r, runId: options.runId, sequence: options.firstSequence + i, source: options.source, recordedById: options.recordedById }));
+}
+
+/**
+ * The one check of new readings on a run, whatever brings them (the entry grid, a data-logger file, the API):
+ * drafts placed after the run's latest current reading, with volumes from the calibrated burettes and every
+ * cross-row problem (order, burettes moving the wrong way, scale range, the future). Saves nothing.
+ */
+export function prepareOnRun(ctx: ReadingContext, drafts: ReadonlyArray<{ label: string; draft: ReadingDraft }>, options: { now?: Date; pressureUnit?: PressureUnit } = {}) {
+  return prepareReadings({
+    drafts,
+    permeationStartedAt: ctx.permeationStartedAt,
+    timeZone: ctx.timeZone,
+    now: options.now ?? new Date(),
+    areasMm2: ctx.areasMm2,
+    scaleRangeMm: ctx.scaleRangeMm,
+    reference: ctx.referenceAt(ctx.current.length - 1),
+    previous: asNeighbour(ctx.current[ctx.current.length - 1]),
+    ...(options.pressureUnit && { pressureUnit: options.pressureUnit }),
+  });
 }

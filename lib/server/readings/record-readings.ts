@@ -1,7 +1,6 @@
 import "server-only";
 import { AppError } from "@/lib/errors/app-error";
 import type { SequenceField } from "@/lib/readings/check-reading-sequence";
-import { prepareReadings } from "@/lib/readings/prepare-readings";
 import { readingEntryToDraft } from "@/lib/readings/reading-entry-to-draft";
 import type { PressureUnit } from "@/lib/units/pressure-entry";
 import { recordReadingsSchema, type ReadingEntry } from "@/lib/validation/readings";
@@ -9,7 +8,7 @@ import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
 import { withActor, type Tx } from "../db/transaction";
 import { parseOrThrow } from "../validation/parse";
-import { asNeighbour, loadReadingContext, nothingSavedMessage, problemsToFieldErrors, readingRows } from "./reading-context";
+import { loadReadingContext, nothingSavedMessage, prepareOnRun, problemsToFieldErrors, readingRows } from "./reading-context";
 
 /** Which grid cell a cross-row problem belongs to. */
 const GRID_FIELD: Record<SequenceField, string> = { time: "takenAt", inflowLevelMm: "inflowLevelMm", outflowLevelMm: "outflowLevelMm", head: "effluentPressure", temperatureC: "temperatureC" };
@@ -34,17 +33,11 @@ export async function saveReadingEntries(
   options: { actor: CurrentUser; runId: string; pressureUnit: PressureUnit; entries: readonly ReadingEntry[]; now?: Date; source: string; instrumentCellIds?: readonly string[] },
 ) {
   const ctx = await loadReadingContext(tx, { actor: options.actor, runId: options.runId, instrumentCellIds: options.instrumentCellIds });
-  const { rows, problems } = prepareReadings({
-    drafts: options.entries.map((entry, i) => ({ label: `Row ${i + 1}`, draft: readingEntryToDraft(entry, options.pressureUnit) })),
-    permeationStartedAt: ctx.permeationStartedAt,
-    timeZone: ctx.timeZone,
-    now: options.now ?? new Date(),
-    areasMm2: ctx.areasMm2,
-    scaleRangeMm: ctx.scaleRangeMm,
-    reference: ctx.referenceAt(ctx.current.length - 1),
-    previous: asNeighbour(ctx.current[ctx.current.length - 1]),
-    pressureUnit: options.pressureUnit,
-  });
+  const { rows, problems } = prepareOnRun(
+    ctx,
+    options.entries.map((entry, i) => ({ label: `Row ${i + 1}`, draft: readingEntryToDraft(entry, options.pressureUnit) })),
+    { ...(options.now && { now: options.now }), pressureUnit: options.pressureUnit },
+  );
   if (problems.length)
     throw new AppError("INVALID_INPUT", nothingSavedMessage(problems.map((p) => p.message)), { fieldErrors: problemsToFieldErrors(problems, (p) => `readings.${p.index}.${GRID_FIELD[p.field]}`) });
   await tx.reading.createMany({ data: readingRows(rows, { runId: ctx.run.id, firstSequence: ctx.nextSequence, source: options.source, recordedById: options.actor.id }) });

@@ -5,12 +5,13 @@ import type { TestMethod } from "@/lib/hydraulics";
 import type { Db } from "../db/client";
 import type { Tx } from "../db/transaction";
 import { loadSettingsInUse } from "../methods/settings-in-use";
+import { loadCurrentReadings, type CurrentReadingRow } from "../readings/load-current-readings";
 import { BURETTE_PANEL_ROLE } from "../readings/reading-context";
 
-type Source = Pick<Db, "reading" | "run" | "methodSettingsVersion" | "calibration"> | Tx;
+type Source = Pick<Db, "reading" | "run" | "methodSettingsVersion" | "calibration" | "$queryRaw"> | Tx;
 
 /** A run's records as the pure evaluation builder takes them (lib/evaluation/run-evaluation-context.ts). */
-export async function loadRunEvaluationContext(db: Source, runId: string): Promise<RunEvaluationContext> {
+export async function loadRunEvaluationContext(db: Source, runId: string, options: { readings?: Promise<CurrentReadingRow[]> } = {}): Promise<RunEvaluationContext> {
   const run = await db.run.findUniqueOrThrow({
     where: { id: runId },
     select: {
@@ -22,7 +23,7 @@ export async function loadRunEvaluationContext(db: Source, runId: string): Promi
     },
   });
   const [readings, settings, cellCalibrations] = await Promise.all([
-    db.reading.findMany({ where: { runId, correctedBy: null }, orderBy: { elapsedS: "asc" } }),
+    options.readings ?? loadCurrentReadings(db, runId),
     loadSettingsInUse(db, run),
     db.calibration.findMany({ where: { equipmentId: run.cellId }, orderBy: [{ calibratedAt: "desc" }, { createdAt: "desc" }], select: { values: true } }),
   ]);
@@ -45,6 +46,6 @@ export async function loadRunEvaluationContext(db: Source, runId: string): Promi
  * computed. The gradient uses the post-test bentonite layer thickness once it is measured, the initial
  * specimen thickness before.
  */
-export async function evaluateRunRecords(db: Source, runId: string): Promise<RunVerdict> {
-  return evaluateRunContext(await loadRunEvaluationContext(db, runId));
+export async function evaluateRunRecords(db: Source, runId: string, options: { readings?: Promise<CurrentReadingRow[]> } = {}): Promise<RunVerdict> {
+  return evaluateRunContext(await loadRunEvaluationContext(db, runId, options));
 }

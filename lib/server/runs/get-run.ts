@@ -4,6 +4,7 @@ import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
 import { getDb } from "../db/client";
 import { runDeviations } from "@/lib/runs/deviations";
+import { loadCurrentReadingsOnce } from "../readings/load-current-readings";
 import { evaluateRunRecords } from "./evaluate-run-records";
 
 /** A run with its specimen, instruments, stages and reviews, its deviations, and the verdict on its readings (lib/evaluation). */
@@ -25,7 +26,7 @@ export async function getRun(options: { actor: CurrentUser; labNumber: string })
     },
   });
   if (!run) throw new AppError("NOT_FOUND");
-  const [verdict, correctedReadings] = await Promise.all([evaluateRunRecords(db, run.id), db.reading.count({ where: { runId: run.id, correctsId: { not: null } } })]);
+  const [verdict, correctedReadings] = await Promise.all([evaluateRunRecords(db, run.id, { readings: loadCurrentReadingsOnce(run.id) }), db.reading.count({ where: { runId: run.id, correctsId: { not: null } } })]);
   const deviations = runDeviations({ ...run, checklist: run.specimen.checklist, correctedReadings, leakage: verdict.leakage?.flagged ? { statement: verdict.leakage.statement, acknowledgedBy: null } : null });
   return { run, deviations, verdict };
 }

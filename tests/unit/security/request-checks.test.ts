@@ -3,7 +3,8 @@ import { actionBodyProblem } from "@/lib/security/action-body";
 import { isCrossOriginWrite } from "@/lib/security/cross-origin-write";
 import { baselineSecurityHeaders, newNonce, pageContentSecurityPolicy } from "@/lib/security/security-headers";
 import { CLIENT_ADDRESS_HEADER } from "@/lib/server/auth/client-address";
-import { bodyProblem, clientAddress, CLIENT_ADDRESS_HEADER as FRONT_DOOR_HEADER, targetProblem } from "../../../scripts/app-server.mjs";
+import { MAX_READINGS_FILE_BYTES } from "@/lib/validation/readings";
+import { READINGS_UPLOAD_LIMIT_BYTES, bodyProblem, clientAddress, CLIENT_ADDRESS_HEADER as FRONT_DOOR_HEADER, targetProblem } from "../../../scripts/app-server.mjs";
 
 describe("the front door's checks (scripts/app-server.mjs)", () => {
   it("refuses malformed addresses: broken escapes, NUL and control characters, broken UTF-8, lone surrogates", () => {
@@ -22,6 +23,15 @@ describe("the front door's checks (scripts/app-server.mjs)", () => {
     expect(bodyProblem(req("POST", { "transfer-encoding": "chunked" }))).toMatchObject({ status: 411 });
     expect(bodyProblem(req("POST", { "content-length": "-5" }))).toMatchObject({ status: 400 });
     expect(bodyProblem(req("GET", { "content-length": String(5 * 1024 * 1024) }))).toBeNull();
+  });
+
+  it("lets a data-logger upload hold as much as an import takes (32 MB), and refuses a 2 GB file with what to do", () => {
+    const upload = (bytes: number, url = "/api/runs/T26-00004/readings/import?mode=preview&fileName=a.csv") => ({ method: "POST", url, headers: { "content-length": String(bytes) } });
+    expect(READINGS_UPLOAD_LIMIT_BYTES).toBe(MAX_READINGS_FILE_BYTES);
+    expect(bodyProblem(upload(10 * 1024 * 1024))).toBeNull();
+    expect(bodyProblem(upload(2 * 1024 ** 3))).toMatchObject({ status: 413, message: "The data-logger file is larger than 32 MB, the most one import takes; split it by date and import each part in order. Nothing was saved." });
+    // Only that route: the same size elsewhere is still refused at 1 MB.
+    expect(bodyProblem(upload(10 * 1024 * 1024, "/api/runs/T26-00004/readings/importx"))).toMatchObject({ status: 413, message: expect.stringMatching(/larger than 1 MB/) });
   });
 
   it("takes the client's address from the socket unless a reverse proxy is trusted, and then from that proxy's entry", () => {

@@ -1,32 +1,33 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { ReadingsPanel } from "@/components/readings/readings-panel";
+import { readingsPageOf } from "@/components/readings/readings-pager";
 import { ChooseSettingsForm } from "@/components/review/choose-settings-form";
 import { ResultPreview } from "@/components/review/result-preview";
 import { ReviewDecision } from "@/components/review/review-decision";
 import { CriteriaPanel } from "@/components/runs/criteria-panel";
 import { EvaluationBasis } from "@/components/runs/evaluation-basis";
-import { RunCharts } from "@/components/runs/run-charts";
+import { ZoomableRunCharts } from "@/components/runs/zoomable-run-charts";
 import { RunStagesTable } from "@/components/runs/run-stages-table";
 import { RecordFacts } from "@/components/samples/record-facts";
 import { StateTag } from "@/components/ui/state-tag";
 import { isAppError } from "@/lib/errors/app-error";
 import { formatDateTime } from "@/lib/format/dates";
 import { canApproveRun } from "@/lib/policy/permissions";
-import { toChartPoints } from "@/lib/runs/chart-points";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { listMethodSettings } from "@/lib/server/methods/list-method-settings";
 import { getRun } from "@/lib/server/runs/get-run";
+import { verdictChartSeries } from "@/lib/server/runs/get-run-chart-series";
 import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 import type { TestMethod } from "@/lib/hydraulics";
 
-type Props = { params: Promise<{ labNumber: string }> };
+type Props = { params: Promise<{ labNumber: string }>; searchParams?: Promise<{ readings?: string | string[] }> };
 
 export async function generateMetadata({ params }: Props) {
   return { title: `Review ${(await params).labNumber}` };
 }
 
-export default async function ReviewRunPage({ params }: Props) {
+export default async function ReviewRunPage({ params, searchParams }: Props) {
   const actor = await requirePageUser("run.review");
   const zone = await getLabTimeZone();
   const { labNumber } = await params;
@@ -34,7 +35,7 @@ export default async function ReviewRunPage({ params }: Props) {
     if (isAppError(error) && error.code === "NOT_FOUND") notFound();
     throw error;
   });
-  const { evaluation, reason, inputReadings } = verdict;
+  const { evaluation, reason } = verdict;
   const allowed = canApproveRun(actor, run);
   const versions = run.state === "SUBMITTED" && allowed.ok ? ((await listMethodSettings({ actor, methodCode: run.methodCode }))[0]?.versions ?? []) : [];
   return (
@@ -59,13 +60,13 @@ export default async function ReviewRunPage({ params }: Props) {
           {deviations.length === 0 ? <p>None recorded.</p> : <ul>{deviations.map((d) => <li key={d}>{d}</li>)}</ul>}
         </section>
         <section className="card"><h2>Stages</h2><RunStagesTable stages={run.stages} pressureUnit={actor.pressureUnit} zone={zone} /></section>
-        <ReadingsPanel runId={run.id} labNumber={run.labNumber} actor={actor} zone={zone} />
+        <ReadingsPanel runId={run.id} labNumber={run.labNumber} actor={actor} zone={zone} basePath={`/review/${run.labNumber}`} {...readingsPageOf(await searchParams)} />
         {evaluation ? (
           <>
             <EvaluationBasis verdict={verdict} />
             <CriteriaPanel met={evaluation.termination.met} criteria={evaluation.termination.criteria} trend={verdict.trend} settingsLabel={verdict.settings.label} />
             {run.state === "SUBMITTED" && <ResultPreview verdict={verdict} method={run.methodCode as TestMethod} earlyEnd={run.terminationKind === "EARLY_END"} />}
-            <RunCharts points={toChartPoints(evaluation.intervals, inputReadings, verdict.poreVolume.ml)} ratioBand={[evaluation.settings.ratioMin, evaluation.settings.ratioMax]} refillHours={verdict.refillsAtS.map((s) => s / 3600)} />
+            <ZoomableRunCharts labNumber={run.labNumber} initial={verdictChartSeries(verdict)!} ratioBand={[evaluation.settings.ratioMin, evaluation.settings.ratioMax]} refillHours={verdict.refillsAtS.map((s) => s / 3600)} />
           </>
         ) : <p className="notice notice-caution">{reason}</p>}
         {run.reviews.length > 0 && <section className="card"><h2>Earlier reviews</h2><ul>{run.reviews.map((r) => <li key={r.id}>{formatDateTime(r.createdAt, zone)} · {r.reviewer.name}: {r.decision.toLowerCase()} {r.comments && `— ${r.comments}`}</li>)}</ul></section>}

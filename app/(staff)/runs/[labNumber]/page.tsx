@@ -4,25 +4,26 @@ import { RecordFacts } from "@/components/samples/record-facts";
 import { CriteriaPanel } from "@/components/runs/criteria-panel";
 import { EvaluationBasis } from "@/components/runs/evaluation-basis";
 import { PressureCaution } from "@/components/runs/pressure-caution";
-import { RunCharts } from "@/components/runs/run-charts";
+import { ZoomableRunCharts } from "@/components/runs/zoomable-run-charts";
 import { RunStagesTable } from "@/components/runs/run-stages-table";
 import { AbandonRunForm } from "@/components/runs/abandon-run-form";
 import { PostTestForm, SubmitRunButton, TerminateForm } from "@/components/runs/run-step-forms";
 import { StageForm } from "@/components/runs/stage-form";
 import { ReadingsPanel } from "@/components/readings/readings-panel";
+import { readingsPageOf } from "@/components/readings/readings-pager";
 import { StateTag } from "@/components/ui/state-tag";
 import { isAppError } from "@/lib/errors/app-error";
 import { formatDateTime } from "@/lib/format/dates";
 import { formatPressure } from "@/lib/units/pressure-entry";
-import { toChartPoints } from "@/lib/runs/chart-points";
 import { allowedRunSteps, type RunStateName } from "@/lib/runs/run-state-machine";
 import { can } from "@/lib/policy/permissions";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getRun } from "@/lib/server/runs/get-run";
+import { verdictChartSeries } from "@/lib/server/runs/get-run-chart-series";
 import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 import { listStorageLocations } from "@/lib/server/samples/list-storage-locations";
 
-type Props = { params: Promise<{ labNumber: string }> };
+type Props = { params: Promise<{ labNumber: string }>; searchParams?: Promise<{ readings?: string | string[] }> };
 
 export async function generateMetadata({ params }: Props) {
   return { title: `Run ${(await params).labNumber}` };
@@ -33,14 +34,14 @@ function projectedText(permeationStart: Date | null, projectedAtS: number | null
   return `Probably met about ${formatDateTime(new Date(permeationStart.getTime() + projectedAtS * 1000), zone)}. ${reason}`;
 }
 
-export default async function RunPage({ params }: Props) {
+export default async function RunPage({ params, searchParams }: Props) {
   const actor = await requirePageUser("run.view");
   const { labNumber } = await params;
   const { run, verdict } = await getRun({ actor, labNumber }).catch((error) => {
     if (isAppError(error) && error.code === "NOT_FOUND") notFound();
     throw error;
   });
-  const { evaluation, reason, inputReadings } = verdict;
+  const { evaluation, reason } = verdict;
   const steps = allowedRunSteps(run.state as RunStateName);
   const mine = can(actor.role, "run.operate") && run.performedById === actor.id;
   const [zone, locations] = await Promise.all([getLabTimeZone(), mine && steps.includes("abandon") ? listStorageLocations({ actor, activeOnly: true }) : []]);
@@ -83,7 +84,7 @@ export default async function RunPage({ params }: Props) {
             <section className="card"><h2>Record a stage</h2><StageForm key={run.version} runId={run.id} version={run.version} kinds={[...stageKinds]} pressureUnit={actor.pressureUnit} zone={zone} /></section>
           )}
         </div>
-        {permeation && <ReadingsPanel runId={run.id} labNumber={run.labNumber} actor={actor} zone={zone} />}
+        {permeation && <ReadingsPanel runId={run.id} labNumber={run.labNumber} actor={actor} zone={zone} basePath={`/runs/${run.labNumber}`} {...readingsPageOf(await searchParams)} />}
         {permeation && <p><a className="button button-quiet" href={`/api/runs/${encodeURIComponent(run.labNumber)}/xlsx`} download data-testid="run-xlsx">Download readings and intervals (XLSX)</a></p>}
         {evaluation ? (
           <>
@@ -94,8 +95,9 @@ export default async function RunPage({ params }: Props) {
               {evaluation.warnings.map((w) => <p key={w} className="notice notice-caution">{w}</p>)}
             </section>
             <EvaluationBasis verdict={verdict} />
-            <RunCharts
-              points={toChartPoints(evaluation.intervals, inputReadings, verdict.poreVolume.ml)}
+            <ZoomableRunCharts
+              labNumber={run.labNumber}
+              initial={verdictChartSeries(verdict)!}
               ratioBand={ratioBand}
               refillHours={verdict.refillsAtS.map((s) => s / 3600)}
               {...(evaluation.settings.criteria.includes("pore-volumes") && { minPoreVolumes: evaluation.settings.minPoreVolumes })}

@@ -4,7 +4,6 @@ import { revalidatePath } from "next/cache";
 import { toActionResult } from "@/lib/server/actions/action-result";
 import { requireUser } from "@/lib/server/auth/require-permission";
 import { correctReading } from "@/lib/server/readings/correct-reading";
-import { importReadingsCsv } from "@/lib/server/readings/import-readings-csv";
 import { recordReadings } from "@/lib/server/readings/record-readings";
 
 export async function recordReadingsAction(input: unknown) {
@@ -13,15 +12,6 @@ export async function recordReadingsAction(input: unknown) {
     revalidatePath(`/runs/${result.labNumber}`);
     return result;
   }, "Readings saved.");
-}
-
-/** Preview (saves nothing) or save, as `input.mode` says. */
-export async function importReadingsCsvAction(input: unknown) {
-  return toActionResult(async () => {
-    const result = await importReadingsCsv({ actor: await requireUser("run.operate"), input });
-    if (result.saved > 0) revalidatePath(`/runs/${result.labNumber}`);
-    return result;
-  }, "File read.");
 }
 
 export async function correctReadingAction(input: unknown) {

@@ -9,7 +9,7 @@ import { StateTag } from "@/components/ui/state-tag";
 import { formatDateTime } from "@/lib/format/dates";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { listCoupons } from "@/lib/server/lists/list-coupons";
-import { listFilterOptions } from "@/lib/server/lists/list-filter-options";
+import { readFilterSelection } from "@/lib/server/lists/list-filter-options";
 import { listQueryToFilterParts, parseListQuery, type RawSearchParams } from "@/lib/validation/list-query";
 import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 
@@ -21,13 +21,13 @@ export default async function CouponsPage({ searchParams }: { searchParams: Prom
   const actor = await requirePageUser("sample.view");
   const zone = await getLabTimeZone();
   const { query, ignored } = parseListQuery("coupons", await searchParams);
-  const [list, options] = await Promise.all([listCoupons({ actor, query }), listFilterOptions({ actor })]);
+  const [list, options] = await Promise.all([listCoupons({ actor, query }), readFilterSelection({ actor, clientOrganizationId: query.clientOrganizationId, projectId: query.projectId })]);
   const sort = { kind: "coupons" as const, query, basePath: BASE };
   return (
     <>
       <h1>Samples</h1>
       <SampleTabs current="coupons" />
-      <ListFilterBar {...listQueryToFilterParts("coupons", query)} clients={options.clients} projects={options.projects} show="state" dateLabel="Cut" searchHint="C26-00007, R26-00042 or a roll number" />
+      <ListFilterBar {...listQueryToFilterParts("coupons", query)} client={options.client} project={options.project} show="state" dateLabel="Cut" searchHint="C26-00007, R26-00042 or a roll number" />
       <IgnoredValues ignored={ignored} />
       <ListCard
         title="Coupons" total={list.total} testId="coupon-list" empty="No coupon matches these filters."

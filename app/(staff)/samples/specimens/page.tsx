@@ -8,7 +8,7 @@ import { SortHeader } from "@/components/lists/sort-header";
 import { StateTag } from "@/components/ui/state-tag";
 import { formatDateTime } from "@/lib/format/dates";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
-import { listFilterOptions } from "@/lib/server/lists/list-filter-options";
+import { readFilterSelection } from "@/lib/server/lists/list-filter-options";
 import { listSpecimens } from "@/lib/server/lists/list-specimens";
 import { listQueryToFilterParts, parseListQuery, type RawSearchParams } from "@/lib/validation/list-query";
 import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
@@ -21,13 +21,13 @@ export default async function SpecimensPage({ searchParams }: { searchParams: Pr
   const actor = await requirePageUser("sample.view");
   const zone = await getLabTimeZone();
   const { query, ignored } = parseListQuery("specimens", await searchParams);
-  const [list, options] = await Promise.all([listSpecimens({ actor, query }), listFilterOptions({ actor })]);
+  const [list, options] = await Promise.all([listSpecimens({ actor, query }), readFilterSelection({ actor, clientOrganizationId: query.clientOrganizationId, projectId: query.projectId })]);
   const sort = { kind: "specimens" as const, query, basePath: BASE };
   return (
     <>
       <h1>Samples</h1>
       <SampleTabs current="specimens" />
-      <ListFilterBar {...listQueryToFilterParts("specimens", query)} clients={options.clients} projects={options.projects} show="state" dateLabel="Prepared" searchHint="P26-00003, C26-…, R26-… or a roll number" />
+      <ListFilterBar {...listQueryToFilterParts("specimens", query)} client={options.client} project={options.project} show="state" dateLabel="Prepared" searchHint="P26-00003, C26-…, R26-… or a roll number" />
       <IgnoredValues ignored={ignored} />
       <ListCard
         title="Specimens" total={list.total} testId="specimen-list" empty="No specimen matches these filters."
