@@ -43,7 +43,7 @@ const KIND_WORDS: Record<string, string> = { ...EQUIPMENT_KIND_LABELS, BACK_PRES
 const UNIT_WORDS: Record<string, string> = { KPA: "kPa", PSI: "psi" };
 
 const REF_COLUMNS: Record<string, AuditRefKind> = {
-  actorId: "user", reviewerId: "user", signerId: "user", userId: "user",
+  actorId: "user", reviewerId: "user", signerId: "user", userId: "user", signatoryId: "user", createdById: "user",
   shipmentId: "shipment", rollId: "roll", couponId: "coupon", specimenId: "specimen", runId: "run",
   certificateId: "certificate", revisionId: "revision", supersedesId: "revision", equipmentId: "equipment", cellId: "equipment",
   calibrationId: "calibration", specificationId: "specification", projectId: "project", clientOrganizationId: "client",

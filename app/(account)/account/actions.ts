@@ -5,6 +5,8 @@ import { requestClientAddress } from "@/lib/server/auth/request-client-address";
 import { reissueOwnSession } from "@/lib/server/auth/reissue-session";
 import { requireUser } from "@/lib/server/auth/require-permission";
 import { changeOwnPassword } from "@/lib/server/users/change-own-password";
+import { setOwnResultUnits } from "@/lib/server/users/set-own-result-units";
+import { revalidatePath } from "next/cache";
 
 export async function changeOwnPasswordAction(input: unknown) {
   return toActionResult(async () => {
@@ -13,4 +15,12 @@ export async function changeOwnPasswordAction(input: unknown) {
     await reissueOwnSession(sessionVersion);
     return null;
   }, "Your password has been changed; you have been signed out everywhere else.");
+}
+
+export async function setOwnResultUnitsAction(input: unknown) {
+  return toActionResult(async () => {
+    const saved = await setOwnResultUnits({ actor: await requireUser("account.self"), input });
+    revalidatePath("/", "layout");
+    return saved;
+  }, "Results will be shown in the units you chose.");
 }

@@ -1,4 +1,5 @@
 import { ChangePasswordForm } from "@/components/account/change-password-form";
+import { ResultUnitsForm } from "@/components/account/result-units-form";
 import { ROLE_LABELS } from "@/lib/policy/permissions";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 
@@ -13,6 +14,10 @@ export default async function AccountPage() {
       <section className="card" style={{ maxWidth: "34rem" }}>
         <h2>Change password</h2>
         <ChangePasswordForm />
+      </section>
+      <section className="card" style={{ maxWidth: "34rem" }}>
+        <h2>Units of results</h2>
+        <ResultUnitsForm current={user.resultUnits ?? "SI"} />
       </section>
     </>
   );
