@@ -32,8 +32,14 @@ export async function createCertificateDraft(options: { actor: CurrentUser; inpu
       data: { number: await allocateLabNumber(tx, "certificate", options.now), projectId: project.id, clientOrganizationId: project.clientOrganizationId },
       select: { id: true, number: true },
     });
-    await tx.certificateRevision.create({
+    const revision = await tx.certificateRevision.create({
       data: { certificateId: certificate.id, revision: 1, status: "DRAFT", verificationCode: newVerificationCode(randomBytes(12)), results: { create: results.map((r) => ({ resultId: r.id })) } },
+      select: { id: true },
+    });
+    // The draft's first content: these results, judged by the project's newest specification, in SI units.
+    const specification = await tx.specification.findFirst({ where: { projectId: project.id, isTemplate: false }, orderBy: [{ createdAt: "desc" }, { id: "desc" }], select: { id: true } });
+    await tx.certificateDraftContent.create({
+      data: { revisionId: revision.id, version: 1, resultIds: results.map((r) => r.id), specificationId: specification?.id ?? null, createdById: options.actor.id },
     });
     return certificate;
   }).catch((error: unknown) => {
