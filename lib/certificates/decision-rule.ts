@@ -5,13 +5,15 @@
  * specification that states none; common practice, ILAC-G8:09/2019 calls it a binary rule without guard
  * band; from memory). Pure.
  */
+import { inSentence } from "../format/sentence-case";
+
 export type LimitRule = { label: string; method: "ABSOLUTE" | "ROUNDING" };
 
 /** The decision rule in words, or null when no result was compared with a limit. */
 export function decisionRuleText(limits: LimitRule[]): string | null {
   if (limits.length === 0) return null;
-  const rounding = limits.filter((l) => l.method === "ROUNDING").map((l) => l.label.toLowerCase());
-  const absolute = limits.filter((l) => l.method === "ABSOLUTE").map((l) => l.label.toLowerCase());
+  const rounding = limits.filter((l) => l.method === "ROUNDING").map((l) => inSentence(l.label));
+  const absolute = limits.filter((l) => l.method === "ABSOLUTE").map((l) => inSentence(l.label));
   const parts = [
     rounding.length ? `${joinWords(rounding)}: ASTM E29 rounding method (the result is rounded once, halves to even, to the last place the limit is written to, then compared)` : null,
     absolute.length ? `${joinWords(absolute)}: ASTM E29 absolute method (the result as measured is compared; any excursion fails)` : null,

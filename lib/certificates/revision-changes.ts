@@ -3,11 +3,12 @@
  * (ISO/IEC 17025 7.8.8: an amended report says what changed and why). Pure: compares two snapshots.
  */
 import type { CertificateSnapshot } from "./certificate-snapshot";
+import { inSentence } from "../format/sentence-case";
 
 type Comparable = Pick<CertificateSnapshot, "tests" | "specification" | "remarks" | "unitSystem" | "signatory">;
 
 const resultKeys = (s: Comparable) =>
-  new Map(s.tests.flatMap((t) => t.results.map((r) => [`${t.runLabNumber} ${r.property}`, { label: `${r.label.toLowerCase()} of ${t.runLabNumber} (specimen ${t.specimenLabNumber})`, display: r.display }] as const)));
+  new Map(s.tests.flatMap((t) => t.results.map((r) => [`${t.runLabNumber} ${r.property}`, { label: `${inSentence(r.label)} of ${t.runLabNumber} (specimen ${t.specimenLabNumber})`, display: r.display }] as const)));
 
 const specText = (s: Comparable) => (s.specification ? `${s.specification.name}${s.specification.revision ? `, ${s.specification.revision}` : ""}` : "no specification");
 

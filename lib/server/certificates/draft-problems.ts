@@ -1,4 +1,5 @@
 import "server-only";
+import { inSentence } from "@/lib/format/sentence-case";
 import { TEST_PROPERTY_LABELS, type TestProperty } from "@/lib/results/property-units";
 import type { Db } from "../db/client";
 import type { Tx } from "../db/transaction";
@@ -20,6 +21,6 @@ export async function draftProblems(db: Tx | Db, options: { projectId: string; c
     .filter((r) => !limits.get(r.property as TestProperty))
     .map((r) => ({
       field: "specificationId" as const,
-      message: `${limits.specificationName} sets no limit for ${TEST_PROPERTY_LABELS[r.property as TestProperty].toLowerCase()} (the result of ${r.run.labNumber}): choose a specification that does, or leave the result out.`,
+      message: `${limits.specificationName} sets no limit for ${inSentence(TEST_PROPERTY_LABELS[r.property as TestProperty])} (the result of ${r.run.labNumber}): choose a specification that does, or leave the result out.`,
     }));
 }

@@ -1,4 +1,5 @@
 import "server-only";
+import { inSentence } from "@/lib/format/sentence-case";
 import { formatPropertyValue } from "@/lib/format/result-numbers";
 import { TEST_PROPERTY_LABELS, type TestProperty } from "@/lib/results/property-units";
 import type { CurrentUser } from "../auth/current-user";
@@ -40,7 +41,7 @@ export async function getDraftEditor(options: { actor: CurrentUser; revisionId: 
     problems,
     results: offered.map((r) => ({
       id: r.id,
-      label: `${r.run.labNumber} · specimen ${r.run.specimen.labNumber} · ${TEST_PROPERTY_LABELS[r.property as TestProperty].toLowerCase()} ${formatPropertyValue(r.property, r.value, r.unit, content.unitSystem).text}`,
+      label: `${r.run.labNumber} · specimen ${r.run.specimen.labNumber} · ${inSentence(TEST_PROPERTY_LABELS[r.property as TestProperty])} ${formatPropertyValue(r.property, r.value, r.unit, content.unitSystem).text}`,
     })),
     specifications: specifications.map((s) => ({ id: s.id, label: s.revision ? `${s.name} (${s.revision})` : s.name })),
     signatories,
