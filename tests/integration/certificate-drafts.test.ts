@@ -93,13 +93,13 @@ describe("certificate drafts", () => {
     // The preview is the document as it would be issued, and writes nothing.
     const preview = await previewCertificateDraft({ actor: qa, number: certificate.number, revision: "1" });
     expect(preview.pdf.subarray(0, 4).toString()).toBe("%PDF");
-    // SEEPLINE_KEEP_PDF=dir keeps the preview and the issued PDF to look at (pdftoppm).
-    if (process.env.SEEPLINE_KEEP_PDF) writeFileSync(`${process.env.SEEPLINE_KEEP_PDF}/draft-preview.pdf`, preview.pdf);
+    // SEEPLINE_KEEP_PDFS=dir keeps the preview and the issued PDF to look at (pdftoppm).
+    if (process.env.SEEPLINE_KEEP_PDFS) writeFileSync(`${process.env.SEEPLINE_KEEP_PDFS}/draft-preview.pdf`, preview.pdf);
     expect(await contentCount(draft.id)).toBe(3);
     expect((await failure(issueCertificate({ actor: qa, input: { revisionId: draft.id, password: TEST_PASSWORD } }))).code).toBe("FORBIDDEN");
     await issueCertificate({ actor: qa2, input: { revisionId: draft.id, password: TEST_PASSWORD } });
     const issuedRow = await db().certificateRevision.findUniqueOrThrow({ where: { id: draft.id } });
-    if (process.env.SEEPLINE_KEEP_PDF) writeFileSync(`${process.env.SEEPLINE_KEEP_PDF}/issued.pdf`, issuedRow.pdf!);
+    if (process.env.SEEPLINE_KEEP_PDFS) writeFileSync(`${process.env.SEEPLINE_KEEP_PDFS}/issued.pdf`, issuedRow.pdf!);
     const snapshot = issuedRow.snapshot as CertificateSnapshot;
     expect(snapshot.tests.flatMap((t) => t.results.map((r) => r.property))).toEqual(["INDEX_FLUX"]);
     expect(snapshot).toMatchObject({ remarks: "Index flux only.", specification: { name: "Spec INDEX_FLUX", revision: "Rev. C" }, signatory: { name: qa2.name } });
@@ -130,7 +130,7 @@ describe("certificate drafts", () => {
     await editCertificateDraft({ actor: qa, input: { revisionId: revision2.id, baseVersion: 1, resultIds: content.resultIds, specificationId: content.specificationId ?? "", remarks: "Specimens trimmed by die from the roll sample.", unitSystem: "SI" } });
     await issueCertificate({ actor: qa, input: { revisionId: revision2.id, password: TEST_PASSWORD } });
     const revised = await db().certificateRevision.findUniqueOrThrow({ where: { id: revision2.id } });
-    if (process.env.SEEPLINE_KEEP_PDF) writeFileSync(`${process.env.SEEPLINE_KEEP_PDF}/revision2.pdf`, revised.pdf!);
+    if (process.env.SEEPLINE_KEEP_PDFS) writeFileSync(`${process.env.SEEPLINE_KEEP_PDFS}/revision2.pdf`, revised.pdf!);
     const snapshot = revised.snapshot as CertificateSnapshot;
     expect(snapshot.supersedes).toEqual({ revision: 1, reason: "The remark on specimen preparation was missing" });
     expect(snapshot.changes).toEqual(['Remarks changed; they now read: "Specimens trimmed by die from the roll sample."']);
