@@ -16,7 +16,7 @@ export function ResultPanel({ verdict, method, earlyEnd, unitSystem, limits }: P
   return (
     <section className="card" data-testid="result-panel">
       <h2>Reported result</h2>
-      <p className="muted">In {UNIT_SYSTEM_LABELS[unitSystem].charAt(0).toLowerCase() + UNIT_SYSTEM_LABELS[unitSystem].slice(1)} (change under My account).{limits ? ` Conformance preview against ${limits.specificationName}.` : ""}</p>
+      <p className="muted">Shown in {UNIT_SYSTEM_LABELS[unitSystem]} (change under My account).{limits ? ` Conformance preview against ${limits.specificationName}.` : ""}</p>
       <div className="table-wrap">
         <table className="list">
           <thead><tr><th>Property</th><th>Result</th><th>Expanded uncertainty (k = 2, about 95 %)</th><th>Limit</th><th>Preview</th></tr></thead>
