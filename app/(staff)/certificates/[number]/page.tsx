@@ -5,7 +5,7 @@ import { ReviseCertificateForm } from "@/components/certificates/revise-certific
 import { isAppError } from "@/lib/errors/app-error";
 import { formatDateTime } from "@/lib/format/dates";
 import { can } from "@/lib/policy/permissions";
-import { formatResultValue } from "@/lib/results/format-result";
+import { formatPropertyValue } from "@/lib/format/result-numbers";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getCertificate } from "@/lib/server/certificates/get-certificate";
 import { getDraftEditor } from "@/lib/server/certificates/get-draft-editor";
@@ -41,7 +41,7 @@ export default async function CertificatePage({ params }: Props) {
             <h2>Revision {r.revision} <span className={`state ${STATUS_TONE[r.status] ?? ""}`} data-testid={`revision-${r.revision}-status`}>{r.status.toLowerCase()}</span></h2>
             {r.reason && <p>Reason: {r.reason}</p>}
             <ul>
-              {r.results.filter(({ result }) => (r.id === latest?.id && draft ? included.has(result.id) : !r.contents[0] || r.contents[0].resultIds.includes(result.id))).map(({ result }) => <li key={result.id}>{result.run.labNumber} · specimen {result.run.specimen.labNumber} · {result.property === "INDEX_FLUX" ? "index flux" : "hydraulic conductivity at 20 °C"} {formatResultValue(result.value, result.unit)}</li>)}
+              {r.results.filter(({ result }) => (r.id === latest?.id && draft ? included.has(result.id) : !r.contents[0] || r.contents[0].resultIds.includes(result.id))).map(({ result }) => <li key={result.id}>{result.run.labNumber} · specimen {result.run.specimen.labNumber} · {result.property === "INDEX_FLUX" ? "index flux" : "hydraulic conductivity at 20 °C"} {formatPropertyValue(result.property, result.value, result.unit, actor.resultUnits ?? "SI").text}</li>)}
             </ul>
             {r.issuedAt && (
               <p className="muted">
