@@ -6,6 +6,7 @@ import { approveRun } from "@/lib/server/review/approve-run";
 import { createCertificateDraft } from "@/lib/server/certificates/create-certificate-draft";
 import { editCertificateDraft } from "@/lib/server/certificates/edit-certificate-draft";
 import { issueCertificate } from "@/lib/server/certificates/issue-certificate";
+import { listCertifiableResults } from "@/lib/server/certificates/list-certifiable-results";
 import { previewCertificateDraft } from "@/lib/server/certificates/preview-certificate-draft";
 import { reviseCertificate } from "@/lib/server/certificates/revise-certificate";
 import { findBrowser } from "../../e2e/support/find-browser";
@@ -59,7 +60,10 @@ describe("certificate drafts", () => {
     await expect(db().$executeRawUnsafe(`UPDATE "CertificateDraftContent" SET remarks = 'x' WHERE "revisionId" = '${draft.id}'`)).rejects.toThrow(/permission denied/);
     await expect(db().$executeRawUnsafe(`DELETE FROM "CertificateDraftContent" WHERE "revisionId" = '${draft.id}'`)).rejects.toThrow(/permission denied/);
 
-    // k20, left out of the first draft, goes on a second certificate ...
+    // k20, left out of the first draft, is offered for a new certificate again and goes on a second one ...
+    const offered = (await listCertifiableResults({ actor: qa })).flatMap((g) => g.results.map((r) => r.id));
+    expect(offered).toContain(k);
+    expect(offered).not.toContain(flux);
     const second = await createCertificateDraft({ actor: qa, input: { projectId: project.id, resultIds: [k] } });
     // ... so the first may not take it back while the second includes it; nothing is saved.
     const taken = await failure(editCertificateDraft({ actor: qa, input: { revisionId: draft.id, baseVersion: 2, resultIds: [flux, k], unitSystem: "SI" } }));
