@@ -68,6 +68,9 @@ describe.skipIf(!browserAvailable())("QA review, signed certificates, verificati
     // words and the conformance preview against the project's specification.
     await openReview(qa, toApprove);
     const panel = await textOf(qa, '[data-testid="result-panel"]');
+    // SEEPLINE_SCREENSHOTS=dir keeps what QA saw, to look at.
+    const shots = process.env.SEEPLINE_SCREENSHOTS;
+    if (shots) await (await qa.$('[data-testid="result-panel"]'))!.screenshot({ path: `${shots}/review-result-panel.png` });
     const reportedFlux = await textOf(qa, '[data-testid="reported-INDEX_FLUX"] [data-testid="reported-value"]');
     expect(reportedFlux).toMatch(/^\d\.\d × 10⁻[⁰¹²³⁴⁵⁶⁷⁸⁹]+ m³\/m²\/s$/);
     expect(await textOf(qa, '[data-testid="reported-HYDRAULIC_CONDUCTIVITY"] [data-testid="reported-value"]')).toMatch(/^\d\.\d × 10⁻[⁰¹²³⁴⁵⁶⁷⁸⁹]+ m\/s$/);
@@ -93,6 +96,7 @@ describe.skipIf(!browserAvailable())("QA review, signed certificates, verificati
     await fill(qa, "Remarks printed on the certificate", "Specimens die-cut at the laboratory from the roll sample as received.");
     await qa.click("button::-p-text(Save the draft)");
     await qa.waitForFunction(() => /version 2/.test(document.querySelector('[data-testid="draft-editor"] h3')?.textContent ?? ""), { timeout: 30_000 });
+    if (shots) await (await qa.$('[data-testid="draft-editor"]'))!.screenshot({ path: `${shots}/draft-editor.png` });
     const previewHref = await qa.$eval('[data-testid="draft-preview"]', (a) => (a as HTMLAnchorElement).href);
     const preview = await fetchInPage(qa, previewHref);
     expect([preview.status, preview.type]).toEqual([200, "application/pdf"]);
