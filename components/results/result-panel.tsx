@@ -29,14 +29,17 @@ export function ResultPanel({ verdict, method, earlyEnd, unitSystem, limits }: P
                 <td className="mono">{l.conformance.limit ?? "—"}</td>
                 <td>
                   {l.conformance.limit === null
-                    ? <span className="muted">{l.conformance.note}</span>
-                    : <><span className={`state ${l.conformance.conforms ? "state-ok" : "state-bad"}`}>{l.conformance.conforms ? "conforms" : "does not conform"}</span> <span className="muted">{l.conformance.statement}</span></>}
+                    ? <span className="muted">not assessed</span>
+                    : <span className={`state ${l.conformance.conforms ? "state-ok" : "state-bad"}`}>{l.conformance.conforms ? "conforms" : "does not conform"}</span>}
                 </td>
               </tr>
             ))}
           </tbody>
         </table>
       </div>
+      <ul className="muted" data-testid="reported-decisions">
+        {reported.lines.map((l) => <li key={l.property}>{l.label}: {l.conformance.limit === null ? l.conformance.note : l.conformance.statement}</li>)}
+      </ul>
       <dl className="facts" data-testid="reported-bases">
         {reported.bases.map(([label, text]) => <div key={label}><dt>{label}</dt><dd>{text}</dd></div>)}
       </dl>
