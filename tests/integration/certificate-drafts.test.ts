@@ -3,6 +3,7 @@ import { describe, expect, it } from "vitest";
 import type { CertificateSnapshot } from "@/lib/certificates/certificate-snapshot";
 import { withActor } from "@/lib/server/db/transaction";
 import { approveRun } from "@/lib/server/review/approve-run";
+import { buildCertificateSnapshot } from "@/lib/server/certificates/build-certificate-snapshot";
 import { createCertificateDraft } from "@/lib/server/certificates/create-certificate-draft";
 import { editCertificateDraft } from "@/lib/server/certificates/edit-certificate-draft";
 import { issueCertificate } from "@/lib/server/certificates/issue-certificate";
@@ -43,6 +44,22 @@ const draftOf = async (certificateId: string) => db().certificateRevision.findFi
 const contentCount = async (revisionId: string) => db().certificateDraftContent.count({ where: { revisionId } });
 
 describe("certificate drafts", () => {
+  it("prints results in the units the project's specification writes its limits in (cm/s), converted exactly", async () => {
+    const [technician, qa] = await Promise.all([makeUser("TECHNICIAN"), makeUser("QA_MANAGER")]);
+    const { project, k } = await approvedRun(technician.id, qa);
+    // GRI-GCL3's 5e-11 m/s as a client's specification writes it: 5e-9 cm/s (DOMAIN.md).
+    await withActor(SYSTEM, (tx) => tx.specification.create({ data: { name: "Spec in cm/s", projectId: project.id, limits: { create: [{ property: "HYDRAULIC_CONDUCTIVITY", limitText: "5e-9", unit: "cm/s", direction: "MAXIMUM", significantDigits: 1 }] } } }));
+    const certificate = await createCertificateDraft({ actor: qa, input: { projectId: project.id, resultIds: [k] } });
+    const draft = await draftOf(certificate.id);
+    expect((await db().certificateDraftContent.findFirstOrThrow({ where: { revisionId: draft.id } })).unitSystem).toBe("CENTIMETRE");
+    const snapshot = await db().$transaction((tx) => buildCertificateSnapshot(tx, { revisionId: draft.id, signer: qa, meaning: "Reviewed", now: new Date(), baseUrl: "http://localhost" }));
+    const line = snapshot.tests[0]!.results[0]!;
+    const stored = await db().result.findUniqueOrThrow({ where: { id: k } });
+    // 1 m/s = 100 cm/s exactly; the display keeps two significant digits of the converted value.
+    expect(line.display).toBe(`${(stored.value * 100).toExponential(1).replace(/e-(\d+)$/, (_, e: string) => ` × 10⁻${[...e].map((d) => "⁰¹²³⁴⁵⁶⁷⁸⁹"[Number(d)]).join("")}`)} cm/s`);
+    expect(line.conformance).toMatchObject({ unit: "cm/s", limitText: "5e-9", conforms: true });
+  });
+
   it("edits append content versions; a result left out is free for another certificate and is refused back while that one holds it", async () => {
     const [technician, qa, qa2] = await Promise.all([makeUser("TECHNICIAN"), makeUser("QA_MANAGER"), makeUser("QA_MANAGER")]);
     const { project, flux, k } = await approvedRun(technician.id, qa);

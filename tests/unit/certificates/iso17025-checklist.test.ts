@@ -65,6 +65,13 @@ describe("ISO/IEC 17025:2017 7.8.2.1 and 7.8.3.1 checklist on a rendered certifi
   const html = render(snapshot);
   for (const item of CHECKLIST) it(`${item.clause}: ${item.item} (${item.field})`, () => item.check(html, snapshot));
 
+  it("a preview (with the draft mark) says it is not signed", () => {
+    const preview = words(renderToStaticMarkup(createElement(CertificateDocument, { snapshot, qrSvg: QR, watermark: "DRAFT · NOT ISSUED" })));
+    expect(preview).toContain("DRAFT · NOT ISSUED");
+    expect(preview).toContain("Not signed: a preview of the draft.");
+    expect(preview).not.toContain("Signed electronically");
+  });
+
   it("writes no raw floating-point numbers and no bare compared value of 0", () => {
     const t = words(html);
     expect(t).not.toMatch(/\d\.\d{6,}e-\d/);
