@@ -59,9 +59,9 @@ function SpecimenData({ test, zone }: { test: CertificateTest; zone: string }) {
           {s ? <><dt>Effective stress</dt><dd data-testid="specimen-effective-stress">{n(s.effectiveStressKPa, "kPa")}</dd></> : null}
           {s ? <><dt>Hydraulic gradient</dt><dd data-testid="specimen-gradient">{s.gradient === null ? "not recorded" : conditionValue(s.gradient, "", 0).trim()} <span className="doc-muted">(mean over the reported intervals)</span></dd></> : null}
           {s ? <><dt>Permeant</dt><dd data-testid="specimen-permeant">{s.permeant}</dd></> : null}
-          {d ? <><dt>Mounted in the cell</dt><dd data-testid="test-mounted">{isoDateTime(d.mountedAt, zone)}</dd></> : null}
-          {d ? <><dt>Permeation started</dt><dd data-testid="test-permeation-start">{isoDateTime(d.permeationStartedAt, zone)}</dd></> : null}
-          {d ? <><dt>Permeation ended</dt><dd data-testid="test-permeation-end">{isoDateTime(d.permeationEndedAt, zone)}</dd></> : null}
+          {d ? <><dt>Mounted in the cell</dt><dd className="nowrap" data-testid="test-mounted">{isoDateTime(d.mountedAt, zone)}</dd></> : null}
+          {d ? <><dt>Permeation started</dt><dd className="nowrap" data-testid="test-permeation-start">{isoDateTime(d.permeationStartedAt, zone)}</dd></> : null}
+          {d ? <><dt>Permeation ended</dt><dd className="nowrap" data-testid="test-permeation-end">{isoDateTime(d.permeationEndedAt, zone)}</dd></> : null}
         </dl>
       </div>
     </div>
