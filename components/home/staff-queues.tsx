@@ -45,6 +45,34 @@ export function StaffQueues({ queues, now, zone = "UTC" }: { queues: HomeQueues;
           </table>
         </QueueCard>
       )}
+      {queues.indexTestsWaiting && (
+        <QueueCard title="Index tests waiting" count={queues.indexTestsWaiting.length} empty="No roll is waiting for an index test its specification asks for." testId="queue-index-tests">
+          <table className="list">
+            <thead><tr><th>Roll</th><th>Project</th><th>Tests the specification asks for</th></tr></thead>
+            <tbody>
+              {queues.indexTestsWaiting.map((r) => (
+                <tr key={r.rollLabNumber} data-roll={r.rollLabNumber}>
+                  <td><Link className="mono" href={`/samples/rolls/${r.rollLabNumber}`}>{r.rollLabNumber}</Link><div className="muted">{r.rollNumber}</div></td>
+                  <td>{r.projectName}</td>
+                  <td>{r.methods.map((m, i) => <span key={m.code}>{i > 0 && ", "}<Link href={`/index-tests/new/${r.rollLabNumber}/${m.code}`}>{m.title}</Link></span>)}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </QueueCard>
+      )}
+      {queues.indexTestsToReview && (
+        <QueueCard title="Index tests to review" count={queues.indexTestsToReview.length} empty="No index test is waiting for review." testId="queue-index-reviews">
+          <table className="list">
+            <thead><tr><th>Test</th><th>Roll</th><th>Technician</th><th>Waiting</th></tr></thead>
+            <tbody>
+              {queues.indexTestsToReview.map((t) => (
+                <tr key={t.id}><td><Link href={`/index-tests/${t.id}`}>ASTM {t.methodCode}</Link></td><td className="mono">{t.roll.labNumber}</td><td>{t.performedBy.name}</td><td>{formatAge(t.testedAt, now)}</td></tr>
+              ))}
+            </tbody>
+          </table>
+        </QueueCard>
+      )}
       {queues.runs && (
         <QueueCard title="Runs in progress" count={queues.runs.length} empty="No run is in progress." testId="queue-runs">
           <table className="list">

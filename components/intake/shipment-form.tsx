@@ -20,7 +20,7 @@ type FormInput = z.input<typeof logShipmentSchema>;
 type FormOutput = z.output<typeof logShipmentSchema>;
 type Options = { clients: Array<{ id: string; name: string; projects: Array<{ id: string; name: string; code: string }> }>; locations: Array<{ id: string; code: string; name: string }> };
 
-const EMPTY_ROLL = { rollNumber: "", lotNumber: "", product: "", manufacturer: "", sampleLengthMm: "", sampleWidthMm: "", machineDirectionMarked: false, conditionNotes: "" };
+const EMPTY_ROLL = { rollNumber: "", lotNumber: "", product: "", manufacturer: "", sampleLengthMm: "", sampleWidthMm: "", machineDirectionMarked: false, conditionNotes: "", deliveredLengthM: "", deliveredWidthM: "" };
 const COLUMN_TITLES = Object.values(ROLL_COLUMN_TITLES);
 
 /** Logging a shipment: its details, then its rolls typed in or pasted from a spreadsheet, checked row by row. */
@@ -127,6 +127,8 @@ export function ShipmentForm({ options, zone }: { options: Options; zone: string
                       <td><input aria-label={`Row ${index + 1} width`} inputMode="decimal" className={styles.narrow} {...register(`rolls.${index}.sampleWidthMm`)} /></td>
                       <td><input type="checkbox" aria-label={`Row ${index + 1} machine direction marked`} {...register(`rolls.${index}.machineDirectionMarked`)} /></td>
                       <td><input aria-label={`Row ${index + 1} condition`} placeholder="as the shipment" {...register(`rolls.${index}.conditionNotes`)} /></td>
+                      <td><input aria-label={`Row ${index + 1} roll length`} inputMode="decimal" className={styles.narrow} {...register(`rolls.${index}.deliveredLengthM`)} /></td>
+                      <td><input aria-label={`Row ${index + 1} roll width`} inputMode="decimal" className={styles.narrow} {...register(`rolls.${index}.deliveredWidthM`)} /></td>
                       <td>
                         <button type="button" className="button button-quiet" onClick={() => rolls.remove(index)} aria-label={`Remove row ${index + 1}`}>×</button>
                         {messages.length > 0 && <div className={`field-error ${styles.rowMessages}`} data-testid={`row-${index + 1}-errors`}>{messages.map((m) => <div key={m}><LabNumberLinks text={m} /></div>)}</div>}

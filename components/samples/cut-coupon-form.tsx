@@ -12,6 +12,7 @@ import { Field } from "@/components/ui/field";
 import { LabNumberLinks } from "@/components/intake/lab-number-links";
 import { nowToTheMinute } from "@/components/ui/now-for-input";
 import { ZonedDateTimeInput } from "@/components/ui/zoned-date-time-input";
+import { INDEX_METHODS } from "@/lib/index-tests/index-test-methods";
 
 type Locations = Array<{ id: string; code: string; name: string }>;
 
@@ -20,7 +21,7 @@ export function CutCouponForm({ rollId, rollVersion, locations, zone }: { rollId
   const [notice, setNotice] = useState<{ ok: boolean; text: string } | null>(null);
   const form = useForm<z.input<typeof cutCouponSchema>, unknown, z.output<typeof cutCouponSchema>>({
     resolver: zodResolver(cutCouponSchema),
-    defaultValues: { rollId, rollVersion, positionInSample: "", lengthMm: "", widthMm: "", cutAt: nowToTheMinute(), storageLocationId: locations[0]?.id ?? "" },
+    defaultValues: { rollId, rollVersion, positionInSample: "", lengthMm: "", widthMm: "", cutAt: nowToTheMinute(), storageLocationId: locations[0]?.id ?? "", intendedMethodCode: "" },
   });
   const { register, handleSubmit, formState, control } = form;
   const onSubmit = handleSubmit(async (values) => {
@@ -38,6 +39,12 @@ export function CutCouponForm({ rollId, rollVersion, locations, zone }: { rollId
       <Field label="Cut at" error={formState.errors.cutAt?.message}><ZonedDateTimeInput control={control} name="cutAt" zone={zone} /></Field>
       <Field label="Kept at" error={formState.errors.storageLocationId?.message}>
         <select {...register("storageLocationId")}>{locations.map((l) => <option key={l.id} value={l.id}>{l.code} · {l.name}</option>)}</select>
+      </Field>
+      <Field label="Cut for" hint="An index test done on the coupon itself (strips, squares), or specimens for a hydraulic test." error={formState.errors.intendedMethodCode?.message}>
+        <select {...register("intendedMethodCode")}>
+          <option value="">Specimens for a hydraulic test</option>
+          {Object.values(INDEX_METHODS).map((m) => <option key={m.code} value={m.code}>{m.title}: {m.couponWhat}</option>)}
+        </select>
       </Field>
       <button className="button" type="submit" disabled={formState.isSubmitting}>Record coupon</button>
     </form>

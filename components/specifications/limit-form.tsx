@@ -21,8 +21,12 @@ type FormValues = z.input<typeof setSpecificationLimitSchema>;
 // The usual sense of each property's limit (GRI-GCL3 as cited in shared/DOMAIN.md); the form only suggests it.
 const USUAL_DIRECTION: Record<TestProperty, "MAXIMUM" | "MINIMUM"> = {
   INDEX_FLUX: "MAXIMUM", HYDRAULIC_CONDUCTIVITY: "MAXIMUM", SWELL_INDEX: "MINIMUM", FLUID_LOSS: "MAXIMUM", BENTONITE_MASS_PER_AREA: "MINIMUM", MOISTURE_CONTENT: "MAXIMUM",
+  GCL_MASS_PER_AREA: "MINIMUM", TENSILE_STRENGTH: "MINIMUM", PEEL_STRENGTH: "MINIMUM",
 };
-const USUAL_METHOD: Partial<Record<TestProperty, string>> = { INDEX_FLUX: "D5887", HYDRAULIC_CONDUCTIVITY: "D5084" };
+const USUAL_METHOD: Partial<Record<TestProperty, string>> = {
+  INDEX_FLUX: "D5887", HYDRAULIC_CONDUCTIVITY: "D5084", SWELL_INDEX: "D5890", FLUID_LOSS: "D5891", BENTONITE_MASS_PER_AREA: "D5993",
+  GCL_MASS_PER_AREA: "D5993", MOISTURE_CONTENT: "D2216", TENSILE_STRENGTH: "D6768", PEEL_STRENGTH: "D6496",
+};
 
 function valuesFor(specificationId: string, property: TestProperty, limits: LimitRow[]): FormValues {
   const existing = limits.find((l) => l.property === property);
@@ -30,10 +34,11 @@ function valuesFor(specificationId: string, property: TestProperty, limits: Limi
     return {
       specificationId, limitId: existing.id, property, limitText: existing.limitText, unit: existing.unit, direction: existing.direction,
       significantDigits: String(existing.significantDigits), conformanceMethod: existing.conformanceMethod, testMethodCode: existing.testMethodCode ?? "",
+      testingFrequencyAreaM2: existing.testingFrequencyAreaM2 === null ? "" : String(existing.testingFrequencyAreaM2), testingFrequencyPerLot: existing.testingFrequencyPerLot,
     };
   return {
     specificationId, limitId: "", property, limitText: "", unit: PROPERTY_UNITS[property][0]!, direction: USUAL_DIRECTION[property],
-    significantDigits: "", conformanceMethod: "ROUNDING", testMethodCode: USUAL_METHOD[property] ?? "",
+    significantDigits: "", conformanceMethod: "ROUNDING", testMethodCode: USUAL_METHOD[property] ?? "", testingFrequencyAreaM2: "", testingFrequencyPerLot: false,
   };
 }
 
@@ -97,6 +102,14 @@ export function LimitForm({ specificationId, limits }: { specificationId: string
         </Field>
         <Field label="Test method" hint="e.g. D5887; optional." error={errors.testMethodCode?.message}>
           <input className="mono" autoComplete="off" {...register("testMethodCode")} />
+        </Field>
+      </div>
+      <div className={styles.formRow}>
+        <Field label="Testing frequency, one test per" hint="Square metres delivered (e.g. 4000); blank: every roll." error={errors.testingFrequencyAreaM2?.message}>
+          <input inputMode="decimal" autoComplete="off" {...register("testingFrequencyAreaM2")} />
+        </Field>
+        <Field label="Also one test per lot" error={errors.testingFrequencyPerLot?.message}>
+          <input type="checkbox" {...register("testingFrequencyPerLot")} />
         </Field>
       </div>
       <p className="hint">Certificates already issued keep the limit they stated; a change applies to certificates issued from now on.</p>

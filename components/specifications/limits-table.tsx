@@ -1,4 +1,5 @@
 import { formatUnit } from "@/lib/results/format-result";
+import { describeTestingFrequency } from "@/lib/conformance/sampling-coverage";
 import { TEST_PROPERTY_LABELS, type SpecificationLimitRow } from "@/lib/results/property-units";
 import { CONFORMANCE_METHOD_LABELS, LIMIT_DIRECTION_LABELS } from "@/lib/validation/specifications";
 import styles from "./specifications.module.css";
@@ -13,7 +14,7 @@ export function LimitsTable({ limits, testId }: { limits: LimitRow[]; testId?: s
     <div className="table-wrap">
       <table className="list" data-testid={testId}>
         <thead>
-          <tr><th>Property</th><th>Limit</th><th>Unit</th><th>Direction</th><th>Sig. digits</th><th>Conformance</th><th>Test method</th></tr>
+          <tr><th>Property</th><th>Limit</th><th>Unit</th><th>Direction</th><th>Sig. digits</th><th>Conformance</th><th>Test method</th><th>Testing frequency</th></tr>
         </thead>
         <tbody>
           {limits.map((l) => (
@@ -25,6 +26,7 @@ export function LimitsTable({ limits, testId }: { limits: LimitRow[]; testId?: s
               <td>{l.significantDigits}</td>
               <td>{CONFORMANCE_METHOD_LABELS[l.conformanceMethod]}</td>
               <td>{formatTestMethod(l.testMethodCode)}</td>
+              <td>{describeTestingFrequency(l.testingFrequencyAreaM2 ?? null, l.testingFrequencyPerLot ?? false)}</td>
             </tr>
           ))}
         </tbody>

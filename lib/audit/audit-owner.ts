@@ -48,6 +48,10 @@ const OWNERS: Record<string, (row: Row) => AuditOwner> = {
   SpecificationLimit: (row) => partOf("specification", "specificationId", row, `limit on ${property(row.property)}`),
   ShipmentPhoto: (row) => partOf("shipment", "shipmentId", row, `photo ${text(row.fileName)}`),
   IndexTest: (row) => partOf("roll", "rollId", row, `index test: ${property(row.property)}`),
+  // Parts of an index test: the roll is found through the test (no lab number of its own).
+  IndexTestResult: (row) => ({ record: null, part: `index test result: ${property(row.property)}`, keys: [] }),
+  IndexTestReview: (row) => ({ record: null, part: `index test review: ${words(row.decision)}`, keys: [] }),
+  IndexTestEquipment: (row) => ({ record: null, part: `instrument used in an index test (${text(row.role)})`, keys: [] }),
   SpecimenChecklistItem: (row) => partOf("specimen", "specimenId", row, `preparation check “${text(row.question || row.itemKey)}”`),
   Calibration: (row) => partOf("equipment", "equipmentId", row, `calibration ${text(row.reference)}`.trim()),
   CalibrationOverride: (row) => partOf("equipment", "equipmentId", row, "calibration override"),

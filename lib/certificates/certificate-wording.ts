@@ -42,7 +42,7 @@ export function valueWithUnit(display: string, unit: string): string {
   return units.some((u) => text.endsWith(` ${u}`)) ? text : `${text} ${prettyUnit(unit)}`;
 }
 
-const DISPLAY_UNITS = ["m³/m²/s", "cm³/cm²/s", "m/s", "cm/s", "mL/2 g", "mL", "kg/m²", "g/m²", "%"];
+const DISPLAY_UNITS = ["m³/m²/s", "cm³/cm²/s", "m/s", "cm/s", "mL/2 g", "mL", "kg/m²", "g/m²", "%", "kN/m", "N/m"];
 
 /** An uncertainty as printed under a heading that already says "(k = 2)": the repeated coverage factor is dropped. */
 export function withoutCoverageFactor(uncertainty: string): string {

@@ -11,6 +11,7 @@ import { readYesNo, YES_NO_HINT } from "./yes-no";
 export const ROLL_COLUMN_TITLES: Record<(typeof ROLL_PASTE_COLUMNS)[number]["key"], string> = {
   rollNumber: "Roll number", lotNumber: "Lot number", product: "Product", manufacturer: "Manufacturer",
   sampleLengthMm: "Length (mm)", sampleWidthMm: "Width (mm)", machineDirectionMarked: "MD marked", conditionNotes: "Condition",
+  deliveredLengthM: "Roll length (m)", deliveredWidthM: "Roll width (m)",
 };
 
 export type PastedRoll = Record<string, string | boolean> & { machineDirectionMarked: boolean };

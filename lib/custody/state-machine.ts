@@ -24,8 +24,10 @@ const ROLL: Table = {
   DISPOSED: {},
 };
 
+// A coupon cut for an index test (a tensile strip, a mass-per-area square) is itself the test item: TESTED.
 const COUPON: Table = {
-  CUT: { MOVED: "CUT", PREPARED: "CUT", RETAINED: "RETAINED" },
+  CUT: { MOVED: "CUT", PREPARED: "CUT", TESTED: "TESTED", RETAINED: "RETAINED" },
+  TESTED: { MOVED: "TESTED", RETAINED: "RETAINED" },
   RETAINED: { MOVED: "RETAINED", DISPOSED: "DISPOSED" },
   DISPOSED: {},
 };

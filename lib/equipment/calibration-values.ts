@@ -8,14 +8,21 @@
 import { z } from "zod";
 
 export type UncertaintyQuantity = "volumeMl" | "pressureKPa" | "temperatureC" | "thicknessMm" | "timeS";
+/** What an instrument measures: the hydraulic quantities, and the masses and forces of index tests. */
+export type InstrumentQuantity = UncertaintyQuantity | "massG" | "forceN";
 
 /** What each kind of instrument measures, for its standard uncertainty. */
-export const UNCERTAINTY_BY_KIND: Readonly<Record<string, { quantity: UncertaintyQuantity; unit: string; what: string }>> = {
+export const UNCERTAINTY_BY_KIND: Readonly<Record<string, { quantity: InstrumentQuantity; unit: string; what: string }>> = {
   BURETTE_PANEL: { quantity: "volumeMl", unit: "mL", what: "one burette reading (volume)" },
   PRESSURE_TRANSDUCER: { quantity: "pressureKPa", unit: "kPa", what: "the differential pressure" },
   THERMOMETER: { quantity: "temperatureC", unit: "°C", what: "the permeant temperature" },
   THICKNESS_GAUGE: { quantity: "thicknessMm", unit: "mm", what: "the bentonite layer thickness" },
   TIMER: { quantity: "timeS", unit: "s", what: "one time stamp" },
+  BALANCE: { quantity: "massG", unit: "g", what: "one weighing" },
+  OVEN: { quantity: "temperatureC", unit: "°C", what: "the oven temperature" },
+  GRADUATED_CYLINDER: { quantity: "volumeMl", unit: "mL", what: "one volume reading" },
+  FILTER_PRESS: { quantity: "pressureKPa", unit: "kPa", what: "the filter-press pressure" },
+  LOAD_CELL: { quantity: "forceN", unit: "N", what: "one force reading" },
 };
 
 const num = z.number().refine(Number.isFinite);

@@ -33,8 +33,11 @@ export function declareUncertainties(instruments: readonly RunInstrument[], sett
   for (const i of instruments) {
     const measures = UNCERTAINTY_BY_KIND[i.kind];
     const u = readCalibrationValues(i.values).standardUncertainty;
-    if (!measures || u === undefined || found.has(measures.quantity)) continue;
-    found.set(measures.quantity, { quantity: measures.quantity, label: QUANTITY_LABELS[measures.quantity].label, standardUncertainty: u, unit: measures.unit, source: `${i.assetTag} calibration${i.calibrationReference ? ` ${i.calibrationReference}` : ""}` });
+    // A run's budget takes the hydraulic quantities; masses and forces belong to index tests.
+    if (!measures || !(measures.quantity in QUANTITY_LABELS) || u === undefined) continue;
+    const quantity = measures.quantity as UncertaintyQuantity;
+    if (found.has(quantity)) continue;
+    found.set(quantity, { quantity, label: QUANTITY_LABELS[quantity].label, standardUncertainty: u, unit: measures.unit, source: `${i.assetTag} calibration${i.calibrationReference ? ` ${i.calibrationReference}` : ""}` });
   }
   const labDefault = (quantity: UncertaintyQuantityKey, value: number | null) => {
     if (found.has(quantity as UncertaintyQuantity) || value === null) return;

@@ -5,6 +5,7 @@ export const RECEIPT_FIELD_LABELS: Record<string, string> = {
   deliveredBy: "Delivered by", receivedAt: "Received at", conditionNotes: "Condition on arrival",
   rollNumber: "Roll number", lotNumber: "Lot number", product: "Product", manufacturer: "Manufacturer",
   sampleLengthMm: "Sample length (mm)", sampleWidthMm: "Sample width (mm)", machineDirectionMarked: "Machine direction marked",
+  deliveredLengthM: "Delivered roll length (m)", deliveredWidthM: "Delivered roll width (m)",
 };
 
 /** A corrected value as stored (text) for print: times in the lab's zone, yes/no for flags, "—" for blank. */

@@ -29,6 +29,9 @@ export const PROPERTY_FORMATS: Record<TestProperty, { significantDigits: number;
   FLUID_LOSS: { significantDigits: 2, units: { SI: "mL", CENTIMETRE: "mL" } },
   BENTONITE_MASS_PER_AREA: { significantDigits: 3, units: { SI: "kg/m2", CENTIMETRE: "kg/m2" } },
   MOISTURE_CONTENT: { significantDigits: 3, units: { SI: "%", CENTIMETRE: "%" } },
+  GCL_MASS_PER_AREA: { significantDigits: 3, units: { SI: "kg/m2", CENTIMETRE: "kg/m2" } },
+  TENSILE_STRENGTH: { significantDigits: 2, units: { SI: "kN/m", CENTIMETRE: "kN/m" } },
+  PEEL_STRENGTH: { significantDigits: 3, units: { SI: "N/m", CENTIMETRE: "N/m" } },
 };
 
 const D = Decimal.clone({ precision: 60 });

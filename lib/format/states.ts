@@ -13,4 +13,6 @@ export const RUN_STATE_LABELS: Record<string, string> = {
 export const EQUIPMENT_KIND_LABELS: Record<string, string> = {
   PERMEAMETER_CELL: "Permeameter cell", BURETTE_PANEL: "Burette panel", PRESSURE_TRANSDUCER: "Pressure transducer", THERMOMETER: "Thermometer",
   THICKNESS_GAUGE: "Thickness gauge", TIMER: "Timer or logger clock",
+  BALANCE: "Balance", OVEN: "Drying oven", GRADUATED_CYLINDER: "Graduated cylinder", FILTER_PRESS: "Filter press",
+  TENSILE_FRAME: "Tensile frame", LOAD_CELL: "Load cell",
 };

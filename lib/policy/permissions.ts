@@ -27,8 +27,8 @@ export const ACTIONS = [
   "equipment.manage", // register equipment and record calibrations
   "calibration.override", // let a run use equipment that is due, with a recorded reason
   "run.view",
-  "run.operate", // assign cells, record stages and readings, terminate, submit
-  "run.review", // approve a run or return it to the technician
+  "run.operate", // assign cells, record stages and readings, terminate, submit; record index tests
+  "run.review", // approve a run or return it to the technician; the same for index tests
   "certificate.view",
   "certificate.issue", // sign and issue, or revise, a certificate
   "specification.manage",

@@ -7,7 +7,10 @@ import Decimal from "decimal.js";
 import { CM_M } from "../hydraulics";
 
 // Mirrors the TestProperty enum of prisma/schema.prisma (lib/ may not import Prisma).
-export const TEST_PROPERTIES = ["INDEX_FLUX", "HYDRAULIC_CONDUCTIVITY", "SWELL_INDEX", "FLUID_LOSS", "BENTONITE_MASS_PER_AREA", "MOISTURE_CONTENT"] as const;
+export const TEST_PROPERTIES = [
+  "INDEX_FLUX", "HYDRAULIC_CONDUCTIVITY", "SWELL_INDEX", "FLUID_LOSS", "BENTONITE_MASS_PER_AREA", "MOISTURE_CONTENT",
+  "GCL_MASS_PER_AREA", "TENSILE_STRENGTH", "PEEL_STRENGTH",
+] as const;
 export type TestProperty = (typeof TEST_PROPERTIES)[number];
 
 export const TEST_PROPERTY_LABELS: Record<TestProperty, string> = {
@@ -17,6 +20,9 @@ export const TEST_PROPERTY_LABELS: Record<TestProperty, string> = {
   FLUID_LOSS: "Bentonite fluid loss",
   BENTONITE_MASS_PER_AREA: "Bentonite mass per unit area",
   MOISTURE_CONTENT: "Moisture content",
+  GCL_MASS_PER_AREA: "GCL mass per unit area",
+  TENSILE_STRENGTH: "Tensile strength",
+  PEEL_STRENGTH: "Peel strength",
 };
 
 /** A unit's kind and its size in the kind's base unit, as an exact decimal string. */
@@ -33,6 +39,8 @@ const UNITS: Record<string, UnitDefinition> = {
   "kg/m2": { kind: "mass-per-area", factor: "1" },
   "g/m2": { kind: "mass-per-area", factor: "0.001" },
   "%": { kind: "fraction", factor: "1" },
+  "kN/m": { kind: "force-per-width", factor: "1" },
+  "N/m": { kind: "force-per-width", factor: "0.001" },
 };
 
 /** The units a limit of each property may be stated in; the first is the one results are stored in. */
@@ -43,6 +51,9 @@ export const PROPERTY_UNITS: Record<TestProperty, readonly string[]> = {
   FLUID_LOSS: ["mL"],
   BENTONITE_MASS_PER_AREA: ["kg/m2", "g/m2"],
   MOISTURE_CONTENT: ["%"],
+  GCL_MASS_PER_AREA: ["kg/m2", "g/m2"],
+  TENSILE_STRENGTH: ["kN/m", "N/m"],
+  PEEL_STRENGTH: ["N/m", "kN/m"],
 };
 
 const D = Decimal.clone({ precision: 60 });
@@ -88,4 +99,8 @@ export type SpecificationLimitRow = {
   significantDigits: number;
   conformanceMethod: "ABSOLUTE" | "ROUNDING";
   testMethodCode: string | null;
+  /** One test per so many m² delivered; null: no area rule. */
+  testingFrequencyAreaM2?: number | null;
+  /** One test per lot as well. */
+  testingFrequencyPerLot?: boolean;
 };

@@ -4,7 +4,8 @@ import { optionalMeasured, pastDateTime, reasonSchema, requiredText, versionSche
 import { futureDate } from "./record-dates";
 
 // Mirrors the EquipmentKind and EquipmentStatus enums of prisma/schema.prisma (lib/ may not import Prisma).
-export const EQUIPMENT_KINDS = ["PERMEAMETER_CELL", "BURETTE_PANEL", "PRESSURE_TRANSDUCER", "THERMOMETER", "THICKNESS_GAUGE", "TIMER"] as const;
+export const EQUIPMENT_KINDS = ["PERMEAMETER_CELL", "BURETTE_PANEL", "PRESSURE_TRANSDUCER", "THERMOMETER", "THICKNESS_GAUGE", "TIMER",
+  "BALANCE", "OVEN", "GRADUATED_CYLINDER", "FILTER_PRESS", "TENSILE_FRAME", "LOAD_CELL"] as const;
 export type EquipmentKind = (typeof EQUIPMENT_KINDS)[number];
 export const EQUIPMENT_STATUSES = ["IN_SERVICE", "OUT_OF_SERVICE", "RETIRED"] as const;
 export type EquipmentStatus = (typeof EQUIPMENT_STATUSES)[number];

@@ -13,6 +13,9 @@ export const rollEntrySchema = z.object({
   // Only the words readYesNo knows; anything else is refused, never read as "marked".
   machineDirectionMarked: z.preprocess((v) => readYesNo(v) ?? v, z.boolean({ message: `Write whether the machine direction is marked as ${YES_NO_HINT}.` })),
   conditionNotes: z.string().trim().max(500, "Keep the roll's condition to 500 characters.").default(""),
+  // The delivered roll's size, for sampling coverage (one test per so many m² delivered).
+  deliveredLengthM: optionalMeasured("the delivered roll length (m)", { positive: true, max: 10_000 }),
+  deliveredWidthM: optionalMeasured("the delivered roll width (m)", { positive: true, max: 100 }),
 });
 export type RollEntry = z.output<typeof rollEntrySchema>;
 
@@ -26,6 +29,8 @@ export const ROLL_PASTE_COLUMNS = [
   { key: "sampleWidthMm", labels: ["width", "width mm", "sample width", "sample width mm"] },
   { key: "machineDirectionMarked", labels: ["md", "md marked", "machine direction", "machine direction marked"] },
   { key: "conditionNotes", labels: ["condition", "condition on arrival", "roll condition", "remarks"] },
+  { key: "deliveredLengthM", labels: ["roll length", "roll length m", "delivered length", "delivered length m"] },
+  { key: "deliveredWidthM", labels: ["roll width", "roll width m", "delivered width", "delivered width m"] },
 ] as const;
 
 export const shipmentDetailsSchema = z.object({
@@ -46,7 +51,7 @@ export const acknowledgeShipmentSchema = z.object({ shipmentId: z.string().min(1
 
 /** A change to an acknowledged receipt: one field, its new value and why. */
 export const SHIPMENT_CORRECTABLE_FIELDS = ["deliveredBy", "receivedAt", "conditionNotes"] as const;
-export const ROLL_CORRECTABLE_FIELDS = ["rollNumber", "lotNumber", "product", "manufacturer", "sampleLengthMm", "sampleWidthMm", "machineDirectionMarked", "conditionNotes"] as const;
+export const ROLL_CORRECTABLE_FIELDS = ["rollNumber", "lotNumber", "product", "manufacturer", "sampleLengthMm", "sampleWidthMm", "machineDirectionMarked", "conditionNotes", "deliveredLengthM", "deliveredWidthM"] as const;
 
 export const correctReceiptSchema = z.object({
   target: z.enum(["shipment", "roll"]),

@@ -10,6 +10,8 @@ export const cutCouponSchema = z.object({
   widthMm: measured("the coupon width (mm)", { positive: true, max: 10_000 }),
   cutAt: pastDateTime("when it was cut"),
   storageLocationId: z.string().min(1, "Choose where the coupon is kept."),
+  // The index test the coupon is cut for (tensile strips, mass-per-area squares); blank: specimens for a hydraulic test.
+  intendedMethodCode: z.preprocess((v) => (v === "" || v === null ? undefined : v), z.enum(["D5890", "D5891", "D5993", "D2216", "D6768", "D6496"], { message: "Choose an index test, or none." }).optional()),
 });
 export type CutCouponInput = z.input<typeof cutCouponSchema>;
 

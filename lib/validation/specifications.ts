@@ -68,6 +68,16 @@ export const setSpecificationLimitSchema = z
       blankToUndefined,
       z.string().trim().max(40, "Keep the method code to 40 characters.").regex(/^[A-Za-z0-9 .\-/]+$/, "Use letters, digits, spaces, dots, dashes or slashes, e.g. D5887.").optional(),
     ),
+    // Sampling frequency: one test per so many m² delivered (blank: no area rule), and/or one per lot.
+    testingFrequencyAreaM2: z.preprocess(
+      (v) => (typeof v === "string" ? (v.trim() === "" ? undefined : v.trim().replace(",", ".")) : v === null ? undefined : v),
+      z.coerce.number({ message: "Enter the testing frequency as square metres per test, e.g. 4000." })
+        .refine(Number.isFinite, "Enter the testing frequency as square metres per test, e.g. 4000.")
+        .refine((v) => v > 0, "The testing frequency must be more than 0 m² per test; leave it blank when the specification sets none.")
+        .refine((v) => v <= 10_000_000, "The testing frequency must be at most 10,000,000 m² per test.")
+        .optional(),
+    ),
+    testingFrequencyPerLot: z.preprocess((v) => v === true || v === "true" || v === "on", z.boolean()).default(false),
   })
   .superRefine((v, ctx) => {
     if (!PROPERTY_UNITS[v.property].includes(v.unit))

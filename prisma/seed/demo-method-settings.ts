@@ -9,6 +9,7 @@ import { DEMO_LAB_DECLARED_UNCERTAINTIES as U } from "./demo-uncertainties";
 export async function seedDemoMethodSettings(tx: Tx, adminId: string, createdAt: Date): Promise<Record<string, string>> {
   const ids: Record<string, string> = {};
   for (const [code, definition] of Object.entries(METHOD_SETTINGS)) {
+    if (definition.family !== "hydraulic") continue;
     const first = await tx.methodSettingsVersion.findFirst({ where: { methodCode: code }, orderBy: { version: "desc" } });
     const settings = { ...readStoredSettings(definition, first?.settings ?? {}), uDieDiameterMm: U.diameterMm, uThicknessMm: U.thicknessMm, uTimeS: U.timeS };
     const created = await tx.methodSettingsVersion.create({

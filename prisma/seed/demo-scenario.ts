@@ -6,7 +6,8 @@ import type { Tx } from "@/lib/server/db/transaction";
 import { allocateLabNumber } from "@/lib/server/db/allocate-lab-number";
 import { hashPassword } from "@/lib/server/auth/password";
 import { DEMO_CLIENTS, DEMO_LAB, DEMO_PASSWORD, DEMO_STAFF } from "./demo-people";
-import { DEMO_SPEC_LIMITS } from "./demo-method-defaults";
+import { DEMO_SPEC_LIMITS, demoSpecLimits } from "./demo-method-defaults";
+import { createIndexEquipment, DEMO_OBSERVATIONS as OBS, demoIndexTester } from "./demo-index-tests";
 import { makeDemoReadings } from "./demo-readings";
 import { DEMO_LAB_DECLARED_UNCERTAINTIES as U } from "./demo-uncertainties";
 import { seedDemoMethodSettings } from "./demo-method-settings";
@@ -44,7 +45,7 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
       const project = await tx.project.create({ data: { ...p, clientOrganizationId: org.id } });
       projects[p.code] = project.id;
       await tx.specification.create({
-        data: { name: `${p.code} liner specification`, revision: "Rev. 1, 2026-03", projectId: project.id, limits: { create: DEMO_SPEC_LIMITS.map((l) => ({ ...l })) } },
+        data: { name: `${p.code} liner specification`, revision: "Rev. 1, 2026-03", projectId: project.id, limits: { create: demoSpecLimits(p.code) } },
       });
     }
   }
@@ -76,13 +77,14 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
     });
   };
   // Logged as received, then stored a few minutes later; `condition` is the roll's own remark, if any.
-  const roll = async (shipment: { id: string; labNumber: string; projectId: string; receivedAt: Date }, n: number, location: string, condition = "") => {
+  // `size`: the delivered roll the sample stands for, length × width in m (sampling coverage counts its area).
+  const roll = async (shipment: { id: string; labNumber: string; projectId: string; receivedAt: Date }, n: number, location: string, condition = "", size: [number, number] = [45, 5.2]) => {
     const created = await tx.roll.create({
       data: {
         labNumber: await allocateLabNumber(tx, "roll", shipment.receivedAt),
         shipmentId: shipment.id, projectId: shipment.projectId, rollNumber: `R-${4100 + n}`, lotNumber: `L${2260 + Math.floor(n / 3)}`,
         product: "Needle-punched GCL, powdered sodium bentonite, nominal 4.8 kg/m²", manufacturer: "Orrin Textile Works (invented)",
-        sampleLengthMm: 1000, sampleWidthMm: 1200, machineDirectionMarked: n % 2 === 0, conditionNotes: condition, state: "STORED", storageLocationId: locations[location]!,
+        sampleLengthMm: 1000, sampleWidthMm: 1200, deliveredLengthM: size[0], deliveredWidthM: size[1], machineDirectionMarked: n % 2 === 0, conditionNotes: condition, state: "STORED", storageLocationId: locations[location]!,
       },
     });
     const item: Item = { kind: "roll", id: created.id };
@@ -105,19 +107,23 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
   await roll(s2, 4, "RACK-A1");
   await roll(s2, 5, "RACK-A1");
   const s3 = await ship("OMC-TPB", "OMC", 9, true, "Courier parcel 58-221 (invented)", "Samples cut on site, rolled on cores, labelled.");
-  const cutRoll = await roll(s3, 6, "RACK-A2");
-  const preparedRoll = await roll(s3, 7, "RACK-A2");
-  await roll(s3, 8, "RACK-A2");
+  const cutRoll = await roll(s3, 6, "RACK-A2", "", [60, 5.3]);
+  const preparedRoll = await roll(s3, 7, "RACK-A2", "", [60, 5.3]);
+  await roll(s3, 8, "RACK-A2", "", [60, 5.3]);
   const s4 = await ship("FVE-SP", "FVE", 0.1, false, "Fennick & Vane site crew", "One roll sample, damp on one edge; noted to client.");
   await roll(s4, 9, "RACK-A1", "Damp along one long edge.");
 
   // Coupons and specimens along the chain: each cut is a step of its roll, each specimen a step of its coupon.
-  const cutCoupon = async (r: Awaited<ReturnType<typeof roll>>, daysAgo: number, tech: string) => {
+  // `forMethod`: an index test done on the coupon itself (tensile strips, mass-per-area squares).
+  const cutCoupon = async (r: Awaited<ReturnType<typeof roll>>, daysAgo: number, tech: string, forMethod?: { code: string; position: string; lengthMm: number; widthMm: number }) => {
     const cutAt = ago(daysAgo);
     const coupon = await tx.coupon.create({
-      data: { labNumber: await allocateLabNumber(tx, "coupon", cutAt), rollId: r.id, positionInSample: "Centre, 300 mm from leading edge", lengthMm: 300, widthMm: 300, cutById: tech, cutAt, storageLocationId: locations["HUMID-1"]! },
+      data: {
+        labNumber: await allocateLabNumber(tx, "coupon", cutAt), rollId: r.id, positionInSample: forMethod?.position ?? "Centre, 300 mm from leading edge",
+        lengthMm: forMethod?.lengthMm ?? 300, widthMm: forMethod?.widthMm ?? 300, intendedMethodCode: forMethod?.code ?? null, cutById: tech, cutAt, storageLocationId: locations["HUMID-1"]!,
+      },
     });
-    await moveRoll(r, "CUT", r.state === "STORED" ? "CUT" : r.state, tech, cutAt, `Coupon ${coupon.labNumber}`);
+    await moveRoll(r, "CUT", r.state === "STORED" ? "CUT" : r.state, tech, cutAt, forMethod ? `Coupon ${coupon.labNumber} for ASTM ${forMethod.code}` : `Coupon ${coupon.labNumber}`);
     await custody({ kind: "coupon", id: coupon.id }, "CUT", null, "CUT", tech, cutAt, { toLocationId: locations["HUMID-1"]!, note: `From roll ${r.labNumber}` });
     return coupon;
   };
@@ -149,6 +155,19 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
   const reviewSpecimen = await prepare(reviewCoupon, 12.2, users.technician2!);
   const secondReviewSpecimen = await prepare(reviewCoupon, 12.1, users.technician!);
   const testingSpecimen = await prepare(await cutCoupon(testingRoll, 6.5, users.technician!), 6.2, users.technician!);
+  // Coupons for index tests done on the coupon itself, cut while each roll was still being cut (its ledger
+  // keeps one order of events).
+  const strips = { code: "D6768", position: "Across the width, machine direction, five 100 mm strips", lengthMm: 300, widthMm: 600 };
+  const peelStrips = { code: "D6496", position: "Across the width, five 100 mm strips", lengthMm: 200, widthMm: 600 };
+  const squares = { code: "D5993", position: "Three 200 mm squares across the width", lengthMm: 200, widthMm: 600 };
+  const indexCoupons = {
+    certifiedSquares: await cutCoupon(certifiedRoll, 19.8, users.technician2!, squares),
+    certifiedStrips: await cutCoupon(certifiedRoll, 19.8, users.technician!, strips),
+    certifiedPeel: await cutCoupon(certifiedRoll, 19.8, users.technician!, peelStrips),
+    reviewSquares: await cutCoupon(reviewRoll, 12.4, users.technician!, squares),
+    reviewStrips: await cutCoupon(reviewRoll, 12.4, users.technician2!, strips),
+    preparedSquares: await cutCoupon(preparedRoll, 7.9, users.technician2!, squares),
+  };
 
   // Runs: mounted, saturated, held, permeated (readings every 6 h, at the method's permeation pressures);
   // with `refillAfter`, the burettes are refilled and drained once after that reading; `ended` terminates them.
@@ -221,6 +240,22 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
   await secondSubmitted.ended(5, 4, { thicknessMm: 6.0, massG: 71.0, observations: "Even swelling; no channels." });
 
   await makeRun(testingSpecimen, testingRoll, "CELL-03", users.technician!, 5, "PERMEATING", 7);
+
+  // Index tests beside the hydraulic ones (Cell 4 and the tailings pond): approved, awaiting review and not
+  // yet done; roll R-4102's swell index is below its limit. Coupons for strips and squares are cut first.
+  const indexTest = demoIndexTester({ tx, ago, equipment, qaId: users.qa!, custody: (item, action, from, to, actorId, at, extra) => custody(item, action, from, to, actorId, at, extra) });
+  await indexTest(certifiedRoll, OBS.swellGood, users.technician2!, 19, { approvedDaysAgo: 17 });
+  await indexTest(certifiedRoll, OBS.fluid, users.technician2!, 19, { approvedDaysAgo: 17 });
+  await indexTest(certifiedRoll, OBS.mass, users.technician2!, 18.5, { coupon: indexCoupons.certifiedSquares, approvedDaysAgo: 17 });
+  await indexTest(certifiedRoll, OBS.tensile, users.technician!, 18.5, { coupon: indexCoupons.certifiedStrips, approvedDaysAgo: 17 });
+  await indexTest(certifiedRoll, OBS.peel, users.technician!, 18.4, { coupon: indexCoupons.certifiedPeel, approvedDaysAgo: 17 });
+  await indexTest(reviewRoll, OBS.swellLow, users.technician!, 11, { approvedDaysAgo: 9 });
+  await indexTest(reviewRoll, OBS.fluidSecond, users.technician!, 10.5);
+  await indexTest(reviewRoll, OBS.massSecond, users.technician!, 10.5, { coupon: indexCoupons.reviewSquares, approvedDaysAgo: 9 });
+  await indexTest(reviewRoll, OBS.tensileSecond, users.technician2!, 10, { coupon: indexCoupons.reviewStrips });
+  await indexTest(testingRoll, OBS.swellThird, users.technician!, 4);
+  await indexTest(preparedRoll, OBS.massThird, users.technician2!, 7.5, { coupon: indexCoupons.preparedSquares, approvedDaysAgo: 6 });
+  await indexTest(preparedRoll, OBS.swellGood, users.technician2!, 7.5, { approvedDaysAgo: 6 });
 }
 
 async function createEquipment(tx: Tx, adminId: string, now: Date): Promise<Ids> {
@@ -251,5 +286,6 @@ async function createEquipment(tx: Tx, adminId: string, now: Date): Promise<Ids>
   await add("TH-01", "THERMOMETER", "Laboratory thermometer", null, 200, { standardUncertainty: U.temperatureC });
   await add("TG-01", "THICKNESS_GAUGE", "Dial thickness gauge, 0.01 mm", null, 150, { standardUncertainty: U.thicknessMm });
   await add("CLK-01", "TIMER", "Data-logger clock", null, 100, { standardUncertainty: U.timeS });
+  await createIndexEquipment((tag, kind, name, days, values) => add(tag, kind, name, null, days, values));
   return ids;
 }

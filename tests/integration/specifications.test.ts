@@ -33,7 +33,7 @@ describe("specification library", () => {
     expect(created._count.limits).toBe(3);
     const spec = await getSpecification({ actor: qa, id: created.id });
     expect(spec).toMatchObject({ name: "Cell 3 liner", isTemplate: false, inUse: true, project: { id: project.id } });
-    expect(spec.limits.map(({ id: _id, ...l }) => l)).toEqual(GCL3.map((l) => ({ ...l })));
+    expect(spec.limits.map(({ id: _id, ...l }) => l)).toEqual(GCL3.map((l) => ({ ...l, testingFrequencyAreaM2: null, testingFrequencyPerLot: false })));
     // A copy: the template's own rows are untouched and separate.
     const templateLimitIds = (await db().specificationLimit.findMany({ where: { specificationId: template.id } })).map((l) => l.id);
     expect(spec.limits.some((l) => templateLimitIds.includes(l.id))).toBe(false);

@@ -20,6 +20,9 @@ const SAMPLE_SQL: Array<[prefix: string, sql: string]> = [
   ["/specifications/", `SELECT id AS v FROM "Specification" ORDER BY "createdAt" LIMIT 1`],
   ["/portal/projects/", `SELECT p.code AS v FROM "Project" p JOIN "ClientOrganization" o ON o.id = p."clientOrganizationId" WHERE o.code = 'MWA' ORDER BY 1 LIMIT 1`],
   ["/verify/", `SELECT "verificationCode" AS v FROM "CertificateRevision" WHERE status = 'ISSUED' LIMIT 1`],
+  ["/index-tests/new/", `SELECT "labNumber" AS v FROM "Roll" ORDER BY "labNumber" LIMIT 1`],
+  ["/index-tests/", `SELECT id AS v FROM "IndexTest" ORDER BY "testedAt" LIMIT 1`],
+  ["/projects/", `SELECT code AS v FROM "Project" ORDER BY code LIMIT 1`],
 ];
 
 /** The route with each [param] replaced by a real value (or a made-up one); catch-alls get "session". */

@@ -30,7 +30,13 @@ function branchesOf(kind: LabNumberKind, id: string): AuditScopeBranch[] {
     case "shipment":
       return [own("Shipment", id), children("ShipmentPhoto", "shipmentId", id), corrections("Shipment", id)];
     case "roll":
-      return [own("Roll", id), children("CustodyEvent", "rollId", id), children("IndexTest", "rollId", id), corrections("Roll", id)];
+      return [
+        own("Roll", id), children("CustodyEvent", "rollId", id), children("IndexTest", "rollId", id),
+        { table: "IndexTestResult", rows: Prisma.sql`"rowId" IN (SELECT r.id FROM "IndexTestResult" r JOIN "IndexTest" t ON t.id = r."indexTestId" WHERE t."rollId" = ${id})` },
+        { table: "IndexTestReview", rows: Prisma.sql`"rowId" IN (SELECT r.id FROM "IndexTestReview" r JOIN "IndexTest" t ON t.id = r."indexTestId" WHERE t."rollId" = ${id})` },
+        { table: "IndexTestEquipment", rows: Prisma.sql`"rowId" IN (SELECT e."indexTestId" || ':' || e."equipmentId" FROM "IndexTestEquipment" e JOIN "IndexTest" t ON t.id = e."indexTestId" WHERE t."rollId" = ${id})` },
+        corrections("Roll", id),
+      ];
     case "coupon":
       return [own("Coupon", id), children("CustodyEvent", "couponId", id), corrections("Coupon", id)];
     case "specimen":

@@ -6,6 +6,10 @@ import {
 import { getDb, type Db } from "../db/client";
 import type { Tx } from "../db/transaction";
 
+// Parallel attempts on one account queue on its counter row; under load the default 2 s wait for a
+// connection is too short and would turn a counted attempt into a server error. Same limits as withActor.
+const LOCK_WAIT = { maxWait: 10_000, timeout: 15_000 };
+
 /** Who is trying a password: the account's e-mail and the client's network address (null when unknown). */
 export type PasswordAttempt = { email: string; address: string | null };
 
@@ -25,7 +29,7 @@ export async function checkPasswordThrottled(attempt: PasswordAttempt, compare: 
   // One transaction: when any counter is blocked, none of this attempt's counts are kept.
   await db.$transaction(async (tx) => {
     for (const { key, kind } of keys) await countAttempt(tx, key, kind, now);
-  });
+  }, LOCK_WAIT);
 
   const ok = await compare();
   if (ok) await recordSuccess(db, email, attempt.address, now);
@@ -72,7 +76,7 @@ async function recordSuccess(db: Db, email: string, address: string | null, now:
         create: { accountEmail: email, address, lastSuccessAt: now },
         update: { lastSuccessAt: now },
       });
-  });
+  }, LOCK_WAIT);
 }
 
 /** Clears an account's counts (an administrator's password reset lets the person in at once). */

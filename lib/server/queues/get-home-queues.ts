@@ -2,6 +2,7 @@ import "server-only";
 import { can, type Action } from "@/lib/policy/permissions";
 import type { CurrentUser } from "../auth/current-user";
 import { getDb } from "../db/client";
+import { loadProjectConformance } from "../conformance/load-project-conformance";
 
 const LIMIT = 15;
 const ACTIVE_RUN_STATES = ["SET_UP", "SATURATING", "EQUILIBRATING", "PERMEATING", "TERMINATED", "POST_TEST_RECORDED", "RETURNED"] as const;
@@ -69,6 +70,41 @@ async function findRunsToReview() {
   });
 }
 
+/**
+ * Rolls with index tests their project's specification asks for and that have none yet (or one QA
+ * returned), per roll. Looks at the projects with rolls still in the lab's hands, the most recent first.
+ */
+async function findIndexTestsWaiting() {
+  const projects = await getDb().project.findMany({
+    where: { active: true, rolls: { some: { state: { in: ["RECEIVED", "STORED", "CUT", "UNDER_TEST", "TESTED"] } } }, specifications: { some: { isTemplate: false } } },
+    orderBy: { updatedAt: "desc" },
+    take: 20,
+    select: { id: true, name: true },
+  });
+  const out: Array<{ rollLabNumber: string; rollNumber: string; projectName: string; methods: Array<{ code: string; title: string }> }> = [];
+  for (const project of projects) {
+    const conformance = await loadProjectConformance({ projectId: project.id });
+    for (const row of conformance.rows) {
+      const waiting = conformance.waiting.get(row.roll.id);
+      if (!waiting) continue;
+      const methods = [...new Map(waiting.map((w) => [w.methodCode, { code: w.methodCode, title: w.methodTitle }])).values()];
+      out.push({ rollLabNumber: row.roll.labNumber, rollNumber: row.roll.rollNumber, projectName: project.name, methods });
+    }
+    if (out.length >= LIMIT) break;
+  }
+  return out.slice(0, LIMIT);
+}
+
+/** Index tests recorded and awaiting QA review, oldest first. */
+async function findIndexTestsToReview() {
+  return getDb().indexTest.findMany({
+    where: { state: "SUBMITTED" },
+    orderBy: { testedAt: "asc" },
+    take: LIMIT,
+    select: { id: true, methodCode: true, testedAt: true, performedBy: { select: { name: true } }, roll: { select: { labNumber: true } } },
+  });
+}
+
 /** Equipment whose calibration falls due within `days`, or is already overdue. */
 async function findCalibrationsDue(days = 30, now = new Date()) {
   const horizon = new Date(now.getTime() + days * 86_400_000);
@@ -102,7 +138,7 @@ async function findClientProjects(actor: CurrentUser) {
 /** The work queues a role sees on its home page; each queue is included only where the policy allows. */
 export async function getHomeQueues(actor: CurrentUser) {
   const allowed = (action: Action) => can(actor.role, action);
-  const [shipments, rollsToCut, specimens, runs, reviews, calibrations, projects] = await Promise.all([
+  const [shipments, rollsToCut, specimens, runs, reviews, calibrations, projects, indexTestsWaiting, indexTestsToReview] = await Promise.all([
     allowed("shipment.create") ? findShipmentsToAcknowledge() : null,
     allowed("sample.cut") ? findRollsToCut() : null,
     allowed("run.operate") ? findSpecimensWaiting() : null,
@@ -110,7 +146,9 @@ export async function getHomeQueues(actor: CurrentUser) {
     allowed("run.review") ? findRunsToReview() : null,
     allowed("equipment.manage") ? findCalibrationsDue() : null,
     allowed("portal.view") ? findClientProjects(actor) : null,
+    allowed("run.operate") ? findIndexTestsWaiting() : null,
+    allowed("run.review") ? findIndexTestsToReview() : null,
   ]);
-  return { shipments, rollsToCut, specimens, runs, reviews, calibrations, projects };
+  return { shipments, rollsToCut, specimens, runs, reviews, calibrations, projects, indexTestsWaiting, indexTestsToReview };
 }
 export type HomeQueues = Awaited<ReturnType<typeof getHomeQueues>>;

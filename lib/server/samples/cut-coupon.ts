@@ -28,11 +28,11 @@ export async function cutCoupon(options: { actor: CurrentUser; input: unknown; n
     const location = await tx.storageLocation.findUnique({ where: { id: input.storageLocationId }, select: { active: true } });
     if (!location?.active) throw new AppError("INVALID_INPUT", undefined, { fieldErrors: { storageLocationId: "Choose a storage location in use." } });
     const labNumber = await allocateLabNumber(tx, "coupon", input.cutAt);
-    const roll = await applyCustodyAction(tx, { actor: options.actor, kind: "roll", id: input.rollId, action: "CUT", expectedVersion: input.rollVersion, at: input.cutAt, note: `Coupon ${labNumber}` });
+    const roll = await applyCustodyAction(tx, { actor: options.actor, kind: "roll", id: input.rollId, action: "CUT", expectedVersion: input.rollVersion, at: input.cutAt, note: input.intendedMethodCode ? `Coupon ${labNumber} for ASTM ${input.intendedMethodCode}` : `Coupon ${labNumber}` });
     const coupon = await tx.coupon.create({
       data: {
         labNumber, rollId: input.rollId, positionInSample: input.positionInSample, lengthMm: input.lengthMm, widthMm: input.widthMm,
-        cutById: options.actor.id, cutAt: input.cutAt, storageLocationId: input.storageLocationId,
+        cutById: options.actor.id, cutAt: input.cutAt, storageLocationId: input.storageLocationId, intendedMethodCode: input.intendedMethodCode ?? null,
       },
       select: { id: true, labNumber: true },
     });

@@ -15,7 +15,7 @@ export async function getRoll(options: { actor: CurrentUser; labNumber: string }
       shipment: { select: { labNumber: true, receivedAt: true, acknowledgedAt: true, conditionNotes: true } },
       project: { select: { name: true, code: true, clientOrganization: { select: { name: true } } } },
       storageLocation: place,
-      coupons: { orderBy: { labNumber: "asc" }, select: { id: true, labNumber: true, positionInSample: true, state: true, cutAt: true, _count: { select: { specimens: true } } } },
+      coupons: { orderBy: { labNumber: "asc" }, select: { id: true, labNumber: true, positionInSample: true, state: true, cutAt: true, intendedMethodCode: true, _count: { select: { specimens: true } } } },
     },
   });
   if (!roll) throw new AppError("NOT_FOUND");
@@ -32,6 +32,7 @@ export async function getCoupon(options: { actor: CurrentUser; labNumber: string
       cutBy: { select: { name: true } },
       storageLocation: place,
       specimens: { orderBy: { labNumber: "asc" }, select: { id: true, labNumber: true, intendedMethodCode: true, state: true, preparedAt: true } },
+      indexTests: { orderBy: { testedAt: "asc" }, select: { id: true, methodCode: true, state: true, testedAt: true } },
     },
   });
   if (!coupon) throw new AppError("NOT_FOUND");

@@ -10,6 +10,8 @@ export const limitSelect = {
   significantDigits: true,
   conformanceMethod: true,
   testMethodCode: true,
+  testingFrequencyAreaM2: true,
+  testingFrequencyPerLot: true,
 } as const;
 
 /** Limits in the order of the TestProperty enum (index flux first), which PostgreSQL sorts enums by. */

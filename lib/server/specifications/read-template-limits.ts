@@ -10,7 +10,7 @@ import type { Tx } from "../db/transaction";
 export async function readTemplateLimits(tx: Tx, templateId: string, field: string): Promise<Prisma.SpecificationLimitCreateWithoutSpecificationInput[]> {
   const template = await tx.specification.findUnique({
     where: { id: templateId },
-    select: { isTemplate: true, limits: { select: { property: true, limitText: true, unit: true, direction: true, significantDigits: true, conformanceMethod: true, testMethodCode: true } } },
+    select: { isTemplate: true, limits: { select: { property: true, limitText: true, unit: true, direction: true, significantDigits: true, conformanceMethod: true, testMethodCode: true, testingFrequencyAreaM2: true, testingFrequencyPerLot: true } } },
   });
   if (!template?.isTemplate) throw new AppError("INVALID_INPUT", "Choose one of the lab's templates.", { fieldErrors: { [field]: "Choose one of the lab's templates, or none." } });
   return template.limits;

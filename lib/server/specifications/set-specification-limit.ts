@@ -31,6 +31,8 @@ export async function setSpecificationLimit(options: { actor: CurrentUser; input
     significantDigits: input.significantDigits,
     conformanceMethod: input.conformanceMethod,
     testMethodCode: input.testMethodCode ?? null,
+    testingFrequencyAreaM2: input.testingFrequencyAreaM2 ?? null,
+    testingFrequencyPerLot: input.testingFrequencyPerLot,
   };
   try {
     return await withActor(options.actor, async (tx) => {

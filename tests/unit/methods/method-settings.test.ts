@@ -10,8 +10,8 @@ import { methodSettingsChangeSchema } from "@/lib/validation/methods";
 const ROOT = path.resolve(import.meta.dirname, "../../..");
 
 describe("the registry of method settings", () => {
-  it("lists the three hydraulic methods; every schema key has a field with a source and a note, and every field a key", () => {
-    expect(Object.keys(METHOD_SETTINGS).sort()).toEqual(["D5084", "D5887", "D6766"]);
+  it("lists the three hydraulic methods and the six index methods; every schema key has a field with a source and a note, and every field a key", () => {
+    expect(Object.keys(METHOD_SETTINGS).sort()).toEqual(["D2216", "D5084", "D5887", "D5890", "D5891", "D5993", "D6496", "D6766", "D6768"]);
     for (const definition of Object.values(METHOD_SETTINGS)) {
       const keys = Object.keys(definition.defaults).sort();
       expect(definition.fields.map((f) => f.key).sort()).toEqual(keys);
@@ -22,7 +22,7 @@ describe("the registry of method settings", () => {
       // The defaults pass their own schema.
       expect(definition.schema.parse(definition.defaults)).toEqual(definition.defaults);
     }
-    expect(methodSettingsDefinition("D5890")).toBeNull();
+    expect(methodSettingsDefinition("D4632")).toBeNull();
   });
 
   it("ships the library's termination defaults (lib/hydraulics TERMINATION_DEFAULTS), the D5887 permeation pressures of common practice and the 10 % leakage limit of D5887", () => {
@@ -43,8 +43,8 @@ describe("the registry of method settings", () => {
   });
 
   it("the migration that installs version 1 of each method carries exactly these defaults", () => {
-    const dir = readdirSync(path.join(ROOT, "prisma/migrations")).find((d) => d.endsWith("_method_settings_and_apparatus"))!;
-    const sql = readFileSync(path.join(ROOT, "prisma/migrations", dir, "migration.sql"), "utf8");
+    const dirs = readdirSync(path.join(ROOT, "prisma/migrations")).filter((d) => d.endsWith("_method_settings_and_apparatus") || d.endsWith("_index_tests_and_conformance"));
+    const sql = dirs.map((dir) => readFileSync(path.join(ROOT, "prisma/migrations", dir, "migration.sql"), "utf8")).join("\n");
     for (const [code, definition] of Object.entries(METHOD_SETTINGS)) {
       const row = new RegExp(`\\('method-settings-${code}-v1', '${code}', 1, '([^']+)'`).exec(sql);
       expect(row, code).not.toBeNull();
@@ -56,6 +56,29 @@ describe("the registry of method settings", () => {
     const d = METHOD_SETTINGS.D5887!;
     const { uTimeS: _dropped, ...older } = d.defaults as Record<string, unknown>;
     expect(readStoredSettings(d, { ...older, ratioMin: 0.8 })).toEqual({ ...d.defaults, ratioMin: 0.8 });
+  });
+});
+
+describe("index methods' defaults and their sources", () => {
+  it("ships the numbers of the standards and of common practice, each with its source", () => {
+    // ASTM D5890: 2 g of clay, a 100 mL cylinder, at least 16 h; ASTM D5891: 22.5 g in 350 mL at about 690 kPa for 30 min;
+    // ASTM D6768 and D6496: 100 mm wide specimens; the specimen counts are from memory (five strips is common).
+    expect(METHOD_SETTINGS.D5890!.defaults).toMatchObject({ nominalClayMassG: 2, cylinderCapacityMl: 100, minHydrationHours: 16, reportingUnit: "mL/2 g" });
+    expect(METHOD_SETTINGS.D5891!.defaults).toMatchObject({ clayMassG: 22.5, waterVolumeMl: 350, pressureKPa: 690, filtrationMinutes: 30 });
+    expect(METHOD_SETTINGS.D6768!.defaults).toMatchObject({ minSpecimens: 5, stripWidthMm: 100, reportingUnit: "kN/m" });
+    expect(METHOD_SETTINGS.D6496!.defaults).toMatchObject({ minSpecimens: 5, specimenWidthMm: 100, reportingUnit: "N/m" });
+    const source = (code: string, key: string) => METHOD_SETTINGS[code]!.fields.find((f) => f.key === key)!.source;
+    expect(source("D6768", "minSpecimens")).toBe("from memory");
+    expect(source("D5890", "nominalClayMassG")).toBe("standard");
+    expect(source("D5993", "expandedUncertainty")).toBe("lab's own");
+    for (const code of ["D5890", "D5891", "D5993", "D2216", "D6768", "D6496"]) expect(METHOD_SETTINGS[code]!.family).toBe("index");
+  });
+
+  it("refuses a reporting unit the method does not give and a fractional specimen count", () => {
+    const d = METHOD_SETTINGS.D6768!;
+    expect(d.schema.safeParse({ ...d.defaults, reportingUnit: "mL" }).success).toBe(false);
+    const r = d.schema.safeParse({ ...d.defaults, minSpecimens: "2.5" });
+    expect(r.error!.issues[0]!.message).toBe("The smallest number of specimens must be a whole number.");
   });
 });
 

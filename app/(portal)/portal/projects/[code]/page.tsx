@@ -1,11 +1,14 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { ConformanceMatrixTable } from "@/components/conformance/conformance-matrix-table";
+import { SamplingCoverageTable } from "@/components/conformance/sampling-coverage-table";
 import { CertificateTable } from "@/components/portal/certificate-table";
 import { ProjectRolls } from "@/components/portal/project-rolls";
 import { ProjectShipments } from "@/components/portal/project-shipments";
 import { isAppError } from "@/lib/errors/app-error";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getPortalProject } from "@/lib/server/portal/get-portal-project";
+import { getProjectConformance } from "@/lib/server/conformance/get-project-conformance";
 import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 
 type Props = { params: Promise<{ code: string }> };
@@ -17,7 +20,7 @@ export default async function PortalProjectPage({ params }: Props) {
   const zone = await getLabTimeZone();
   const { code } = await params;
   // Another organisation's project is not found, exactly like one that does not exist.
-  const project = await getPortalProject({ actor, projectCode: code }).catch((error) => {
+  const [project, conformance] = await Promise.all([getPortalProject({ actor, projectCode: code }), getProjectConformance({ actor, projectCode: code })]).catch((error) => {
     if (isAppError(error) && error.code === "NOT_FOUND") notFound();
     throw error;
   });
@@ -31,6 +34,14 @@ export default async function PortalProjectPage({ params }: Props) {
         </div>
       </div>
       <div className="stack-gap">
+        <section className="card">
+          <h2>Conformance to {conformance.specificationName ?? "the specification"}</h2>
+          <ConformanceMatrixTable limits={conformance.limits} rows={conformance.rows} />
+        </section>
+        <section className="card">
+          <h2>Sampling coverage</h2>
+          <SamplingCoverageTable coverage={conformance.coverage} limits={conformance.limits} />
+        </section>
         <section className="card">
           <h2>Rolls <span className="count">{project.rolls.length}</span></h2>
           <ProjectRolls zone={zone} rolls={project.rolls} />

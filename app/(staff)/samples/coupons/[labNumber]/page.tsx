@@ -3,6 +3,7 @@ import { notFound } from "next/navigation";
 import { CustodyLedger } from "@/components/custody/custody-ledger";
 import { ItemCustodyActions } from "@/components/custody/item-custody-actions";
 import { PrepareSpecimenForm } from "@/components/samples/prepare-specimen-form";
+import { INDEX_METHODS, isIndexMethodCode } from "@/lib/index-tests/index-test-methods";
 import { RecordFacts } from "@/components/samples/record-facts";
 import { StateTag } from "@/components/ui/state-tag";
 import { isAppError } from "@/lib/errors/app-error";
@@ -42,6 +43,7 @@ export default async function CouponPage({ params }: Props) {
         <section className="card">
           <RecordFacts facts={[
             ["Position in the roll sample", coupon.positionInSample], ["Size (mm)", `${coupon.lengthMm} × ${coupon.widthMm}`],
+            ["Cut for", coupon.intendedMethodCode && isIndexMethodCode(coupon.intendedMethodCode) ? INDEX_METHODS[coupon.intendedMethodCode].title : "specimens for a hydraulic test"],
             ["Cut by", coupon.cutBy.name], ["Cut at", formatDateTime(coupon.cutAt, zone)],
             ["Kept at", coupon.storageLocation ? `${coupon.storageLocation.code} · ${coupon.storageLocation.name}` : "—"], ["Retained until", formatDate(coupon.retainUntil, zone)],
           ]} />
@@ -59,7 +61,16 @@ export default async function CouponPage({ params }: Props) {
               </table>
             )}
           </section>
-          {can(actor.role, "sample.cut") && coupon.state === "CUT" && (
+          {coupon.indexTests.length > 0 && (
+            <section className="card">
+              <h2>Index tests on this coupon</h2>
+              <ul>{coupon.indexTests.map((t) => <li key={t.id}><Link href={`/index-tests/${t.id}`}>{isIndexMethodCode(t.methodCode) ? INDEX_METHODS[t.methodCode].title : t.methodCode}</Link>, {formatDateTime(t.testedAt, zone)}</li>)}</ul>
+            </section>
+          )}
+          {can(actor.role, "run.operate") && coupon.state === "CUT" && coupon.intendedMethodCode && isIndexMethodCode(coupon.intendedMethodCode) && (
+            <section className="card"><h2>Test it</h2><p><Link className="button" href={`/index-tests/new/${coupon.roll.labNumber}/${coupon.intendedMethodCode}`}>Record the {INDEX_METHODS[coupon.intendedMethodCode].title}</Link></p></section>
+          )}
+          {can(actor.role, "sample.cut") && coupon.state === "CUT" && !coupon.intendedMethodCode && (
             <section className="card"><h2>Prepare a specimen</h2><PrepareSpecimenForm zone={zone} couponId={coupon.id} locations={locations} /></section>
           )}
         </div>
