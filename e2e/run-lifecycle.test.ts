@@ -76,6 +76,26 @@ describe.skipIf(!browserAvailable())("a run from cell assignment to submission (
       expect(Math.min(...lines), chart).toBeGreaterThan(20);
     }
 
+    // --- As soon as the criteria are met the run page shows the reported values, in the technician's units:
+    // SI by default; centimetre units once chosen under My account (m/s to cm/s: exactly 100 times).
+    const flux = await textOf(tech, '[data-testid="reported-INDEX_FLUX"] [data-testid="reported-value"]');
+    const k = await textOf(tech, '[data-testid="reported-HYDRAULIC_CONDUCTIVITY"] [data-testid="reported-value"]');
+    expect(flux).toMatch(/^\d\.\d × 10⁻[⁰¹²³⁴⁵⁶⁷⁸⁹]+ m³\/m²\/s$/);
+    expect(k).toMatch(/^\d\.\d × 10⁻[⁰¹²³⁴⁵⁶⁷⁸⁹]+ m\/s$/);
+    await tech.click("nav a::-p-text(My account)");
+    await (await tech.waitForSelector('form[aria-label="Units of results"] input[value="CENTIMETRE"]'))!.click();
+    await tech.click("button::-p-text(Save units)");
+    await tech.waitForSelector('[data-testid="result-units-message"]');
+    // Back to the run by its lab number, as the technician would type it into the search box.
+    await fill(tech, "Find by lab number", runNumber);
+    await tech.keyboard.press("Enter");
+    await tech.waitForFunction(() => /cm\/s$/.test(document.querySelector('[data-testid="reported-HYDRAULIC_CONDUCTIVITY"] [data-testid="reported-value"]')?.textContent ?? ""), { timeout: 30_000 });
+    const kCm = await textOf(tech, '[data-testid="reported-HYDRAULIC_CONDUCTIVITY"] [data-testid="reported-value"]');
+    const [mantissa, exponent] = [k.split(" ")[0]!, k.match(/10⁻([⁰¹²³⁴⁵⁶⁷⁸⁹]+)/)![1]!];
+    const superscript = (n: number) => String(n).split("").map((d) => "⁰¹²³⁴⁵⁶⁷⁸⁹"[Number(d)]).join("");
+    const digits = [...exponent].map((c) => "⁰¹²³⁴⁵⁶⁷⁸⁹".indexOf(c)).join("");
+    expect(kCm).toBe(`${mantissa} × 10⁻${superscript(Number(digits) - 2)} cm/s`);
+
     // --- Terminate, post-test data, submit.
     await tech.click("button::-p-text(Terminate: criteria met)");
     await tech.waitForSelector('form[aria-label="Post-test data"]', { timeout: 30_000 });

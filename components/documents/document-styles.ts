@@ -28,7 +28,7 @@ export const DOCUMENT_CSS = `
 .doc th { text-align: left; font-weight: 700; border-bottom: 1.2pt solid #1d2a30; padding: 3pt 4pt; vertical-align: bottom; }
 .doc td { border-bottom: 0.6pt solid #d9d5cb; padding: 3pt 4pt; vertical-align: top; overflow-wrap: break-word; }
 .doc tr { break-inside: avoid; }
-.doc td.nowrap, .doc th.nowrap { white-space: nowrap; overflow-wrap: normal; }
+.doc td.nowrap, .doc th.nowrap, .doc dd.nowrap { white-space: nowrap; overflow-wrap: normal; }
 .doc-box { border: 0.8pt solid #d9d5cb; border-radius: 3pt; padding: 6pt 8pt; margin-top: 12pt; break-inside: avoid; }
 .doc-box-warn { border-color: #ecd08a; background: #fff3d6; color: #5c3d00; }
 .doc-keep { break-inside: avoid; }

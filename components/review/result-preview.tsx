@@ -1,6 +1,6 @@
 import type { RunVerdict } from "@/lib/evaluation/run-evaluation-context";
 import { TEST_PROPERTY_LABELS } from "@/lib/results/property-units";
-import { formatResultValue, formatUncertainty } from "@/lib/results/format-result";
+import { formatPropertyUncertainty, formatPropertyValue, type UnitSystem } from "@/lib/format/result-numbers";
 import { formatPercent, resultUncertainty } from "@/lib/results/result-record";
 import { resultsOfVerdict } from "@/lib/results/results-of-verdict";
 import type { TestMethod } from "@/lib/hydraulics";
@@ -10,7 +10,7 @@ import type { TestMethod } from "@/lib/hydraulics";
  * every input's standard uncertainty, where it comes from, and what it adds; the three largest are the
  * ones the certificate prints.
  */
-export function ResultPreview({ verdict, method, earlyEnd }: { verdict: RunVerdict; method: TestMethod; earlyEnd: boolean }) {
+export function ResultPreview({ verdict, method, earlyEnd, unitSystem = "SI" }: { verdict: RunVerdict; method: TestMethod; earlyEnd: boolean; unitSystem?: UnitSystem }) {
   let results: ReturnType<typeof resultsOfVerdict>;
   try {
     results = resultsOfVerdict(verdict, method, { earlyEnd });
@@ -19,14 +19,14 @@ export function ResultPreview({ verdict, method, earlyEnd }: { verdict: RunVerdi
   }
   return (
     <section className="card" data-testid="result-preview">
-      <h2>Results approval would record</h2>
+      <h2>Uncertainty budget of the results approval would record</h2>
       {results.map((r) => {
         const u = resultUncertainty(r.property, r.uncertaintyBudget, verdict);
         return (
           <div key={r.property} className="stack-gap">
             <p>
-              <strong>{TEST_PROPERTY_LABELS[r.property]}</strong>: {formatResultValue(r.value, r.unit)}{" "}
-              {r.expandedUncertainty !== null ? formatUncertainty(r.expandedUncertainty, r.unit, { value: r.value }) : "(uncertainty not stated)"}
+              <strong>{TEST_PROPERTY_LABELS[r.property]}</strong>: {formatPropertyValue(r.property, r.value, r.unit, unitSystem).text}{" "}
+              {r.expandedUncertainty !== null ? `${formatPropertyUncertainty(r.property, r.expandedUncertainty, r.value, r.unit, unitSystem)} (k = 2)` : "(uncertainty not stated)"}
               {r.earlyEnd && <span className="state state-warn"> ended early</span>}
             </p>
             {u.stated ? (

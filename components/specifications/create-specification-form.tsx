@@ -24,7 +24,7 @@ export function CreateSpecificationForm({ projects, templates, projectId }: { pr
   const initialProject = projects.find((p) => p.id === projectId)?.id ?? "";
   const form = useForm<z.input<typeof createProjectSpecificationSchema>, unknown, z.output<typeof createProjectSpecificationSchema>>({
     resolver: zodResolver(createProjectSpecificationSchema),
-    defaultValues: { projectId: initialProject, name: suggestedName(projects, initialProject), templateId: templates[0]?.id ?? "" },
+    defaultValues: { projectId: initialProject, name: suggestedName(projects, initialProject), revision: "", templateId: templates[0]?.id ?? "" },
   });
   const { register, handleSubmit, formState, getValues, setValue } = form;
   const onProjectChange = (previous: string, next: string) => {
@@ -54,6 +54,9 @@ export function CreateSpecificationForm({ projects, templates, projectId }: { pr
       </Field>
       <Field label="Name" hint="As the project's documents call it, e.g. Cell 3 liner, GCL specification rev. B." error={errors.name?.message}>
         <input {...register("name")} />
+      </Field>
+      <Field label="Revision" hint="The specification's own revision or date, e.g. Rev. B, 2026-05; printed on certificates." error={errors.revision?.message}>
+        <input {...register("revision")} />
       </Field>
       <Field label="Start from" hint="A template's limits are copied; later changes to the template do not alter this specification." error={errors.templateId?.message}>
         <select {...register("templateId")}>

@@ -46,6 +46,14 @@ export async function recordStage(page: Page, kind: string, pressures: [string, 
   await page.click("button::-p-text(Record stage)");
 }
 
+/** Each page's text of a PDF in reading order (pdftotext -raw, pages split at form feeds): rotated marks read whole. */
+export function pdfPages(bytes: Buffer): string[] {
+  const dir = mkdtempSync(path.join(os.tmpdir(), "seepline-pdf-"));
+  const file = path.join(dir, "document.pdf");
+  writeFileSync(file, bytes);
+  return execFileSync("pdftotext", ["-raw", file, "-"], { encoding: "utf8" }).split("\f").filter((page) => page.trim() !== "");
+}
+
 /** The text of a PDF as pdftotext lays it out. */
 export function pdfText(bytes: Buffer): string {
   const dir = mkdtempSync(path.join(os.tmpdir(), "seepline-pdf-"));

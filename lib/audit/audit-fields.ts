@@ -43,7 +43,7 @@ const KIND_WORDS: Record<string, string> = { ...EQUIPMENT_KIND_LABELS, BACK_PRES
 const UNIT_WORDS: Record<string, string> = { KPA: "kPa", PSI: "psi" };
 
 const REF_COLUMNS: Record<string, AuditRefKind> = {
-  actorId: "user", reviewerId: "user", signerId: "user", userId: "user",
+  actorId: "user", reviewerId: "user", signerId: "user", userId: "user", signatoryId: "user", createdById: "user",
   shipmentId: "shipment", rollId: "roll", couponId: "coupon", specimenId: "specimen", runId: "run",
   certificateId: "certificate", revisionId: "revision", supersedesId: "revision", equipmentId: "equipment", cellId: "equipment",
   calibrationId: "calibration", specificationId: "specification", projectId: "project", clientOrganizationId: "client",
@@ -60,6 +60,7 @@ const LABELS: Record<string, string> = {
   fromLocationId: "From location", toLocationId: "To location", cellId: "Cell", actorId: "Person", pdfSha256: "PDF digest (SHA-256)",
   expandedUncertainty: "Expanded uncertainty (k = 2)", limitText: "Limit", lastValue: "Last number given", key: "Counter",
   conditionNotes: "Condition on arrival", machineDirectionMarked: "Machine direction marked", sessionVersion: "Sign-in version",
+  resultIds: "Results included", signatoryId: "Signatory", unitSystem: "Units of results", resultUnits: "Units of results", createdById: "Written by",
   timeZone: "Time zone", abandonmentReason: "Reason for abandoning", abandonedById: "Abandoned by", jobTitle: "Job title",
 };
 

@@ -66,6 +66,7 @@ const OWNERS: Record<string, (row: Row) => AuditOwner> = {
   CertificateRevision: (row) => partOf("certificate", "certificateId", row, `revision ${text(row.revision)}`),
   CertificateResult: (row) => partOf("revision", "revisionId", row, "result on the certificate"),
   Signature: (row) => partOf("revision", "revisionId", row, "signature"),
+  CertificateDraftContent: (row) => partOf("revision", "revisionId", row, "draft content"),
   CustodyEvent: (row) => {
     const key = ["rollId", "couponId", "specimenId"].find((k) => row[k]) ?? "rollId";
     return partOf(key.slice(0, -2) as AuditRefKind, key, row, `custody: ${words(row.action)}`);

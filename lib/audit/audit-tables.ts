@@ -46,6 +46,7 @@ export const AUDIT_TABLES = {
   CertificateRevision: { slug: "certificate-revision", label: "Certificate revision", plural: "Certificate revisions" },
   CertificateResult: { slug: "certificate-result", label: "Result on a certificate", plural: "Results on certificates" },
   Signature: { slug: "signature", label: "Signature", plural: "Signatures" },
+  CertificateDraftContent: { slug: "certificate-draft-content", label: "Certificate draft content", plural: "Certificate draft contents" },
 } as const satisfies Record<string, AuditTable>;
 
 export type AuditTableName = keyof typeof AUDIT_TABLES;

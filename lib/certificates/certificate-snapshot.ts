@@ -34,13 +34,43 @@ export type CertificateResultLine = {
   uncertaintyContributors?: string[];
   /** Why no uncertainty is stated, when none is. */
   uncertaintyNote?: string;
+  /** The coverage of the expanded uncertainty in words ("coverage factor k = 2, ... about 95 %"). */
+  coverage?: string;
 };
 
+/** The specimen as tested (ISO/IEC 17025 7.8.2.1 e, 7.8.3.1 a): what was cut, how it was conditioned, how it was loaded. */
+export type CertificateSpecimen = {
+  dieDiameterMm: number;
+  /** pi d^2 / 4, mm^2. */
+  areaMm2: number;
+  initialThicknessMm: number;
+  initialMassG: number;
+  postTestThicknessMm: number | null;
+  postTestMassG: number | null;
+  moistureContentPct: number | null;
+  /** Hours from the first saturation stage to the start of permeation (hydration under back-pressure). */
+  hydrationHours: number | null;
+  /** Hours of the equilibration hold before permeation. */
+  equilibrationHours: number | null;
+  effectiveStressKPa: number | null;
+  /** Mean hydraulic gradient over the reported intervals (head / thickness), dimensionless. */
+  gradient: number | null;
+  permeant: string;
+};
+
+/**
+ * One tested item and what was measured on it. A certificate is a list of these, each with a list of
+ * results by property, so other kinds of test (index tests) can join as further entries.
+ */
 export type CertificateTest = {
   runLabNumber: string;
   specimenLabNumber: string;
   rollLabNumber: string;
-  method: { code: string; title: string };
+  /** edition: the standard's edition the lab works to ("D5887/D5887M-20"); absent on older snapshots. */
+  method: { code: string; title: string; edition?: string };
+  /** Dates of testing: specimen mounted, permeation started and ended (ISO). */
+  dates?: { mountedAt: string; permeationStartedAt: string | null; permeationEndedAt: string | null };
+  specimen?: CertificateSpecimen;
   conditions: { effectiveStressKPa: number | null; headKPa: number | null; permeant: string; meanTemperatureC: number | null; cell: string; thicknessMm: number | null };
   terminatedAt: string | null;
   termination: string;
@@ -87,9 +117,22 @@ export type CertificateSnapshot = {
   issuedAt: string;
   /** timeZone: the IANA zone every time on the certificate is written in (absent on older snapshots: UTC). */
   lab: { name: string; address: string; accreditation: string | null; timeZone?: string };
-  client: { name: string; address: string | null };
+  /** contact: the client's contact for this work (e-mail or person), ISO/IEC 17025 7.8.2.1 d. */
+  client: { name: string; address: string | null; contact?: string | null };
   project: { code: string; name: string; siteName: string; siteLocation: string | null };
-  specification: { name: string } | null;
+  /** revision: the specification's own revision as the client's document states it. */
+  specification: { name: string; revision?: string } | null;
+  /**
+   * How conformity was decided (ISO/IEC 17025 7.8.3.1 b, 7.1.3): the ASTM E29 method of each limit and
+   * whether the measurement uncertainty was taken into account.
+   */
+  decisionRule?: string;
+  /** Remarks the QA manager added to the draft. */
+  remarks?: string;
+  /** The units results are printed in. */
+  unitSystem?: "SI" | "CENTIMETRE";
+  /** For a revision: what changed from the revision it supersedes, one line each. */
+  changes?: string[];
   samples: CertificateSample[];
   tests: CertificateTest[];
   signatory: { name: string; role: string; meaning: string; signedAt: string };

@@ -36,10 +36,13 @@ export function custodyActionLabel(action: string): string {
  * ("2.4 × 10⁻⁹ m³/m²/s") or not ("2.4e-9"); the unit is added only when it is missing.
  */
 export function valueWithUnit(display: string, unit: string): string {
-  const pretty = prettyUnit(unit);
   const text = display.trim();
-  return text.endsWith(pretty) || text.endsWith(unit) ? text : `${text} ${pretty}`;
+  // A display written in another unit of the same kind (cm/s for a result stored in m/s) carries it already.
+  const units = [unit, prettyUnit(unit), ...DISPLAY_UNITS];
+  return units.some((u) => text.endsWith(` ${u}`)) ? text : `${text} ${prettyUnit(unit)}`;
 }
+
+const DISPLAY_UNITS = ["m³/m²/s", "cm³/cm²/s", "m/s", "cm/s", "mL/2 g", "mL", "kg/m²", "g/m²", "%", "kN/m", "N/m"];
 
 /** An uncertainty as printed under a heading that already says "(k = 2)": the repeated coverage factor is dropped. */
 export function withoutCoverageFactor(uncertainty: string): string {

@@ -8,6 +8,7 @@ import type { ConformanceSummary } from "../certificates/certificate-snapshot";
 import { decideConformance } from "../hydraulics";
 import { canonicalUnit, convertUnit } from "./property-units";
 import { formatNumber, formatUnit } from "./format-result";
+import { formatDecimalText } from "../format/result-numbers";
 
 export type SpecificationLimitInput = {
   /** The limit exactly as the specification writes it ("5e-11", "3.66"). */
@@ -42,13 +43,18 @@ export function explainConformance(result: { value: number; unit: string }, limi
   });
   const value = convertUnit(result.value, resultUnit, resultUnit);
   const shownUnit = formatUnit(limitUnit);
-  const measured = converted ? `${value} ${formatUnit(resultUnit)} (${decision.value} ${shownUnit})` : `${decision.value} ${shownUnit}`;
-  const how = decision.method === "rounding" ? `rounded to ${decision.comparedValue} (ASTM E29, half to even)` : "taken as measured (absolute method)";
+  const measuredValue = `${formatNumber(Number(valueInLimitUnit), { significantDigits: 3 })} ${shownUnit}`;
+  const measured = converted ? `${formatNumber(result.value, { significantDigits: 3 })} ${formatUnit(resultUnit)} (${measuredValue})` : measuredValue;
+  const limitShown = `${formatDecimalText(decision.limit)} ${shownUnit}`;
+  const how = decision.method !== "rounding"
+    ? "taken as measured (absolute method)"
+    : Number(decision.comparedValue) === 0 && decision.roundingPlace !== null
+      ? `smaller than half of the limit's last place (${formatDecimalText(decision.roundingPlace)} ${shownUnit}), so it rounds below the limit (ASTM E29, half to even)`
+      : `rounded to ${formatDecimalText(decision.comparedValue)} ${shownUnit} (ASTM E29, half to even)`;
   const relation =
     limit.direction === "MAXIMUM"
       ? decision.conforms ? "does not exceed the maximum of" : "exceeds the maximum of"
       : decision.conforms ? "is not below the minimum of" : "is below the minimum of";
-  const measuredValue = `${formatNumber(Number(valueInLimitUnit), { significantDigits: 3 })} ${shownUnit}`;
   return {
     summary: {
       limitText: decision.limit,
@@ -57,7 +63,7 @@ export function explainConformance(result: { value: number; unit: string }, limi
       method: limit.conformanceMethod,
       comparedValue: decision.comparedValue,
       conforms: decision.conforms,
-      statement: `${measured}, ${how}, ${relation} ${decision.limit} ${shownUnit}: ${decision.conforms ? "conforms" : "does not conform"}.`,
+      statement: `${measured}, ${how}, ${relation} ${limitShown}: ${decision.conforms ? "conforms" : "does not conform"}.`,
       measuredValue,
       plainRule: plainRule(decision, measuredValue, shownUnit),
     },
@@ -76,16 +82,10 @@ export function explainConformance(result: { value: number; unit: string }, limi
 function plainRule(decision: { method: string; kind: string; comparedValue: string; roundingPlace: string | null }, measuredValue: string, unit: string): string {
   if (decision.method !== "rounding" || decision.roundingPlace === null)
     return `The result as measured, ${measuredValue}, is compared with the limit; any excursion beyond it fails (ASTM E29 absolute method).`;
-  const place = `${formatNumber(Number(decision.roundingPlace), { significantDigits: 1 })} ${unit}`;
+  const place = `${formatDecimalText(decision.roundingPlace)} ${unit}`;
   const rule = `The specification states its limit to the nearest ${place}, so the result is rounded once to that place, halves to even, and the rounded value is compared with the limit (ASTM E29 rounding method).`;
-  if (Number(decision.comparedValue) !== 0) return `${rule} Measured ${measuredValue}; rounded ${asWritten(decision.comparedValue)} ${unit}.`;
+  if (Number(decision.comparedValue) !== 0) return `${rule} Measured ${measuredValue}; rounded ${formatDecimalText(decision.comparedValue)} ${unit}.`;
   return `${rule} Measured ${measuredValue}; rounded to the nearest ${place} it reads 0. That 0 is not a measured zero: the result is smaller than half of ${place}${decision.kind === "max" ? ", so it does not exceed the maximum" : ", so it falls short of the minimum"}.`;
-}
-
-/** A rounded decimal ("3e-11", "24", "3.7") in the typographic form results are shown in, with its digits kept. */
-function asWritten(decimal: string): string {
-  const mantissa = decimal.toLowerCase().split("e")[0]!.replace(/^[-+]/, "").replace(".", "").replace(/^0+/, "");
-  return formatNumber(Number(decimal), { significantDigits: Math.max(1, mantissa.length) });
 }
 
 /**

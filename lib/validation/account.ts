@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { UNIT_SYSTEMS } from "../format/result-numbers";
 import { ROLES } from "../policy/permissions";
 import { refineClientOrganization } from "./client-organization-rule";
 
@@ -50,3 +51,9 @@ export const changeOwnPasswordSchema = z
   .refine((v) => v.newPassword === v.confirmPassword, { path: ["confirmPassword"], message: "The two new passwords differ." })
   .refine((v) => v.newPassword !== v.currentPassword, { path: ["newPassword"], message: "Choose a password you have not been using." });
 export type ChangeOwnPasswordInput = z.infer<typeof changeOwnPasswordSchema>;
+
+/** The units a person's screens show results in (My account). */
+export const resultUnitsSchema = z.object({
+  resultUnits: z.enum(UNIT_SYSTEMS, { message: "Choose SI or centimetre units." }),
+});
+export type ResultUnitsInput = z.infer<typeof resultUnitsSchema>;

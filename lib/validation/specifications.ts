@@ -40,6 +40,8 @@ export const limitTextSchema = z
 export const createProjectSpecificationSchema = z.object({
   projectId: z.string({ message: "Choose the project." }).min(1, "Choose the project."),
   name: requiredText("a name for the specification", 120),
+  /** The specification's own revision or issue as its document states it; printed on certificates. */
+  revision: z.string().trim().max(60, "Keep the revision to 60 characters.").default(""),
   templateId: optionalId,
 });
 export type CreateProjectSpecificationInput = z.input<typeof createProjectSpecificationSchema>;

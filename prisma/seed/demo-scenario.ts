@@ -45,7 +45,7 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
       const project = await tx.project.create({ data: { ...p, clientOrganizationId: org.id } });
       projects[p.code] = project.id;
       await tx.specification.create({
-        data: { name: `${p.code} liner specification`, projectId: project.id, limits: { create: demoSpecLimits(p.code) } },
+        data: { name: `${p.code} liner specification`, revision: "Rev. 1, 2026-03", projectId: project.id, limits: { create: demoSpecLimits(p.code) } },
       });
     }
   }

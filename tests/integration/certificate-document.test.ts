@@ -125,8 +125,8 @@ describe.skipIf(!browser)("certificate PDF (Chromium)", () => {
 
     expect(text).toContain(snapshot.number);
     expect(text).toContain(snapshot.tests[0]!.results[0]!.display); // "2.4 × 10⁻⁹ m³/m²/s"
-    expect(text).toContain("8.7e-11 m/s, rounded to 9e-11 (ASTM E29, half to even), exceeds the maximum of 5e-11 m/s: does not conform.");
-    expect(text).toContain("Revision 2 supersedes revision 1: Client address corrected; the results are unchanged.");
+    expect(text).toContain("8.70 × 10⁻¹¹ m/s, rounded to 9 × 10⁻¹¹ m/s (ASTM E29, half to even), exceeds the maximum of 5 × 10⁻¹¹ m/s: does not conform.");
+    expect(text).toContain("Amended certificate. Revision 2 supersedes revision 1, which is no longer valid. Reason: Client address corrected; the results are unchanged.");
     expect(text).toContain(snapshot.verificationCode);
     for (const caution of CERTIFICATE_CAUTIONS) expect(text).toContain(caution);
     expect(pages.length).toBeGreaterThan(1);

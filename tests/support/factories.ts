@@ -31,7 +31,7 @@ export async function makeUser(role: Role, options: { password?: string; clientO
   return withActor(SYSTEM, (tx) =>
     tx.user.create({
       data: { name: `Test ${role}`, email, role, passwordHash, clientOrganizationId: orgId },
-      select: { id: true, name: true, email: true, role: true, clientOrganizationId: true, pressureUnit: true },
+      select: { id: true, name: true, email: true, role: true, clientOrganizationId: true, pressureUnit: true, resultUnits: true },
     }),
   );
 }

@@ -14,6 +14,8 @@ export type SnapshotOptions = {
   timeZone?: string;
   /** Give each roll its condition on arrival, as snapshots from receipts with per-roll remarks carry. */
   conditions?: boolean;
+  /** Carry every item ISO/IEC 17025 7.8.2.1 and 7.8.3.1 asks for, as snapshots built since issue 12 do. */
+  complete?: boolean;
 };
 
 function random(seed: number) {
@@ -80,7 +82,8 @@ export function makeCertificateSnapshot(options: SnapshotOptions = {}): Certific
       terminatedAt: new Date(issuedAt - (6 - i) * 24 * HOUR).toISOString(),
       termination: i === 2 ? "ended early: client asked for the result after 18 days" : "termination criteria met",
       deviations: options.deviations && i === 0 ? ["Permeation paused for 3 h on day 2 (power cut); readings before and after are kept, the pause is excluded from the intervals."] : [],
-      results: i === 0 ? t.results().map((r) => ({ ...r, uncertaintyContributors: ["burette readings 1.8 % (BP-01 calibration CAL-BP-01-2026)", "die diameter 0.12 % (lab value, ASTM D5887 settings, version 2)", "time stamps 0.001 % (CLK-01 calibration CAL-CLK-01-2026)"] })) : t.results(),
+      results: (i === 0 ? t.results().map((r) => ({ ...r, uncertaintyContributors: ["burette readings 1.8 % (BP-01 calibration CAL-BP-01-2026)", "die diameter 0.12 % (lab value, ASTM D5887 settings, version 2)", "time stamps 0.001 % (CLK-01 calibration CAL-CLK-01-2026)"] })) : t.results())
+        .map((r) => (options.complete ? { ...r, coverage: "coverage factor k = 2, for a coverage probability of about 95 %" } : r)),
       ...(i === 0 && {
         calculation: "Falling head with rising tail (ASTM D5084 method C): the head across the specimen is the line-pressure difference plus the inflow burette level minus the outflow burette level, both above one datum (zeros 0 mm and 40 mm above it).",
         criteria: { settings: "ASTM D5887 settings, version 2", chosen: null, lines: [{ name: "Outflow/inflow ratio", limit: "0.75 ≤ outflow/inflow ≤ 1.25 for each of the last 4 intervals", met: true }] },
@@ -90,6 +93,19 @@ export function makeCertificateSnapshot(options: SnapshotOptions = {}): Certific
       }),
       chart,
       performedBy: i % 2 ? "Tamsin Okerlund" : "Quenby Ardlow", approvedBy: "Ottilie Brannagh", approvedAt: new Date(issuedAt - (4 - i) * 24 * HOUR).toISOString(),
+      ...(options.complete && {
+        method: { ...t.method, edition: t.method.code.replace("ASTM ", "") + "-20" },
+        dates: {
+          mountedAt: new Date(receivedAt + 4 * 24 * HOUR).toISOString(),
+          permeationStartedAt: new Date(receivedAt + 6 * 24 * HOUR).toISOString(),
+          permeationEndedAt: new Date(issuedAt - (6 - i) * 24 * HOUR).toISOString(),
+        },
+        // 100 mm die: A = pi 100^2 / 4 = 7853.98 mm^2 (78.54 cm^2).
+        specimen: {
+          dieDiameterMm: 100, areaMm2: (Math.PI * 100 ** 2) / 4, initialThicknessMm: 7.1, initialMassG: 60.52, postTestThicknessMm: 5.92 + i * 0.11, postTestMassG: 118.4,
+          moistureContentPct: 11.2, hydrationHours: 48, equilibrationHours: 24, effectiveStressKPa: 34.5, gradient: 240, permeant: t.permeant,
+        },
+      }),
     };
   });
 
@@ -127,5 +143,13 @@ export function makeCertificateSnapshot(options: SnapshotOptions = {}): Certific
     tests,
     signatory: { name: "Ottilie Brannagh", role: "QA manager", meaning: "Reviewed the results and records and approved this certificate for issue", signedAt: new Date(issuedAt).toISOString() },
     supersedes: options.supersedes ? { revision: 1, reason: "Client address corrected; the results are unchanged" } : null,
+    ...(options.complete && {
+      client: { name: "Marrowdale Waste Authority (invented)", address: "12 Tipyard Road, Marrowdale", contact: "Ada Penhallow, ada.penhallow@marrowdale.test" },
+      specification: { name: "MWA cell 4 GCL specification (GRI-GCL3 limits)", revision: "Rev. B, 2026-05" },
+      decisionRule: "Index flux and hydraulic conductivity at 20 °C: ASTM E29 rounding method. The expanded uncertainty is stated beside each result but is not taken into account in the decision.",
+      remarks: "Specimens cut at the lab from the roll samples as received.",
+      unitSystem: "SI" as const,
+      ...(options.supersedes && { changes: ['Remarks changed; they now read: "Specimens cut at the lab from the roll samples as received."'] }),
+    }),
   };
 }

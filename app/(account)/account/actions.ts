@@ -8,6 +8,7 @@ import { requestClientAddress } from "@/lib/server/auth/request-client-address";
 import { reissueOwnSession } from "@/lib/server/auth/reissue-session";
 import { requireUser } from "@/lib/server/auth/require-permission";
 import { changeOwnPassword } from "@/lib/server/users/change-own-password";
+import { setOwnResultUnits } from "@/lib/server/users/set-own-result-units";
 
 export async function changeOwnPasswordAction(input: unknown) {
   return toActionResult(async () => {
@@ -28,4 +29,12 @@ export async function revokeOwnApiTokenAction(input: unknown) {
     revalidatePath("/account");
     return null;
   }, "Token revoked; requests with it are refused from now on.");
+}
+
+export async function setOwnResultUnitsAction(input: unknown) {
+  return toActionResult(async () => {
+    const saved = await setOwnResultUnits({ actor: await requireUser("account.self"), input });
+    revalidatePath("/", "layout");
+    return saved;
+  }, "Results will be shown in the units you chose.");
 }

@@ -3,6 +3,7 @@ import { ChangePasswordForm } from "@/components/account/change-password-form";
 import { ApiTokenList } from "@/components/account/api-token-list";
 import { CreateApiTokenForm } from "@/components/account/create-api-token-form";
 import { scopesForRole } from "@/lib/policy/api-tokens";
+import { ResultUnitsForm } from "@/components/account/result-units-form";
 import { ROLE_LABELS } from "@/lib/policy/permissions";
 import { listOwnApiTokens } from "@/lib/server/api-tokens/list-api-tokens";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
@@ -35,6 +36,10 @@ export default async function AccountPage() {
           <CreateApiTokenForm scopes={scopes} />
         </section>
       )}
+      <section className="card" style={{ maxWidth: "34rem" }}>
+        <h2>Units of results</h2>
+        <ResultUnitsForm current={user.resultUnits ?? "SI"} />
+      </section>
     </>
   );
 }

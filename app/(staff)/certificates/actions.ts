@@ -5,6 +5,7 @@ import { toActionResult } from "@/lib/server/actions/action-result";
 import { requestClientAddress } from "@/lib/server/auth/request-client-address";
 import { requireUser } from "@/lib/server/auth/require-permission";
 import { createCertificateDraft } from "@/lib/server/certificates/create-certificate-draft";
+import { editCertificateDraft } from "@/lib/server/certificates/edit-certificate-draft";
 import { issueCertificate } from "@/lib/server/certificates/issue-certificate";
 import { reviseCertificate } from "@/lib/server/certificates/revise-certificate";
 
@@ -30,4 +31,12 @@ export async function reviseCertificateAction(input: unknown) {
     revalidatePath("/certificates", "layout");
     return revision;
   }, "New draft revision created; sign it to issue it.");
+}
+
+export async function editCertificateDraftAction(input: unknown) {
+  return toActionResult(async () => {
+    const saved = await editCertificateDraft({ actor: await requireUser("certificate.issue"), input });
+    revalidatePath("/certificates", "layout");
+    return saved;
+  }, "Draft saved. Preview it to see the certificate as it will be issued.");
 }

@@ -8,7 +8,7 @@ function breakableUrl(url: string) {
 }
 
 /** Signatory, verification code with its 2D code, and the closing statements, kept together on one page. */
-export function CertificateClose({ snapshot, qrSvg }: { snapshot: CertificateSnapshot; qrSvg: string }) {
+export function CertificateClose({ snapshot, qrSvg, preview = false }: { snapshot: CertificateSnapshot; qrSvg: string; preview?: boolean }) {
   const { signatory } = snapshot;
   return (
     <section className="cert-close" data-testid="certificate-close">
@@ -18,7 +18,9 @@ export function CertificateClose({ snapshot, qrSvg }: { snapshot: CertificateSna
           <div className="cert-sign-name">{signatory.name}</div>
           <div>{roleLabel(signatory.role)}</div>
           <p style={{ margin: "4pt 0 2pt" }}>{signatory.meaning}</p>
-          <div className="doc-small">Signed electronically {isoDateTime(signatory.signedAt, snapshot.lab.timeZone)}, the signatory confirming with their password.</div>
+          {preview
+            ? <div className="doc-small" data-testid="certificate-not-signed">Not signed: a preview of the draft. The signatory confirms with their password when it is issued.</div>
+            : <div className="doc-small">Signed electronically {isoDateTime(signatory.signedAt, snapshot.lab.timeZone)}, the signatory confirming with their password.</div>}
         </div>
         <div className="doc-box cert-verify" data-testid="certificate-verification">
           {/* The SVG comes from the qrcode package (our own lib/server/labels/qr-code-svg), never from user text. */}

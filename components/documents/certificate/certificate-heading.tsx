@@ -25,9 +25,14 @@ export function CertificateHeading({ snapshot }: { snapshot: CertificateSnapshot
         </div>
       </div>
       {snapshot.supersedes ? (
-        <div className="doc-box doc-box-warn cert-supersedes" style={{ marginTop: 0, marginBottom: "10pt" }}>
-          Revision {snapshot.revision} supersedes revision {snapshot.supersedes.revision}: {sentence(snapshot.supersedes.reason || snapshot.reason || "no reason was recorded")}
-          {" "}Revision {snapshot.supersedes.revision} is no longer valid.
+        <div className="doc-box doc-box-warn cert-supersedes" style={{ marginTop: 0, marginBottom: "10pt" }} data-testid="certificate-amendment">
+          <strong>Amended certificate.</strong> Revision {snapshot.revision} supersedes revision {snapshot.supersedes.revision}, which is no longer valid.
+          {" "}Reason: <span data-testid="certificate-amendment-reason">{sentence(snapshot.supersedes.reason || snapshot.reason || "no reason was recorded")}</span>
+          {snapshot.changes ? (
+            snapshot.changes.length ? (
+              <ul style={{ margin: "3pt 0 0", paddingLeft: "14pt" }} data-testid="certificate-changes">{snapshot.changes.map((c, i) => <li key={i}>{c}</li>)}</ul>
+            ) : <div>The content is unchanged from revision {snapshot.supersedes.revision}.</div>
+          ) : null}
         </div>
       ) : null}
     </>

@@ -31,7 +31,7 @@ export function CertificateSheet({ snapshot, qrSvg, watermark }: CertificateShee
       <CertificateSummary snapshot={snapshot} />
       <CertificateSamples samples={snapshot.samples} zone={zone} />
       {snapshot.tests.map((test, i) => <CertificateTestSection key={`${test.runLabNumber}-${i}`} test={test} index={i} count={snapshot.tests.length} zone={zone} />)}
-      <CertificateClose snapshot={snapshot} qrSvg={qrSvg} />
+      <CertificateClose snapshot={snapshot} qrSvg={qrSvg} preview={Boolean(watermark)} />
     </article>
   );
 }

@@ -1,4 +1,4 @@
-import { prettyUnit, valueWithUnit, withoutCoverageFactor } from "@/lib/certificates/certificate-wording";
+import { valueWithUnit, withoutCoverageFactor } from "@/lib/certificates/certificate-wording";
 import type { CertificateSnapshot } from "@/lib/certificates/certificate-snapshot";
 import { CertificateVerdict, limitLabel } from "./certificate-verdict";
 
@@ -11,16 +11,18 @@ export function CertificateSummary({ snapshot }: { snapshot: CertificateSnapshot
   return (
     <>
       <dl className="doc-facts">
-        <div><dt>Client</dt><dd>{client.name}{client.address ? <div className="doc-lab-address">{client.address}</div> : null}</dd></div>
+        <div data-testid="certificate-client"><dt>Client</dt><dd>{client.name}{client.address ? <div className="doc-lab-address">{client.address}</div> : null}{client.contact ? <div className="doc-small">Contact: {client.contact}</div> : null}</dd></div>
         <div><dt>Project</dt><dd>{project.name} <span className="doc-muted">({project.code})</span></dd></div>
         <div><dt>Site</dt><dd>{project.siteName}{project.siteLocation ? `, ${project.siteLocation}` : ""}</dd></div>
-        <div><dt>Specification</dt><dd>{specification ? specification.name : "None given: results are reported without a conformance statement."}</dd></div>
+        <div data-testid="certificate-specification"><dt>Specification</dt><dd>{specification ? <>{specification.name}{specification.revision ? <>, {specification.revision}</> : specification.revision === "" ? <span className="doc-muted"> (no revision stated)</span> : null}</> : "None given: results are reported without a conformance statement."}</dd></div>
       </dl>
+      {snapshot.decisionRule ? <p className="doc-small" data-testid="certificate-decision-rule"><strong>Decision rule.</strong> {snapshot.decisionRule}</p> : null}
+      {snapshot.remarks ? <div className="doc-box" data-testid="certificate-remarks"><strong>Remarks.</strong> {snapshot.remarks}</div> : null}
 
       <h2>Results at a glance</h2>
       <table data-testid="certificate-summary">
         <thead>
-          <tr><th>Test</th><th className="nowrap">Specimen</th><th>Property</th><th className="num">Result</th><th className="nowrap">U (k = 2)</th><th className="nowrap">Limit</th><th>Verdict</th></tr>
+          <tr><th>Test</th><th className="nowrap">Specimen</th><th>Property</th><th className="num">Result</th><th className="nowrap">U (k = 2, ≈95 %)</th><th className="nowrap">Limit</th><th>Verdict</th></tr>
         </thead>
         <tbody>
           {lines.map(({ test, t, result }, i) => (
@@ -30,7 +32,7 @@ export function CertificateSummary({ snapshot }: { snapshot: CertificateSnapshot
               <td>{result.label}</td>
               <td className="num">{valueWithUnit(result.display, result.unit)}</td>
               <td className="nowrap">{result.uncertaintyDisplay ? withoutCoverageFactor(result.uncertaintyDisplay) : "not stated"}</td>
-              <td className="nowrap">{result.conformance ? limitLabel(result.conformance, prettyUnit) : "—"}</td>
+              <td className="nowrap">{result.conformance ? limitLabel(result.conformance) : "—"}</td>
               <td><CertificateVerdict conformance={result.conformance} /></td>
             </tr>
           ))}

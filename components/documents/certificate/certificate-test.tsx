@@ -1,6 +1,7 @@
 import { capitalise, conditionValue, isoDateTime, prettyUnit, valueWithUnit, withoutCoverageFactor } from "@/lib/certificates/certificate-wording";
 import type { CertificateResultLine, CertificateTest } from "@/lib/certificates/certificate-snapshot";
 import { CertificateChart } from "./certificate-chart";
+import { formatDecimalText } from "@/lib/format/result-numbers";
 import { CertificateVerdict, limitLabel } from "./certificate-verdict";
 
 /** The numbers that decided a verdict: what was compared, by which ASTM E29 method, with which limit, and the statement. */
@@ -12,12 +13,57 @@ function Decision({ result }: { result: CertificateResultLine }) {
       <div className="cert-decision-head"><strong>{result.label}</strong> <CertificateVerdict conformance={c} /></div>
       <dl className="cert-decision-numbers">
         {c.measuredValue ? <div><dt>Measured value</dt><dd className="mono">{c.measuredValue}</dd></div> : null}
-        <div><dt>{c.method === "ROUNDING" ? "Rounded value compared" : "Compared value"}</dt><dd className="mono">{c.comparedValue} {prettyUnit(c.unit)}</dd></div>
-        <div><dt>Limit</dt><dd>{c.direction === "MAXIMUM" ? "maximum" : "minimum"} <span className="mono">{c.limitText} {prettyUnit(c.unit)}</span></dd></div>
+        <div><dt>{c.method === "ROUNDING" ? "Rounded to the limit's last place" : "Compared as measured"}</dt><dd className="mono">{comparedText(c)}</dd></div>
+        <div><dt>Limit</dt><dd>{c.direction === "MAXIMUM" ? "maximum" : "minimum"} <span className="mono">{formatDecimalText(c.limitText)} {prettyUnit(c.unit)}</span></dd></div>
         <div><dt>ASTM E29 method</dt><dd>{c.method === "ROUNDING" ? "rounding (once, half to even, to the limit's last place)" : "absolute (any excursion fails)"}</dd></div>
       </dl>
       <p>{c.statement}</p>
       {c.plainRule ? <p className="doc-small" data-testid="certificate-e29-rule">{c.plainRule}</p> : null}
+    </div>
+  );
+}
+
+/** The value the limit was compared with, in the results' notation; a rounding to 0 is said in words, never as a bare "0". */
+function comparedText(c: NonNullable<CertificateResultLine["conformance"]>): string {
+  if (c.method === "ROUNDING" && Number(c.comparedValue) === 0) return `below half of the limit's last place (rounds to nothing at ${formatDecimalText(c.limitText)} ${prettyUnit(c.unit)})`;
+  return `${formatDecimalText(c.comparedValue)} ${prettyUnit(c.unit)}`;
+}
+
+/** The specimen as tested: dimensions, masses, moisture, conditioning and loading. */
+function SpecimenData({ test, zone }: { test: CertificateTest; zone: string }) {
+  const s = test.specimen;
+  const d = test.dates;
+  if (!s && !d) return null;
+  const n = (v: number | null | undefined, unit: string, decimals = 1) => conditionValue(v ?? null, unit, decimals);
+  return (
+    <div className="cert-two" data-testid="certificate-specimen">
+      {s ? (
+        <div>
+          <h3>Specimen as tested</h3>
+          <dl className="cert-conditions">
+            <dt>Die diameter</dt><dd data-testid="specimen-diameter">{n(s.dieDiameterMm, "mm")}</dd>
+            <dt>Area</dt><dd data-testid="specimen-area">{n(s.areaMm2 / 100, "cm²", 2)}</dd>
+            <dt>Thickness, initial</dt><dd data-testid="specimen-initial-thickness">{n(s.initialThicknessMm, "mm", 2)}</dd>
+            <dt>Thickness after test</dt><dd data-testid="specimen-final-thickness">{n(s.postTestThicknessMm, "mm", 2)} <span className="doc-muted">(bentonite, geotextiles excluded)</span></dd>
+            <dt>Mass, initial</dt><dd data-testid="specimen-initial-mass">{n(s.initialMassG, "g", 2)}</dd>
+            <dt>Mass after test</dt><dd data-testid="specimen-final-mass">{n(s.postTestMassG, "g", 2)}</dd>
+            <dt>Moisture content</dt><dd data-testid="specimen-moisture">{n(s.moistureContentPct, "%")}</dd>
+          </dl>
+        </div>
+      ) : <div />}
+      <div>
+        <h3>Conditioning and loading</h3>
+        <dl className="cert-conditions">
+          {s ? <><dt>Hydration before permeation</dt><dd data-testid="specimen-hydration">{n(s.hydrationHours, "h")}</dd></> : null}
+          {s ? <><dt>Equilibration hold</dt><dd data-testid="specimen-equilibration">{n(s.equilibrationHours, "h")}</dd></> : null}
+          {s ? <><dt>Effective stress</dt><dd data-testid="specimen-effective-stress">{n(s.effectiveStressKPa, "kPa")}</dd></> : null}
+          {s ? <><dt>Hydraulic gradient</dt><dd data-testid="specimen-gradient">{s.gradient === null ? "not recorded" : conditionValue(s.gradient, "", 0).trim()} <span className="doc-muted">(mean over the reported intervals)</span></dd></> : null}
+          {s ? <><dt>Permeant</dt><dd data-testid="specimen-permeant">{s.permeant}</dd></> : null}
+          {d ? <><dt>Mounted in the cell</dt><dd className="nowrap" data-testid="test-mounted">{isoDateTime(d.mountedAt, zone)}</dd></> : null}
+          {d ? <><dt>Permeation started</dt><dd className="nowrap" data-testid="test-permeation-start">{isoDateTime(d.permeationStartedAt, zone)}</dd></> : null}
+          {d ? <><dt>Permeation ended</dt><dd className="nowrap" data-testid="test-permeation-end">{isoDateTime(d.permeationEndedAt, zone)}</dd></> : null}
+        </dl>
+      </div>
     </div>
   );
 }
@@ -31,7 +77,7 @@ function Uncertainties({ results }: { results: CertificateResultLine[] }) {
       {lines.map((r, i) => (
         <p key={i} style={{ margin: "2pt 0" }}>
           {r.uncertaintyContributors?.length
-            ? <>Uncertainty of {r.label.toLowerCase()}: expanded, coverage factor k = 2 (about 95 %); largest contributors (relative standard uncertainty): {r.uncertaintyContributors.join("; ")}.</>
+            ? <>Uncertainty of {r.label.toLowerCase()}: expanded, {r.coverage ?? "coverage factor k = 2 (about 95 %)"}; largest contributors (relative standard uncertainty): {r.uncertaintyContributors.join("; ")}.</>
             : <>Uncertainty of {r.label.toLowerCase()} not stated: {r.uncertaintyNote}</>}
         </p>
       ))}
@@ -73,11 +119,12 @@ export function CertificateTestSection({ test, index, count, zone = "UTC" }: { t
       <div className="cert-two">
         <div>
           <h3 style={{ marginTop: 0 }}>{test.method.title}</h3>
+          <div className="doc-small" data-testid="certificate-method-edition">{test.method.edition ? `Standard: ASTM ${test.method.edition}` : `Standard: ${test.method.code}, edition not recorded`}</div>
           <dl className="cert-conditions">
             <dt>Effective stress</dt><dd>{conditionValue(c.effectiveStressKPa, "kPa")}</dd>
             <dt>Head difference</dt><dd>{conditionValue(c.headKPa, "kPa")}</dd>
             <dt>Permeant</dt><dd>{c.permeant || "not recorded"}</dd>
-            <dt>Mean temperature</dt><dd>{conditionValue(c.meanTemperatureC, "°C")}</dd>
+            <dt>Temperature</dt><dd data-testid="certificate-temperature">{conditionValue(c.meanTemperatureC, "°C")} <span className="doc-muted">(mean while the reported flux was measured; k is corrected to 20 °C)</span></dd>
             <dt>Cell</dt><dd>{c.cell || "not recorded"}</dd>
             <dt>Bentonite thickness</dt><dd>{conditionValue(c.thicknessMm, "mm", 2)} <span className="doc-muted">(after the test, geotextiles excluded)</span></dd>
           </dl>
@@ -94,10 +141,12 @@ export function CertificateTestSection({ test, index, count, zone = "UTC" }: { t
         </div>
       </div>
 
+      <SpecimenData test={test} zone={zone} />
+
       <h3>Results</h3>
       <table>
         <thead>
-          <tr><th>Property</th><th className="num">Result</th><th className="nowrap">Expanded uncertainty (k = 2)</th><th className="nowrap">Limit</th><th>Verdict</th></tr>
+          <tr><th>Property</th><th className="num">Result</th><th className="nowrap">Expanded uncertainty (k = 2, ≈95 %)</th><th className="nowrap">Limit</th><th>Verdict</th></tr>
         </thead>
         <tbody>
           {test.results.map((r, i) => (
@@ -105,7 +154,7 @@ export function CertificateTestSection({ test, index, count, zone = "UTC" }: { t
               <td>{r.label}</td>
               <td className="num">{valueWithUnit(r.display, r.unit)}</td>
               <td className="nowrap">{r.uncertaintyDisplay ? withoutCoverageFactor(r.uncertaintyDisplay) : "not stated"}</td>
-              <td className="nowrap">{r.conformance ? limitLabel(r.conformance, prettyUnit) : "—"}</td>
+              <td className="nowrap">{r.conformance ? limitLabel(r.conformance) : "—"}</td>
               <td><CertificateVerdict conformance={r.conformance} /></td>
             </tr>
           ))}

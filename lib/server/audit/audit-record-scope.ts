@@ -52,6 +52,7 @@ function branchesOf(kind: LabNumberKind, id: string): AuditScopeBranch[] {
         own("Certificate", id), children("CertificateRevision", "certificateId", id),
         { table: "CertificateResult", rows: Prisma.sql`split_part("rowId", ':', 1) IN (SELECT id FROM "CertificateRevision" WHERE "certificateId" = ${id})` },
         { table: "Signature", rows: Prisma.sql`"rowId" IN (SELECT s.id FROM "Signature" s JOIN "CertificateRevision" r ON r.id = s."revisionId" WHERE r."certificateId" = ${id})` },
+        { table: "CertificateDraftContent", rows: Prisma.sql`"rowId" IN (SELECT d.id FROM "CertificateDraftContent" d JOIN "CertificateRevision" r ON r.id = d."revisionId" WHERE r."certificateId" = ${id})` },
       ];
   }
 }

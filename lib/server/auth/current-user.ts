@@ -1,7 +1,7 @@
 import "server-only";
 import { cache } from "react";
 import { getServerSession } from "next-auth";
-import type { PressureUnit, Role } from "@/lib/generated/prisma/client";
+import type { PressureUnit, ResultUnitSystem, Role } from "@/lib/generated/prisma/client";
 import { getDb } from "../db/client";
 import { getAuthOptions } from "./auth-options";
 import { findSessionUser } from "./find-session-user";
@@ -13,6 +13,8 @@ export type CurrentUser = {
   role: Role;
   clientOrganizationId: string | null;
   pressureUnit: PressureUnit;
+  /** The units results are shown in on this person's screens. */
+  resultUnits?: ResultUnitSystem;
 };
 
 /**

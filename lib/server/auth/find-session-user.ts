@@ -10,7 +10,7 @@ export async function findSessionUser(db: Db, session: { uid?: string; sv?: numb
   if (!session.uid) return null;
   const user = await db.user.findUnique({
     where: { id: session.uid },
-    select: { id: true, name: true, email: true, role: true, clientOrganizationId: true, pressureUnit: true, active: true, sessionVersion: true },
+    select: { id: true, name: true, email: true, role: true, clientOrganizationId: true, pressureUnit: true, resultUnits: true, active: true, sessionVersion: true },
   });
   if (!user || !user.active || user.sessionVersion !== session.sv) return null;
   const { active: _active, sessionVersion: _sv, ...current } = user;

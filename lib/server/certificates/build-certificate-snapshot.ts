@@ -3,7 +3,10 @@ import type { CertificateSample, CertificateSnapshot, CertificateTest } from "@/
 import { verificationUrl } from "@/lib/certificates/verification-code";
 import { ROLE_LABELS } from "@/lib/policy/permissions";
 import { conformanceSummary } from "@/lib/results/conformance-summary";
-import { formatResultValue, formatUncertainty } from "@/lib/results/format-result";
+import { COVERAGE_STATEMENT, formatPropertyUncertainty, formatPropertyValue } from "@/lib/format/result-numbers";
+import { decisionRuleText } from "@/lib/certificates/decision-rule";
+import { revisionChanges } from "@/lib/certificates/revision-changes";
+import type { CertificateSpecimen } from "@/lib/certificates/certificate-snapshot";
 import { runDeviations } from "@/lib/runs/deviations";
 import { contributorText, readResultRecord, type ResultRecord } from "@/lib/results/result-record";
 import { AppError } from "@/lib/errors/app-error";
@@ -11,6 +14,7 @@ import type { CurrentUser } from "../auth/current-user";
 import type { Tx } from "../db/transaction";
 import { evaluateRunRecords } from "../runs/evaluate-run-records";
 import { findProjectLimits } from "../specifications/find-project-limits";
+import { readDraftContent } from "./draft-content";
 
 const PROPERTY_LABELS: Record<string, string> = { INDEX_FLUX: "Index flux", HYDRAULIC_CONDUCTIVITY: "Hydraulic conductivity at 20 °C" };
 const ACTION_WORDS: Record<string, string> = { RECEIVED: "received", STORED: "stored", CUT: "cut", PREPARED: "prepared", ASSIGNED: "mounted in a cell", TEST_STARTED: "permeation started", TESTED: "tested" };
@@ -30,27 +34,37 @@ function recordLines(record: ResultRecord): Pick<CertificateTest, "calculation" 
   };
 }
 
-/** Everything a certificate revision will say, read inside the issuing transaction and frozen with it. */
+const hoursBetween = (from: Date | null | undefined, to: Date | null | undefined) => (from && to ? (to.getTime() - from.getTime()) / 3_600_000 : null);
+
+/**
+ * Everything a certificate revision will say, from its newest draft content (results included,
+ * specification, remarks, signatory, units): read inside the issuing transaction and frozen with it, or
+ * read for a preview of the draft. `signer` signs unless the draft names its signatory.
+ */
 export async function buildCertificateSnapshot(tx: Tx, options: { revisionId: string; signer: CurrentUser; meaning: string; now: Date; baseUrl: string }): Promise<CertificateSnapshot> {
   const revision = await tx.certificateRevision.findUnique({
     where: { id: options.revisionId },
     include: {
-      supersedes: { select: { revision: true } },
-      certificate: { include: { project: true, clientOrganization: true } },
+      supersedes: { select: { revision: true, snapshot: true } },
+      certificate: { include: { project: true, clientOrganization: { include: { contacts: { where: { active: true }, orderBy: { createdAt: "asc" }, take: 1 } } } } },
       results: { include: { result: { include: { approvedBy: { select: { name: true } } } } } },
     },
   });
   if (!revision) throw new AppError("NOT_FOUND");
+  const content = await readDraftContent(tx, revision.id);
+  const included = new Set(content.resultIds);
+  revision.results = revision.results.filter((r) => included.has(r.resultId));
   const lab = await tx.laboratory.findUnique({ where: { id: "lab" } });
   const { certificate } = revision;
-  const limits = await findProjectLimits({ projectId: certificate.projectId, tx });
+  const limits = content.specificationId ? await findProjectLimits({ projectId: certificate.projectId, specificationId: content.specificationId, tx }) : null;
+  const signatory = content.signatoryId ? await tx.user.findUnique({ where: { id: content.signatoryId }, select: { name: true, role: true } }) : null;
 
   const runIds = [...new Set(revision.results.map((r) => r.result.runId))];
   const runs = await tx.run.findMany({
     where: { id: { in: runIds } },
     orderBy: { labNumber: "asc" },
     include: {
-      method: { select: { code: true, title: true } },
+      method: { select: { code: true, title: true, edition: true } },
       cell: { select: { assetTag: true } },
       performedBy: { select: { name: true } },
       stages: { orderBy: { sequence: "asc" } },
@@ -64,21 +78,42 @@ export async function buildCertificateSnapshot(tx: Tx, options: { revisionId: st
   const samples = new Map<string, CertificateSample>();
   for (const run of runs) {
     const { evaluation, inputReadings, refillsAtS } = await evaluateRunRecords(tx, run.id);
+    const reportedWindow = evaluation ? evaluation.intervals.slice(-evaluation.settings.consecutiveIntervals) : [];
+    const saturation = run.stages.find((s) => s.kind === "SATURATION") ?? run.stages.find((s) => s.kind === "BACK_PRESSURE");
+    const equilibration = run.stages.find((s) => s.kind === "EQUILIBRATION");
     const runResults = revision.results.filter((r) => r.result.runId === run.id);
     // Every result of a run is approved at once and carries the same record of how it was obtained.
     const record = runResults.map((r) => readResultRecord(r.result.evaluation)).find((r) => r !== null) ?? null;
     const permeation = run.stages.find((s) => s.kind === "PERMEATION");
-    const temperatures = inputReadings.map((r) => r.temperatureC);
+    // The temperature flux was measured at: the mean over the reported intervals (all readings before any interval exists).
+    const temperatures = reportedWindow.length ? reportedWindow.map((iv) => iv.temperatureC) : inputReadings.map((r) => r.temperatureC);
+    const permeant = run.permeantName ? [run.permeantName, run.permeantSalt, run.permeantMolarityMolPerL ? `${run.permeantMolarityMolPerL} mol/L` : null].filter(Boolean).join(", ") : "de-aired water";
+    const specimen: CertificateSpecimen = {
+      dieDiameterMm: run.specimen.dieDiameterMm,
+      areaMm2: (Math.PI * run.specimen.dieDiameterMm ** 2) / 4,
+      initialThicknessMm: run.specimen.initialThicknessMm,
+      initialMassG: run.specimen.initialMassG,
+      postTestThicknessMm: run.postTestThicknessMm,
+      postTestMassG: run.postTestMassG,
+      moistureContentPct: run.specimen.moistureContentPct,
+      hydrationHours: hoursBetween(saturation?.startedAt, permeation?.startedAt),
+      equilibrationHours: hoursBetween(equilibration?.startedAt, equilibration?.endedAt ?? permeation?.startedAt),
+      effectiveStressKPa: run.effectiveStressPa === null ? null : run.effectiveStressPa / 1000,
+      gradient: reportedWindow.length ? reportedWindow.reduce((a, iv) => a + iv.gradient, 0) / reportedWindow.length : null,
+      permeant,
+    };
     const roll = run.specimen.coupon.roll;
     tests.push({
       runLabNumber: run.labNumber,
       specimenLabNumber: run.specimen.labNumber,
       rollLabNumber: roll.labNumber,
       method: run.method,
+      dates: { mountedAt: run.assignedAt.toISOString(), permeationStartedAt: iso(permeation?.startedAt), permeationEndedAt: iso(run.terminatedAt ?? permeation?.endedAt) },
+      specimen,
       conditions: {
         effectiveStressKPa: run.effectiveStressPa === null ? null : run.effectiveStressPa / 1000,
         headKPa: permeation ? (permeation.influentPressurePa - permeation.effluentPressurePa) / 1000 : null,
-        permeant: run.permeantName ? [run.permeantName, run.permeantSalt, run.permeantMolarityMolPerL ? `${run.permeantMolarityMolPerL} mol/L` : null].filter(Boolean).join(", ") : "de-aired water",
+        permeant,
         meanTemperatureC: temperatures.length ? temperatures.reduce((a, t) => a + t, 0) / temperatures.length : null,
         cell: run.cell.assetTag,
         thicknessMm: run.postTestThicknessMm,
@@ -96,9 +131,10 @@ export async function buildCertificateSnapshot(tx: Tx, options: { revisionId: st
             label: PROPERTY_LABELS[result.property] ?? result.property,
             value: result.value,
             unit: result.unit,
-            display: formatResultValue(result.value, result.unit),
+            display: formatPropertyValue(result.property, result.value, result.unit, content.unitSystem).text,
             expandedUncertainty: result.expandedUncertainty,
-            uncertaintyDisplay: result.expandedUncertainty === null ? null : formatUncertainty(result.expandedUncertainty, result.unit, { value: result.value }),
+            uncertaintyDisplay: formatPropertyUncertainty(result.property, result.expandedUncertainty, result.value, result.unit, content.unitSystem),
+            coverage: COVERAGE_STATEMENT,
             conformance: limit ? conformanceSummary({ value: result.value, unit: result.unit }, limit) : null,
             ...(uncertainty?.stated && { uncertaintyContributors: uncertainty.contributors.slice(0, 3).map(contributorText) }),
             ...(uncertainty && !uncertainty.stated && { uncertaintyNote: uncertainty.reason }),
@@ -126,7 +162,9 @@ export async function buildCertificateSnapshot(tx: Tx, options: { revisionId: st
     }
   }
 
-  return {
+  const judged = tests.flatMap((t) => t.results.filter((r) => r.conformance).map((r) => ({ label: r.label, method: r.conformance!.method })));
+  const signedBy = signatory ?? { name: options.signer.name, role: options.signer.role };
+  const snapshot: CertificateSnapshot = {
     number: certificate.number,
     revision: revision.revision,
     reason: revision.reason,
@@ -134,12 +172,28 @@ export async function buildCertificateSnapshot(tx: Tx, options: { revisionId: st
     verificationUrl: verificationUrl(options.baseUrl, revision.verificationCode),
     issuedAt: options.now.toISOString(),
     lab: { name: lab?.name ?? "Laboratory", address: lab?.address ?? "", accreditation: lab?.accreditation ?? null, timeZone: lab?.timeZone ?? "UTC" },
-    client: { name: certificate.clientOrganization.name, address: certificate.clientOrganization.address },
+    client: {
+      name: certificate.clientOrganization.name,
+      address: certificate.clientOrganization.address,
+      contact: contactText(certificate.clientOrganization.contacts[0], certificate.clientOrganization.contactEmail),
+    },
     project: { code: certificate.project.code, name: certificate.project.name, siteName: certificate.project.siteName, siteLocation: certificate.project.siteLocation },
-    specification: limits ? { name: limits.specificationName } : null,
+    specification: limits ? { name: limits.specificationName, revision: limits.specificationRevision } : null,
+    decisionRule: decisionRuleText(judged) ?? undefined,
+    remarks: content.remarks,
+    unitSystem: content.unitSystem,
     samples: [...samples.values()],
     tests,
-    signatory: { name: options.signer.name, role: ROLE_LABELS[options.signer.role], meaning: options.meaning, signedAt: options.now.toISOString() },
+    signatory: { name: signedBy.name, role: ROLE_LABELS[signedBy.role], meaning: options.meaning, signedAt: options.now.toISOString() },
     supersedes: revision.supersedes ? { revision: revision.supersedes.revision, reason: revision.reason } : null,
   };
+  const previous = revision.supersedes?.snapshot as CertificateSnapshot | null | undefined;
+  if (previous && typeof previous === "object" && Array.isArray(previous.tests)) snapshot.changes = revisionChanges(previous, snapshot);
+  return snapshot;
+}
+
+/** The client's contact for the certificate: the first active contact (name, e-mail, telephone), else the organisation's e-mail. */
+function contactText(contact: { name: string; email: string; phone: string | null } | undefined, email: string | null): string | null {
+  if (contact) return [contact.name, contact.email, contact.phone].filter(Boolean).join(", ");
+  return email;
 }

@@ -2,19 +2,28 @@ import "server-only";
 import { AppError } from "@/lib/errors/app-error";
 import { isUniqueViolation } from "../db/database-fault";
 import type { Tx } from "../db/transaction";
+import type { Db } from "../db/client";
 
 /** Revision states in which a certificate is live: a result may be on one live certificate only. */
 export const LIVE_REVISION_STATES = ["DRAFT", "ISSUED"] as const;
 
-/** Refuses results that are already on a live certificate, naming the first such result and certificate. */
-export async function refuseResultsOnLiveCertificates(tx: Tx, resultIds: string[], exceptCertificateId?: string): Promise<void> {
-  const held = await tx.certificateResult.findFirst({
+/**
+ * Refuses results that another live certificate includes, naming the first such result and certificate. A
+ * result on a draft revision that its newest content leaves out is not held (the database's rule too).
+ */
+export async function refuseResultsOnLiveCertificates(tx: Tx | Db, resultIds: string[], exceptCertificateId?: string): Promise<void> {
+  const held = await tx.certificateResult.findMany({
     where: { resultId: { in: resultIds }, revision: { status: { in: [...LIVE_REVISION_STATES] }, ...(exceptCertificateId ? { certificateId: { not: exceptCertificateId } } : {}) } },
-    select: { result: { select: { run: { select: { labNumber: true } } } }, revision: { select: { certificate: { select: { number: true } } } } },
+    select: {
+      resultId: true,
+      result: { select: { run: { select: { labNumber: true } } } },
+      revision: { select: { certificate: { select: { number: true } }, contents: { orderBy: { version: "desc" }, take: 1, select: { resultIds: true } } } },
+    },
   });
-  if (held)
-    throw new AppError("CONFLICT", `The result of ${held.result.run.labNumber} is already on certificate ${held.revision.certificate.number}; correct that certificate by a revision instead.`, {
-      details: { collidedWith: held.revision.certificate.number },
+  const holding = held.find((h) => h.revision.contents.length === 0 || h.revision.contents[0]!.resultIds.includes(h.resultId));
+  if (holding)
+    throw new AppError("CONFLICT", `The result of ${holding.result.run.labNumber} is already on certificate ${holding.revision.certificate.number}; correct that certificate by a revision instead.`, {
+      details: { collidedWith: holding.revision.certificate.number },
     });
 }
 

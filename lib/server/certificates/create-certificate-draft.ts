@@ -32,8 +32,16 @@ export async function createCertificateDraft(options: { actor: CurrentUser; inpu
       data: { number: await allocateLabNumber(tx, "certificate", options.now), projectId: project.id, clientOrganizationId: project.clientOrganizationId },
       select: { id: true, number: true },
     });
-    await tx.certificateRevision.create({
+    const revision = await tx.certificateRevision.create({
       data: { certificateId: certificate.id, revision: 1, status: "DRAFT", verificationCode: newVerificationCode(randomBytes(12)), results: { create: results.map((r) => ({ resultId: r.id })) } },
+      select: { id: true },
+    });
+    // The draft's first content: these results, judged by the project's newest specification, in the units its
+    // limits are written in (a client whose specification states cm/s gets cm/s), SI otherwise.
+    const specification = await tx.specification.findFirst({ where: { projectId: project.id, isTemplate: false }, orderBy: [{ createdAt: "desc" }, { id: "desc" }], select: { id: true, limits: { select: { unit: true } } } });
+    const unitSystem = specification?.limits.some((l) => l.unit.trim().startsWith("cm")) ? "CENTIMETRE" : "SI";
+    await tx.certificateDraftContent.create({
+      data: { revisionId: revision.id, version: 1, resultIds: results.map((r) => r.id), specificationId: specification?.id ?? null, unitSystem, createdById: options.actor.id },
     });
     return certificate;
   }).catch((error: unknown) => {

@@ -16,6 +16,7 @@ export async function getCertificate(options: { actor: CurrentUser; number: stri
         orderBy: { revision: "desc" },
         select: {
           id: true, revision: true, status: true, reason: true, verificationCode: true, pdfSha256: true, issuedAt: true, supersededAt: true, revokedAt: true,
+          contents: { orderBy: { version: "desc" }, take: 1, select: { resultIds: true } },
           signatures: { select: { signedAt: true, meaning: true, signerRole: true, signer: { select: { name: true } } } },
           results: { select: { result: { select: { id: true, property: true, value: true, unit: true, expandedUncertainty: true, run: { select: { labNumber: true, specimen: { select: { labNumber: true } } } } } } } },
         },

@@ -13,6 +13,8 @@ import { notifyCertificateIssued } from "../notices/notify-certificate-issued";
 import { parseOrThrow } from "../validation/parse";
 import { buildCertificateSnapshot } from "./build-certificate-snapshot";
 import { renderCertificatePdf } from "./render-certificate-pdf";
+import { draftProblems } from "./draft-problems";
+import { readDraftContent } from "./draft-content";
 
 /**
  * A QA manager signs and issues a draft revision: their password is asked again, the certificate's
@@ -29,10 +31,14 @@ export async function issueCertificate(options: { actor: CurrentUser; input: unk
   if (!(await checkPasswordThrottled(attempt, () => verifyPassword(input.password, signer.passwordHash))))
     throw new AppError("INVALID_INPUT", "That password is not right; nothing was signed.", { fieldErrors: { password: "Not your password." } });
 
-  const draft = await db.certificateRevision.findUnique({ where: { id: input.revisionId }, select: { status: true, revision: true, _count: { select: { results: true } }, certificate: { select: { number: true } } } });
+  const draft = await db.certificateRevision.findUnique({ where: { id: input.revisionId }, select: { status: true, revision: true, certificate: { select: { number: true, projectId: true } } } });
   if (!draft) throw new AppError("NOT_FOUND");
   if (draft.status !== "DRAFT") throw new AppError("ILLEGAL_TRANSITION", `${draft.certificate.number} revision ${draft.revision} is already ${draft.status.toLowerCase()}.`);
-  if (draft._count.results === 0) throw new AppError("ILLEGAL_TRANSITION", "A certificate needs at least one approved result.");
+  const content = await readDraftContent(db, input.revisionId);
+  const problems = await draftProblems(db, { projectId: draft.certificate.projectId, content });
+  if (problems.length) throw new AppError("INVALID_INPUT", `Nothing was signed. ${problems.map((p) => p.message).join(" ")}`);
+  if (content.signatoryId && content.signatoryId !== options.actor.id)
+    throw new AppError("FORBIDDEN", "The draft names another QA manager as its signatory; only they can sign it, or change the signatory first.");
 
   const now = options.now ?? new Date();
   const snapshot = await db.$transaction((tx) => buildCertificateSnapshot(tx, { revisionId: input.revisionId, signer: options.actor, meaning: input.meaning, now, baseUrl: publicBaseUrl() }), { timeout: 30_000 });
@@ -43,6 +49,9 @@ export async function issueCertificate(options: { actor: CurrentUser; input: unk
   const issued = await withActor(options.actor, async (tx) => {
     const revision = await tx.certificateRevision.findUniqueOrThrow({ where: { id: input.revisionId }, select: { status: true, supersedesId: true } });
     if (revision.status !== "DRAFT") throw new AppError("CONFLICT", `${snapshot.number} revision ${snapshot.revision} was issued by someone else a moment ago; reload the page.`);
+    // What was rendered is what is signed: a change saved to the draft meanwhile stops the signing.
+    if ((await readDraftContent(tx, input.revisionId)).version !== content.version)
+      throw new AppError("CONFLICT", "The draft was changed while it was being signed; nothing was signed. Look at it again and sign.");
     if (revision.supersedesId) {
       const previous = await tx.certificateRevision.updateMany({ where: { id: revision.supersedesId, status: "ISSUED" }, data: { status: "SUPERSEDED", supersededAt: now } });
       if (previous.count !== 1) throw new AppError("CONFLICT", "The revision this one corrects is no longer the issued one; reload the page.");

@@ -4,17 +4,20 @@ import { requirePermission } from "../auth/require-permission";
 import { getDb } from "../db/client";
 import { LIVE_REVISION_STATES } from "./certificate-collision";
 
-/** Approved results not on a live (draft or issued) certificate, grouped by project, for drafting a new certificate. */
+/** Approved results no live (draft or issued) certificate includes, grouped by project, for drafting a new certificate. */
 export async function listCertifiableResults(options: { actor: CurrentUser }) {
   requirePermission(options.actor, "certificate.issue");
-  const results = await getDb().result.findMany({
-    where: { approvedAt: { not: null }, certificateResults: { none: { revision: { status: { in: [...LIVE_REVISION_STATES] } } } } },
+  const found = await getDb().result.findMany({
+    where: { approvedAt: { not: null } },
     orderBy: { approvedAt: "asc" },
     select: {
       id: true, property: true, value: true, unit: true, approvedAt: true,
+      certificateResults: { where: { revision: { status: { in: [...LIVE_REVISION_STATES] } } }, select: { revision: { select: { contents: { orderBy: { version: "desc" }, take: 1, select: { resultIds: true } } } } } },
       run: { select: { labNumber: true, methodCode: true, specimen: { select: { labNumber: true, coupon: { select: { roll: { select: { labNumber: true, project: { select: { id: true, name: true, code: true, clientOrganization: { select: { name: true } } } } } } } } } } } },
     },
   });
+  // Held by a live revision unless that revision's newest content leaves it out (as the database decides).
+  const results = found.filter((r) => !r.certificateResults.some((cr) => !cr.revision.contents[0] || cr.revision.contents[0].resultIds.includes(r.id)));
   const byProject = new Map<string, { project: { id: string; name: string; code: string; client: string }; results: typeof results }>();
   for (const r of results) {
     const p = r.run.specimen.coupon.roll.project;

@@ -10,10 +10,12 @@ import { isUniqueViolation } from "../db/database-fault";
 import { withActor } from "../db/transaction";
 import { parseOrThrow } from "../validation/parse";
 import { explainCertificateCollision } from "./certificate-collision";
+import { readDraftContent } from "./draft-content";
 
 /**
- * A correction of an issued certificate: a new draft revision with the reason, the same results, pointing
- * at the revision it will supersede once it is signed and issued. The issued one is never changed.
+ * A correction of an issued certificate: a new draft revision with the reason, starting from the issued
+ * revision's content (results, specification, remarks, units), pointing at the revision it will supersede
+ * once it is signed and issued. The draft can then be changed; the issued one never is.
  */
 export async function reviseCertificate(options: { actor: CurrentUser; input: unknown }) {
   requirePermission(options.actor, "certificate.issue");
@@ -24,13 +26,19 @@ export async function reviseCertificate(options: { actor: CurrentUser; input: un
     if (!latest) throw new AppError("NOT_FOUND");
     if (latest.status === "DRAFT") throw new AppError("ILLEGAL_TRANSITION", `${latest.certificate.number} revision ${latest.revision} is still a draft: issue or change that one.`);
     if (latest.status !== "ISSUED") throw new AppError("ILLEGAL_TRANSITION", `Revision ${latest.revision} is ${latest.status.toLowerCase()}; only the issued revision can be corrected.`);
-    return tx.certificateRevision.create({
+    // The new draft starts as the issued revision reads; the QA manager then changes what needs correcting.
+    const content = await readDraftContent(tx, latest.id);
+    const created = await tx.certificateRevision.create({
       data: {
         certificateId: input.certificateId, revision: latest.revision + 1, status: "DRAFT", reason: input.reason, supersedesId: latest.id,
-        verificationCode: newVerificationCode(randomBytes(12)), results: { create: latest.results.map((r) => ({ resultId: r.resultId })) },
+        verificationCode: newVerificationCode(randomBytes(12)), results: { create: content.resultIds.map((resultId) => ({ resultId })) },
       },
       select: { id: true, revision: true },
     });
+    await tx.certificateDraftContent.create({
+      data: { revisionId: created.id, version: 1, resultIds: content.resultIds, specificationId: content.specificationId, remarks: content.remarks, signatoryId: content.signatoryId, unitSystem: content.unitSystem, createdById: options.actor.id },
+    });
+    return created;
   }).catch(async (error: unknown) => {
     // Two corrections at once: the unique revision number (and supersedes link) lets one through.
     if (!isUniqueViolation(error)) throw error;

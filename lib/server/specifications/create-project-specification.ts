@@ -20,7 +20,7 @@ export async function createProjectSpecification(options: { actor: CurrentUser; 
     if (!project) throw new AppError("NOT_FOUND", "That project does not exist.", { fieldErrors: { projectId: "Choose a project from the list." } });
     const limits = input.templateId ? await readTemplateLimits(tx, input.templateId, "templateId") : [];
     return tx.specification.create({
-      data: { name: input.name, projectId: project.id, isTemplate: false, limits: { create: limits } },
+      data: { name: input.name, revision: input.revision, projectId: project.id, isTemplate: false, limits: { create: limits } },
       select: { id: true, name: true, projectId: true, _count: { select: { limits: true } } },
     });
   });

@@ -46,8 +46,11 @@ describe("certificate document", () => {
     expect(t).toContain("calcium chloride solution, CaCl2, 0.1 mol/L");
     expect(t).toContain("8.7 × 10⁻¹¹ m/s ± 0.92 × 10⁻¹¹ m/s"); // the unit is not printed twice, nor "(k = 2)" under a heading saying it
     expect(t).not.toMatch(/m\/s m\/s/);
-    expect(t).toContain("8.7e-11 m/s, rounded to 9e-11 (ASTM E29, half to even), exceeds the maximum of 5e-11 m/s: does not conform.");
-    expect(t).toContain("Measured value 8.70 × 10⁻¹¹ m/s Rounded value compared 9e-11 m/s Limit maximum 5e-11 m/s");
+    expect(t).toContain("8.70 × 10⁻¹¹ m/s, rounded to 9 × 10⁻¹¹ m/s (ASTM E29, half to even), exceeds the maximum of 5 × 10⁻¹¹ m/s: does not conform.");
+    // Limits, rounded values and results in one notation; a rounding to 0 is said in words, never "compared value 0".
+    expect(t).toContain("Measured value 8.70 × 10⁻¹¹ m/s Rounded to the limit's last place 9 × 10⁻¹¹ m/s Limit maximum 5 × 10⁻¹¹ m/s");
+    expect(t).toContain("≤ 1 × 10⁻⁸ m³/m²/s");
+    expect(t).not.toMatch(/\de-\d/);
     // ASTM E29 in words: where rounding to the limit's place gives 0, the certificate says what that 0 means.
     expect(t).toContain("Measured 2.43 × 10⁻⁹ m³/m²/s; rounded to the nearest 1 × 10⁻⁸ m³/m²/s it reads 0. That 0 is not a measured zero: the result is smaller than half of 1 × 10⁻⁸ m³/m²/s, so it does not exceed the maximum.");
     expect(t).toContain("Measured 8.70 × 10⁻¹¹ m/s; rounded 9 × 10⁻¹¹ m/s.");
@@ -67,7 +70,7 @@ describe("certificate document", () => {
 
   it("says a revision supersedes the one before, with the reason, and lists deviations or says none", () => {
     const t = text(makeCertificateSnapshot({ tests: 2, supersedes: true, deviations: true }));
-    expect(t).toContain("Revision 2 supersedes revision 1: Client address corrected; the results are unchanged.");
+    expect(t).toContain("Amended certificate. Revision 2 supersedes revision 1, which is no longer valid. Reason: Client address corrected; the results are unchanged.");
     expect(t).toContain("Permeation paused for 3 h");
     expect(t).toContain("None.");
   });

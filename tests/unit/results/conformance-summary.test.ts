@@ -36,7 +36,7 @@ describe("hydraulic conductivity against the GRI-GCL3 maximum of 5e-11 m/s", () 
     const s = conformanceSummary({ value: 5.4e-11, unit: "m/s" }, K_MAX);
     expect(s).toEqual({
       limitText: "5e-11", unit: "m/s", direction: "MAXIMUM", method: "ROUNDING", comparedValue: "5e-11", conforms: true,
-      statement: "5.4e-11 m/s, rounded to 5e-11 (ASTM E29, half to even), does not exceed the maximum of 5e-11 m/s: conforms.",
+      statement: "5.40 × 10⁻¹¹ m/s, rounded to 5 × 10⁻¹¹ m/s (ASTM E29, half to even), does not exceed the maximum of 5 × 10⁻¹¹ m/s: conforms.",
       measuredValue: "5.40 × 10⁻¹¹ m/s",
       plainRule: "The specification states its limit to the nearest 1 × 10⁻¹¹ m/s, so the result is rounded once to that place, halves to even, and the rounded value is compared with the limit (ASTM E29 rounding method). Measured 5.40 × 10⁻¹¹ m/s; rounded 5 × 10⁻¹¹ m/s.",
     });
@@ -45,7 +45,7 @@ describe("hydraulic conductivity against the GRI-GCL3 maximum of 5e-11 m/s", () 
   it("5.5e-11 rounds half to even to 6e-11 and does not conform", () => {
     const s = conformanceSummary({ value: 5.5e-11, unit: "m/s" }, K_MAX);
     expect(s).toMatchObject({ comparedValue: "6e-11", conforms: false });
-    expect(s.statement).toBe("5.5e-11 m/s, rounded to 6e-11 (ASTM E29, half to even), exceeds the maximum of 5e-11 m/s: does not conform.");
+    expect(s.statement).toBe("5.50 × 10⁻¹¹ m/s, rounded to 6 × 10⁻¹¹ m/s (ASTM E29, half to even), exceeds the maximum of 5 × 10⁻¹¹ m/s: does not conform.");
   });
 
   it("4.5e-11 rounds half to even to 4e-11 and conforms", () => {
@@ -55,7 +55,7 @@ describe("hydraulic conductivity against the GRI-GCL3 maximum of 5e-11 m/s", () 
   it("5.01e-11 by the absolute method does not conform (any excursion fails), though rounding would pass it", () => {
     const s = conformanceSummary({ value: 5.01e-11, unit: "m/s" }, limit("5e-11", "m/s", "MAXIMUM", "ABSOLUTE"));
     expect(s).toMatchObject({ method: "ABSOLUTE", comparedValue: "5.01e-11", conforms: false });
-    expect(s.statement).toBe("5.01e-11 m/s, taken as measured (absolute method), exceeds the maximum of 5e-11 m/s: does not conform.");
+    expect(s.statement).toBe("5.01 × 10⁻¹¹ m/s, taken as measured (absolute method), exceeds the maximum of 5 × 10⁻¹¹ m/s: does not conform.");
     expect(conformanceSummary({ value: 5.01e-11, unit: "m/s" }, K_MAX).conforms).toBe(true);
   });
 
@@ -73,7 +73,7 @@ describe("index flux against the GRI-GCL3 maximum of 1e-8 m^3/m^2/s", () => {
   it("1.05e-8 rounds to 1e-8 (0.05 of the 1e-8 place is below a half) and conforms; absolutely it does not", () => {
     const r = conformanceSummary({ value: 1.05e-8, unit: "m3/m2/s" }, FLUX_MAX);
     expect(r).toMatchObject({ comparedValue: "1e-8", conforms: true });
-    expect(r.statement).toBe("1.05e-8 m³/m²/s, rounded to 1e-8 (ASTM E29, half to even), does not exceed the maximum of 1e-8 m³/m²/s: conforms.");
+    expect(r.statement).toBe("1.05 × 10⁻⁸ m³/m²/s, rounded to 1 × 10⁻⁸ m³/m²/s (ASTM E29, half to even), does not exceed the maximum of 1 × 10⁻⁸ m³/m²/s: conforms.");
     expect(conformanceSummary({ value: 1.05e-8, unit: "m3/m2/s" }, { ...FLUX_MAX, conformanceMethod: "ABSOLUTE" })).toMatchObject({ comparedValue: "1.05e-8", conforms: false });
   });
 
@@ -86,7 +86,7 @@ describe("index properties (minimum limits)", () => {
   it("swell index 23.5 mL/2 g rounds half to even to 24 and conforms to the minimum of 24", () => {
     const s = conformanceSummary({ value: 23.5, unit: "mL/2 g" }, SWELL_MIN);
     expect(s).toMatchObject({ comparedValue: "24", conforms: true });
-    expect(s.statement).toBe("23.5 mL/2 g, rounded to 24 (ASTM E29, half to even), is not below the minimum of 24 mL/2 g: conforms.");
+    expect(s.statement).toBe("23.5 mL/2 g, rounded to 24 mL/2 g (ASTM E29, half to even), is not below the minimum of 24 mL/2 g: conforms.");
   });
 
   it("swell index 23.4 rounds to 23 and does not conform; 22.5 rounds half to even to 22", () => {
@@ -119,7 +119,7 @@ describe("a limit stated in cm/s against a result in m/s (GRI-GCL3's 5e-9 cm/s)"
     const e = explainConformance({ value: 5.4e-11, unit: "m/s" }, CM_LIMIT);
     expect(e).toMatchObject({ converted: true, value: "5.4e-11", valueInLimitUnit: "5.4e-9", roundingPlace: "1e-9" });
     expect(e.summary).toMatchObject({ unit: "cm/s", comparedValue: "5e-9", conforms: true });
-    expect(e.summary.statement).toBe("5.4e-11 m/s (5.4e-9 cm/s), rounded to 5e-9 (ASTM E29, half to even), does not exceed the maximum of 5e-9 cm/s: conforms.");
+    expect(e.summary.statement).toBe("5.40 × 10⁻¹¹ m/s (5.40 × 10⁻⁹ cm/s), rounded to 5 × 10⁻⁹ cm/s (ASTM E29, half to even), does not exceed the maximum of 5 × 10⁻⁹ cm/s: conforms.");
   });
 
   it("5.5e-11 m/s -> 5.5e-9 cm/s -> 6e-9: does not conform; 4.5e-11 -> 4e-9: conforms", () => {

@@ -46,8 +46,9 @@ describe("setSpecificationLimitSchema", () => {
 });
 
 describe("createProjectSpecificationSchema", () => {
-  it("needs a project and a name; the template is optional", () => {
-    expect(createProjectSpecificationSchema.parse({ projectId: "p", name: " Cell 3 liner ", templateId: "" })).toEqual({ projectId: "p", name: "Cell 3 liner", templateId: undefined });
+  it("needs a project and a name; the revision and the template are optional", () => {
+    expect(createProjectSpecificationSchema.parse({ projectId: "p", name: " Cell 3 liner ", templateId: "" })).toEqual({ projectId: "p", name: "Cell 3 liner", revision: "", templateId: undefined });
+    expect(createProjectSpecificationSchema.parse({ projectId: "p", name: "Cell 3 liner", revision: " Rev. B, 2026-05 " }).revision).toBe("Rev. B, 2026-05");
     expect(createProjectSpecificationSchema.safeParse({ projectId: "", name: "" }).success).toBe(false);
   });
 });

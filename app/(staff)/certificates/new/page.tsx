@@ -1,5 +1,5 @@
 import { DraftCertificateForm } from "@/components/certificates/draft-certificate-form";
-import { formatResultValue } from "@/lib/results/format-result";
+import { formatPropertyValue } from "@/lib/format/result-numbers";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { listCertifiableResults } from "@/lib/server/certificates/list-certifiable-results";
 
@@ -13,7 +13,7 @@ export default async function NewCertificatePage() {
       <h1>New certificate</h1>
       <p className="muted">Approved results not yet on a certificate, by project. A certificate covers one project.</p>
       {groups.length === 0 ? <p className="empty">No approved result is waiting for a certificate.</p> : (
-        <DraftCertificateForm groups={groups.map((g) => ({ project: g.project, results: g.results.map((r) => ({ id: r.id, label: `${r.run.labNumber} · specimen ${r.run.specimen.labNumber} · roll ${r.run.specimen.coupon.roll.labNumber} · ASTM ${r.run.methodCode} · ${formatResultValue(r.value, r.unit)}` })) }))} />
+        <DraftCertificateForm groups={groups.map((g) => ({ project: g.project, results: g.results.map((r) => ({ id: r.id, label: `${r.run.labNumber} · specimen ${r.run.specimen.labNumber} · roll ${r.run.specimen.coupon.roll.labNumber} · ASTM ${r.run.methodCode} · ${formatPropertyValue(r.property, r.value, r.unit, actor.resultUnits ?? "SI").text}` })) }))} />
       )}
     </>
   );

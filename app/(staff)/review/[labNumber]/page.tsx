@@ -4,6 +4,7 @@ import { ReadingsPanel } from "@/components/readings/readings-panel";
 import { readingsPageOf } from "@/components/readings/readings-pager";
 import { ChooseSettingsForm } from "@/components/review/choose-settings-form";
 import { ResultPreview } from "@/components/review/result-preview";
+import { ResultPanel } from "@/components/results/result-panel";
 import { ReviewDecision } from "@/components/review/review-decision";
 import { CriteriaPanel } from "@/components/runs/criteria-panel";
 import { EvaluationBasis } from "@/components/runs/evaluation-basis";
@@ -31,7 +32,7 @@ export default async function ReviewRunPage({ params, searchParams }: Props) {
   const actor = await requirePageUser("run.review");
   const zone = await getLabTimeZone();
   const { labNumber } = await params;
-  const { run, deviations, verdict } = await getRun({ actor, labNumber }).catch((error) => {
+  const { run, deviations, verdict, limits } = await getRun({ actor, labNumber }).catch((error) => {
     if (isAppError(error) && error.code === "NOT_FOUND") notFound();
     throw error;
   });
@@ -63,9 +64,10 @@ export default async function ReviewRunPage({ params, searchParams }: Props) {
         <ReadingsPanel runId={run.id} labNumber={run.labNumber} actor={actor} zone={zone} basePath={`/review/${run.labNumber}`} {...readingsPageOf(await searchParams)} />
         {evaluation ? (
           <>
+            <ResultPanel verdict={verdict} method={run.methodCode as TestMethod} earlyEnd={run.terminationKind === "EARLY_END"} unitSystem={actor.resultUnits ?? "SI"} limits={limits} />
             <EvaluationBasis verdict={verdict} />
             <CriteriaPanel met={evaluation.termination.met} criteria={evaluation.termination.criteria} trend={verdict.trend} settingsLabel={verdict.settings.label} />
-            {run.state === "SUBMITTED" && <ResultPreview verdict={verdict} method={run.methodCode as TestMethod} earlyEnd={run.terminationKind === "EARLY_END"} />}
+            {run.state === "SUBMITTED" && <ResultPreview verdict={verdict} method={run.methodCode as TestMethod} earlyEnd={run.terminationKind === "EARLY_END"} unitSystem={actor.resultUnits ?? "SI"} />}
             <ZoomableRunCharts labNumber={run.labNumber} initial={verdictChartSeries(verdict)!} ratioBand={[evaluation.settings.ratioMin, evaluation.settings.ratioMax]} refillHours={verdict.refillsAtS.map((s) => s / 3600)} />
           </>
         ) : <p className="notice notice-caution">{reason}</p>}

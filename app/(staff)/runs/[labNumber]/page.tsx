@@ -2,6 +2,8 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { RecordFacts } from "@/components/samples/record-facts";
 import { CriteriaPanel } from "@/components/runs/criteria-panel";
+import { ResultPanel } from "@/components/results/result-panel";
+import type { TestMethod } from "@/lib/hydraulics";
 import { EvaluationBasis } from "@/components/runs/evaluation-basis";
 import { PressureCaution } from "@/components/runs/pressure-caution";
 import { ZoomableRunCharts } from "@/components/runs/zoomable-run-charts";
@@ -37,7 +39,7 @@ function projectedText(permeationStart: Date | null, projectedAtS: number | null
 export default async function RunPage({ params, searchParams }: Props) {
   const actor = await requirePageUser("run.view");
   const { labNumber } = await params;
-  const { run, verdict } = await getRun({ actor, labNumber }).catch((error) => {
+  const { run, verdict, limits } = await getRun({ actor, labNumber }).catch((error) => {
     if (isAppError(error) && error.code === "NOT_FOUND") notFound();
     throw error;
   });
@@ -88,6 +90,9 @@ export default async function RunPage({ params, searchParams }: Props) {
         {permeation && <p><a className="button button-quiet" href={`/api/runs/${encodeURIComponent(run.labNumber)}/xlsx`} download data-testid="run-xlsx">Download readings and intervals (XLSX)</a></p>}
         {evaluation ? (
           <>
+            {(evaluation.termination.met || run.terminationKind === "EARLY_END") && (
+              <ResultPanel verdict={verdict} method={run.methodCode as TestMethod} earlyEnd={run.terminationKind === "EARLY_END"} unitSystem={actor.resultUnits ?? "SI"} limits={limits} />
+            )}
             <CriteriaPanel met={evaluation.termination.met} criteria={evaluation.termination.criteria} trend={verdict.trend} settingsLabel={verdict.settings.label} />
             <section className="card" data-testid="projection">
               <h2>Projected end</h2>

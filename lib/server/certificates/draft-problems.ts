@@ -1,0 +1,26 @@
+import "server-only";
+import { inSentence } from "@/lib/format/sentence-case";
+import { TEST_PROPERTY_LABELS, type TestProperty } from "@/lib/results/property-units";
+import type { Db } from "../db/client";
+import type { Tx } from "../db/transaction";
+import { findProjectLimits } from "../specifications/find-project-limits";
+import type { DraftContent } from "./draft-content";
+
+/**
+ * What stops a draft from being issued, one sentence each (none: it can be signed): no results included,
+ * or a chosen specification without a limit for an included result's property.
+ */
+export async function draftProblems(db: Tx | Db, options: { projectId: string; content: DraftContent }): Promise<Array<{ field: "resultIds" | "specificationId"; message: string }>> {
+  const { content } = options;
+  if (content.resultIds.length === 0) return [{ field: "resultIds", message: "The draft includes no results: include at least one approved result before signing." }];
+  if (!content.specificationId) return [];
+  const limits = await findProjectLimits({ projectId: options.projectId, specificationId: content.specificationId, tx: db });
+  if (!limits) return [{ field: "specificationId", message: "The chosen specification no longer belongs to this project: choose another." }];
+  const results = await db.result.findMany({ where: { id: { in: content.resultIds } }, select: { property: true, run: { select: { labNumber: true } } } });
+  return results
+    .filter((r) => !limits.get(r.property as TestProperty))
+    .map((r) => ({
+      field: "specificationId" as const,
+      message: `${limits.specificationName} sets no limit for ${inSentence(TEST_PROPERTY_LABELS[r.property as TestProperty])} (the result of ${r.run.labNumber}): choose a specification that does, or leave the result out.`,
+    }));
+}
