@@ -174,7 +174,7 @@ describe.skipIf(!browserAvailable())("every number computed as the apparatus wor
     expect(text).toContain("Falling head with rising tail (ASTM D5084 method C)");
     expect(text).toContain("refilled or drained 1 time; no interval spans a refill");
     expect(text).toMatch(/Termination criteria of ASTM D5887 settings, version 2/);
-    expect(text).toMatch(/Uncertainty of index flux: expanded, coverage factor k = 2 \(about 95 %\); largest contributors \(relative standard uncertainty\): burette readings [\d.]+ % \(BP-02 calibration/);
+    expect(text).toMatch(/Uncertainty of index flux: expanded, coverage factor k = 2, for a coverage probability of about 95 %; largest contributors \(relative standard uncertainty\): burette readings [\d.]+ % \(BP-02 calibration/);
     expect(text).toContain(`Apparatus leakage of cell ${cellTag}`);
     expect(text).toMatch(/Deviations from the method None\./);
     await qa.browserContext().close();

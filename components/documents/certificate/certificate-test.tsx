@@ -2,6 +2,7 @@ import { capitalise, conditionValue, isoDateTime, prettyUnit, valueWithUnit, wit
 import type { CertificateResultLine, CertificateTest } from "@/lib/certificates/certificate-snapshot";
 import { CertificateChart } from "./certificate-chart";
 import { formatDecimalText } from "@/lib/format/result-numbers";
+import { inSentence } from "@/lib/format/sentence-case";
 import { CertificateVerdict, limitLabel } from "./certificate-verdict";
 
 /** The numbers that decided a verdict: what was compared, by which ASTM E29 method, with which limit, and the statement. */
@@ -77,8 +78,8 @@ function Uncertainties({ results }: { results: CertificateResultLine[] }) {
       {lines.map((r, i) => (
         <p key={i} style={{ margin: "2pt 0" }}>
           {r.uncertaintyContributors?.length
-            ? <>Uncertainty of {r.label.toLowerCase()}: expanded, {r.coverage ?? "coverage factor k = 2 (about 95 %)"}; largest contributors (relative standard uncertainty): {r.uncertaintyContributors.join("; ")}.</>
-            : <>Uncertainty of {r.label.toLowerCase()} not stated: {r.uncertaintyNote}</>}
+            ? <>Uncertainty of {inSentence(r.label)}: expanded, {r.coverage ?? "coverage factor k = 2 (about 95 %)"}; largest contributors (relative standard uncertainty): {r.uncertaintyContributors.join("; ")}.</>
+            : <>Uncertainty of {inSentence(r.label)} not stated: {r.uncertaintyNote}</>}
         </p>
       ))}
     </div>
