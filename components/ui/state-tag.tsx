@@ -4,7 +4,12 @@ const TONE: Record<string, string> = {
   RETURNED: "state-warn", SUBMITTED: "state-warn", APPROVED: "state-ok", TESTED: "state-ok", DISPOSED: "state-bad", ABANDONED: "state-bad",
 };
 
+/** A state's label and its tone's class (lists pass these to their rows as plain strings). */
+export function stateTagParts(state: string, kind: "item" | "run" = "item"): readonly [string, string] {
+  return [(kind === "run" ? RUN_STATE_LABELS : ITEM_STATE_LABELS)[state] ?? state, TONE[state] ?? ""];
+}
+
 export function StateTag({ state, kind = "item" }: { state: string; kind?: "item" | "run" }) {
-  const label = (kind === "run" ? RUN_STATE_LABELS : ITEM_STATE_LABELS)[state] ?? state;
-  return <span className={`state ${TONE[state] ?? ""}`}>{label}</span>;
+  const [label, tone] = stateTagParts(state, kind);
+  return <span className={`state ${tone}`}>{label}</span>;
 }

@@ -1,4 +1,4 @@
-import { zoneAbbreviation } from "./time-zone";
+import { zoneAbbreviation, zoneFormatter } from "./time-zone";
 
 /**
  * Dates as the lab writes them: 2026-12-01, and 2026-12-01 14:05 CET with the zone named. Times are stored
@@ -7,13 +7,13 @@ import { zoneAbbreviation } from "./time-zone";
 export function formatDate(date: Date | null | undefined, zone = "UTC"): string {
   if (!date) return "—";
   if (zone === "UTC") return date.toISOString().slice(0, 10);
-  return new Intl.DateTimeFormat("en-CA", { timeZone: zone, year: "numeric", month: "2-digit", day: "2-digit" }).format(date);
+  return zoneFormatter("date", zone, () => new Intl.DateTimeFormat("en-CA", { timeZone: zone, year: "numeric", month: "2-digit", day: "2-digit" })).format(date);
 }
 
 export function formatDateTime(date: Date | null | undefined, zone = "UTC"): string {
   if (!date) return "—";
   if (zone === "UTC") return `${date.toISOString().slice(0, 16).replace("T", " ")} UTC`;
-  const text = new Intl.DateTimeFormat("en-CA", { timeZone: zone, year: "numeric", month: "2-digit", day: "2-digit", hour: "2-digit", minute: "2-digit", hourCycle: "h23" })
+  const text = zoneFormatter("date-time", zone, () => new Intl.DateTimeFormat("en-CA", { timeZone: zone, year: "numeric", month: "2-digit", day: "2-digit", hour: "2-digit", minute: "2-digit", hourCycle: "h23" }))
     .format(date)
     .replace(",", "");
   return `${text} ${zoneAbbreviation(date, zone)}`;

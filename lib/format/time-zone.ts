@@ -3,24 +3,36 @@
  * in the zone the lab administrator chose (an IANA name such as "Europe/Dublin"). Pure: only Intl.
  */
 
-const formatters = new Map<string, Intl.DateTimeFormat>();
+// Building an Intl.DateTimeFormat costs far more than using one (a list page formats a hundred times), so
+// each kind is built once per zone and kept; the lab has one zone, so the maps stay tiny.
+const cached = new Map<string, Intl.DateTimeFormat>();
 
-function partsFormatter(zone: string): Intl.DateTimeFormat {
-  let formatter = formatters.get(zone);
+/** The formatter `name` for `zone`, built by `make` the first time. */
+export function zoneFormatter(name: string, zone: string, make: () => Intl.DateTimeFormat): Intl.DateTimeFormat {
+  const key = `${name} ${zone}`;
+  let formatter = cached.get(key);
   if (!formatter) {
-    formatter = new Intl.DateTimeFormat("en-GB", {
-      timeZone: zone, hourCycle: "h23", year: "numeric", month: "2-digit", day: "2-digit", hour: "2-digit", minute: "2-digit", second: "2-digit",
-    });
-    formatters.set(zone, formatter);
+    formatter = make();
+    cached.set(key, formatter);
   }
   return formatter;
 }
 
+function partsFormatter(zone: string): Intl.DateTimeFormat {
+  return zoneFormatter("parts", zone, () => new Intl.DateTimeFormat("en-GB", {
+    timeZone: zone, hourCycle: "h23", year: "numeric", month: "2-digit", day: "2-digit", hour: "2-digit", minute: "2-digit", second: "2-digit",
+  }));
+}
+
+const knownZones = new Set<string>();
+
 /** Whether `zone` is a time zone this runtime knows (IANA name, or "UTC"). */
 export function isTimeZone(zone: string): boolean {
   if (!zone || zone.length > 64) return false;
+  if (knownZones.has(zone)) return true;
   try {
     new Intl.DateTimeFormat("en-GB", { timeZone: zone });
+    knownZones.add(zone);
     return true;
   } catch {
     return false;
@@ -85,7 +97,7 @@ export function fromWallTime(text: string, zone: string): Date | null {
 
 /** The zone's short name at `date` ("GMT", "CET", "UTC", or "GMT+8" where there is no abbreviation). */
 export function zoneAbbreviation(date: Date, zone: string): string {
-  const part = new Intl.DateTimeFormat("en-GB", { timeZone: zone, timeZoneName: "short" }).formatToParts(date).find((p) => p.type === "timeZoneName");
+  const part = zoneFormatter("name", zone, () => new Intl.DateTimeFormat("en-GB", { timeZone: zone, timeZoneName: "short" })).formatToParts(date).find((p) => p.type === "timeZoneName");
   return part?.value ?? zone;
 }
 

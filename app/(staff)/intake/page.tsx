@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { IgnoredValues } from "@/components/lists/ignored-values";
 import { ListCard } from "@/components/lists/list-card";
+import { ListRows, type ListColumn } from "@/components/lists/list-rows";
 import { ListFilterBar } from "@/components/lists/list-filter-bar";
 import { Pager } from "@/components/lists/pager";
 import { SortHeader } from "@/components/lists/sort-header";
@@ -15,6 +16,7 @@ import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 export const metadata = { title: "Intake" };
 
 const BASE = "/intake";
+const SHIPMENT_COLUMNS: ListColumn[] = [{ href: "/intake/shipments/", mono: true }, {}, {}, {}, {}, { tag: true }];
 
 export default async function IntakePage({ searchParams }: { searchParams: Promise<RawSearchParams> }) {
   const actor = await requirePageUser("shipment.view");
@@ -41,18 +43,13 @@ export default async function IntakePage({ searchParams }: { searchParams: Promi
               <th>Delivered by</th><th>Rolls</th><th>Receipt</th>
             </tr>
           </thead>
-          <tbody>
-            {list.rows.map((s) => (
-              <tr key={s.id}>
-                <td className="mono"><Link href={`/intake/shipments/${s.labNumber}`}>{s.labNumber}</Link></td>
-                <td>{s.clientName}<div className="muted">{s.projectName}</div></td>
-                <td>{formatDateTime(s.receivedAt, zone)}</td>
-                <td>{s.deliveredBy}<div className="muted">{s.conditionNotes}</div></td>
-                <td>{s.rollCount}</td>
-                <td>{s.acknowledgedAt ? <span className="state state-ok">acknowledged</span> : <span className="state state-warn">to acknowledge</span>}</td>
-              </tr>
-            ))}
-          </tbody>
+          <ListRows
+            columns={SHIPMENT_COLUMNS}
+            rows={list.rows.map((s) => [
+              s.labNumber, [s.clientName, s.projectName], formatDateTime(s.receivedAt, zone), [s.deliveredBy, s.conditionNotes || null], String(s.rollCount),
+              s.acknowledgedAt ? ["acknowledged", "state-ok"] : ["to acknowledge", "state-warn"],
+            ])}
+          />
         </table>
       </ListCard>
     </>

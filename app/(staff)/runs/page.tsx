@@ -1,10 +1,11 @@
 import Link from "next/link";
 import { IgnoredValues } from "@/components/lists/ignored-values";
 import { ListCard } from "@/components/lists/list-card";
+import { ListRows, type ListColumn } from "@/components/lists/list-rows";
 import { Pager } from "@/components/lists/pager";
 import { SortHeader } from "@/components/lists/sort-header";
 import { RunListFilters } from "@/components/runs/run-list-filters";
-import { StateTag } from "@/components/ui/state-tag";
+import { stateTagParts } from "@/components/ui/state-tag";
 import { formatDate } from "@/lib/format/dates";
 import { can } from "@/lib/policy/permissions";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
@@ -16,6 +17,7 @@ import { listQueryToFilterParts, listQueryToSearch, parseListQuery, type RawSear
 export const metadata = { title: "Runs" };
 
 const BASE = "/runs";
+const RUN_COLUMNS: ListColumn[] = [{ href: "/runs/", mono: true }, {}, { mono: true }, {}, { mono: true }, {}, {}, { tag: true }];
 
 /** Every run, paged, filtered and sorted on the server; a technician has a link to their own. */
 export default async function RunsPage({ searchParams }: { searchParams: Promise<RawSearchParams> }) {
@@ -51,15 +53,13 @@ export default async function RunsPage({ searchParams }: { searchParams: Promise
               <SortHeader label="Mounted" column="mounted" {...sort} /><th>Technician</th><SortHeader label="State" column="state" {...sort} />
             </tr>
           </thead>
-          <tbody>
-            {list.rows.map((r) => (
-              <tr key={r.id}>
-                <td><Link className="mono" href={`/runs/${r.labNumber}`}>{r.labNumber}</Link></td><td>ASTM {r.methodCode}</td><td className="mono">{r.specimenLabNumber}</td>
-                <td>{r.clientName}</td><td className="mono">{r.cellAssetTag}</td><td>{formatDate(r.assignedAt, zone)}</td><td>{r.technicianName}</td>
-                <td><StateTag state={r.state} kind="run" /></td>
-              </tr>
-            ))}
-          </tbody>
+          <ListRows
+            columns={RUN_COLUMNS}
+            rows={list.rows.map((r) => [
+              r.labNumber, `ASTM ${r.methodCode}`, r.specimenLabNumber, r.clientName, r.cellAssetTag, formatDate(r.assignedAt, zone), r.technicianName,
+              stateTagParts(r.state, "run"),
+            ])}
+          />
         </table>
       </ListCard>
     </>

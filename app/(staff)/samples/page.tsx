@@ -1,11 +1,11 @@
-import Link from "next/link";
 import { IgnoredValues } from "@/components/lists/ignored-values";
 import { ListCard } from "@/components/lists/list-card";
+import { ListRows, type ListColumn } from "@/components/lists/list-rows";
 import { ListFilterBar } from "@/components/lists/list-filter-bar";
 import { Pager } from "@/components/lists/pager";
 import { SampleTabs } from "@/components/lists/sample-tabs";
 import { SortHeader } from "@/components/lists/sort-header";
-import { StateTag } from "@/components/ui/state-tag";
+import { stateTagParts } from "@/components/ui/state-tag";
 import { formatDate } from "@/lib/format/dates";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { readFilterSelection } from "@/lib/server/lists/list-filter-options";
@@ -16,6 +16,7 @@ import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 export const metadata = { title: "Samples: rolls" };
 
 const BASE = "/samples";
+const ROLL_COLUMNS: ListColumn[] = [{ href: "/samples/rolls/", mono: true }, {}, {}, {}, { mono: true }, {}, { mono: true }, { tag: true }];
 
 export default async function SamplesPage({ searchParams }: { searchParams: Promise<RawSearchParams> }) {
   const actor = await requirePageUser("sample.view");
@@ -40,20 +41,13 @@ export default async function SamplesPage({ searchParams }: { searchParams: Prom
               <th>Product</th><SortHeader label="Received" column="received" {...sort} /><th>Coupons</th><th>Where</th><SortHeader label="State" column="state" {...sort} />
             </tr>
           </thead>
-          <tbody>
-            {list.rows.map((r) => (
-              <tr key={r.id}>
-                <td className="mono"><Link href={`/samples/rolls/${r.labNumber}`}>{r.labNumber}</Link></td>
-                <td>{r.rollNumber}<div className="muted">lot {r.lotNumber}</div></td>
-                <td>{r.clientName}<div className="muted">{r.projectName}</div></td>
-                <td>{r.product}</td>
-                <td className="mono">{formatDate(r.receivedAt, zone)}<div className="muted">{r.shipmentLabNumber}</div></td>
-                <td>{r.couponCount}</td>
-                <td className="mono">{r.locationCode ?? "—"}</td>
-                <td><StateTag state={r.state} /></td>
-              </tr>
-            ))}
-          </tbody>
+          <ListRows
+            columns={ROLL_COLUMNS}
+            rows={list.rows.map((r) => [
+              r.labNumber, [r.rollNumber, `lot ${r.lotNumber}`], [r.clientName, r.projectName], r.product,
+              [formatDate(r.receivedAt, zone), r.shipmentLabNumber], String(r.couponCount), r.locationCode, stateTagParts(r.state),
+            ])}
+          />
         </table>
       </ListCard>
     </>

@@ -5,8 +5,9 @@ import { getEnv } from "../env";
 import { UTC_SESSION_OPTIONS } from "./utc-session";
 
 function createClient(connectionString: string) {
-  // Every session in UTC: timestamp columns hold UTC (lib/server/db/utc-session.ts).
-  const adapter = new PrismaPg({ connectionString, max: 10, options: UTC_SESSION_OPTIONS });
+  // Every session in UTC: timestamp columns hold UTC (lib/server/db/utc-session.ts). Twenty connections: a
+  // page asks two or three queries at once, so ten made twenty people's pages queue for a connection.
+  const adapter = new PrismaPg({ connectionString, max: 20, options: UTC_SESSION_OPTIONS });
   // Password and token hashes never leave the database unless an operation asks for them by name.
   return new PrismaClient({ adapter, omit: { user: { passwordHash: true }, apiToken: { tokenHash: true } } });
 }

@@ -1,9 +1,5 @@
 import "server-only";
-import { cache } from "react";
-import { getDb } from "../db/client";
+import { getLabFrame } from "./get-lab-frame";
 
 /** The laboratory's name for page frames; a sensible word when the lab row is not set up yet. */
-export const getLabName = cache(async (): Promise<string> => {
-  const lab = await getDb().laboratory.findUnique({ where: { id: "lab" }, select: { name: true } });
-  return lab?.name ?? "Laboratory";
-});
+export const getLabName = async (): Promise<string> => (await getLabFrame()).name;

@@ -1,8 +1,8 @@
 import "server-only";
-import { cache } from "react";
 import { isTimeZone } from "@/lib/format/time-zone";
-import { getDb, type Db } from "../db/client";
+import type { Db } from "../db/client";
 import type { Tx } from "../db/transaction";
+import { getLabFrame } from "./get-lab-frame";
 
 /** The lab's time zone (IANA name) as stored, read with the caller's client or transaction; UTC before set-up. */
 export async function readLabTimeZone(db: Db | Tx): Promise<string> {
@@ -11,4 +11,4 @@ export async function readLabTimeZone(db: Db | Tx): Promise<string> {
 }
 
 /** The same, once per request, for pages that show times. */
-export const getLabTimeZone = cache(async (): Promise<string> => readLabTimeZone(getDb()));
+export const getLabTimeZone = async (): Promise<string> => (await getLabFrame()).timeZone;

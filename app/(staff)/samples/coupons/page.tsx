@@ -1,11 +1,11 @@
-import Link from "next/link";
 import { IgnoredValues } from "@/components/lists/ignored-values";
 import { ListCard } from "@/components/lists/list-card";
+import { ListRows, type ListColumn } from "@/components/lists/list-rows";
 import { ListFilterBar } from "@/components/lists/list-filter-bar";
 import { Pager } from "@/components/lists/pager";
 import { SampleTabs } from "@/components/lists/sample-tabs";
 import { SortHeader } from "@/components/lists/sort-header";
-import { StateTag } from "@/components/ui/state-tag";
+import { stateTagParts } from "@/components/ui/state-tag";
 import { formatDateTime } from "@/lib/format/dates";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { listCoupons } from "@/lib/server/lists/list-coupons";
@@ -16,6 +16,7 @@ import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 export const metadata = { title: "Samples: coupons" };
 
 const BASE = "/samples/coupons";
+const COUPON_COLUMNS: ListColumn[] = [{ href: "/samples/coupons/", mono: true }, { href: "/samples/rolls/", mono: true }, {}, {}, {}, {}, {}, { mono: true }, { tag: true }];
 
 export default async function CouponsPage({ searchParams }: { searchParams: Promise<RawSearchParams> }) {
   const actor = await requirePageUser("sample.view");
@@ -40,21 +41,13 @@ export default async function CouponsPage({ searchParams }: { searchParams: Prom
               <th>Cut by</th><SortHeader label="Cut" column="cut" {...sort} /><th>Specimens</th><th>Where</th><SortHeader label="State" column="state" {...sort} />
             </tr>
           </thead>
-          <tbody>
-            {list.rows.map((c) => (
-              <tr key={c.id}>
-                <td className="mono"><Link href={`/samples/coupons/${c.labNumber}`}>{c.labNumber}</Link></td>
-                <td className="mono"><Link href={`/samples/rolls/${c.rollLabNumber}`}>{c.rollLabNumber}</Link></td>
-                <td>{c.positionInSample}</td>
-                <td>{c.lengthMm} × {c.widthMm}</td>
-                <td>{c.cutByName}</td>
-                <td>{formatDateTime(c.cutAt, zone)}</td>
-                <td>{c.specimenCount}</td>
-                <td className="mono">{c.locationCode ?? "—"}</td>
-                <td><StateTag state={c.state} /></td>
-              </tr>
-            ))}
-          </tbody>
+          <ListRows
+            columns={COUPON_COLUMNS}
+            rows={list.rows.map((c) => [
+              c.labNumber, c.rollLabNumber, c.positionInSample, `${c.lengthMm} × ${c.widthMm}`, c.cutByName,
+              formatDateTime(c.cutAt, zone), String(c.specimenCount), c.locationCode, stateTagParts(c.state),
+            ])}
+          />
         </table>
       </ListCard>
     </>

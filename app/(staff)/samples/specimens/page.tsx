@@ -1,11 +1,11 @@
-import Link from "next/link";
 import { IgnoredValues } from "@/components/lists/ignored-values";
 import { ListCard } from "@/components/lists/list-card";
+import { ListRows, type ListColumn } from "@/components/lists/list-rows";
 import { ListFilterBar } from "@/components/lists/list-filter-bar";
 import { Pager } from "@/components/lists/pager";
 import { SampleTabs } from "@/components/lists/sample-tabs";
 import { SortHeader } from "@/components/lists/sort-header";
-import { StateTag } from "@/components/ui/state-tag";
+import { stateTagParts } from "@/components/ui/state-tag";
 import { formatDateTime } from "@/lib/format/dates";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { readFilterSelection } from "@/lib/server/lists/list-filter-options";
@@ -16,6 +16,7 @@ import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 export const metadata = { title: "Samples: specimens" };
 
 const BASE = "/samples/specimens";
+const SPECIMEN_COLUMNS: ListColumn[] = [{ href: "/samples/specimens/", mono: true }, { href: "/samples/coupons/", subHref: "/samples/rolls/", mono: true }, {}, {}, {}, {}, {}, { mono: true }, { tag: true }];
 
 export default async function SpecimensPage({ searchParams }: { searchParams: Promise<RawSearchParams> }) {
   const actor = await requirePageUser("sample.view");
@@ -40,24 +41,13 @@ export default async function SpecimensPage({ searchParams }: { searchParams: Pr
               <th>Prepared by</th><SortHeader label="Prepared" column="prepared" {...sort} /><th>Where</th><SortHeader label="State" column="state" {...sort} />
             </tr>
           </thead>
-          <tbody>
-            {list.rows.map((s) => (
-              <tr key={s.id}>
-                <td className="mono"><Link href={`/samples/specimens/${s.labNumber}`}>{s.labNumber}</Link></td>
-                <td className="mono">
-                  <Link href={`/samples/coupons/${s.couponLabNumber}`}>{s.couponLabNumber}</Link>
-                  <div className="muted"><Link href={`/samples/rolls/${s.rollLabNumber}`}>{s.rollLabNumber}</Link></div>
-                </td>
-                <td>{s.intendedMethodCode}</td>
-                <td>{s.dieDiameterMm}</td>
-                <td>{s.initialThicknessMm}</td>
-                <td>{s.preparedByName}</td>
-                <td>{formatDateTime(s.preparedAt, zone)}</td>
-                <td className="mono">{s.locationCode ?? "—"}</td>
-                <td><StateTag state={s.state} /></td>
-              </tr>
-            ))}
-          </tbody>
+          <ListRows
+            columns={SPECIMEN_COLUMNS}
+            rows={list.rows.map((s) => [
+              s.labNumber, [s.couponLabNumber, s.rollLabNumber], s.intendedMethodCode, String(s.dieDiameterMm), String(s.initialThicknessMm),
+              s.preparedByName, formatDateTime(s.preparedAt, zone), s.locationCode, stateTagParts(s.state),
+            ])}
+          />
         </table>
       </ListCard>
     </>
