@@ -43,6 +43,7 @@ export function ListFilterBar({ values, keep, clients, projects, show, dateLabel
     <form
       className={styles.filters}
       role="search"
+      aria-label="Filter the list"
       aria-busy={pending}
       onSubmit={(event) => {
         event.preventDefault();

@@ -9,6 +9,7 @@ import type { CsvPreview } from "@/lib/server/readings/import-readings-csv";
 import { PRESSURE_UNIT_SYMBOLS, type PressureUnit } from "@/lib/units/pressure-entry";
 import { elapsedHours, fixed, pressureCell } from "./reading-format";
 import styles from "./readings.module.css";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 export type CsvImportProps = { runId: string };
 
@@ -119,7 +120,7 @@ export function CsvImport({ runId }: CsvImportProps) {
               </ul>
             </div>
           )}
-          <div className="table-wrap">
+          <ScrollArea>
             <table className={`list ${styles.mapping} ${styles.numbers}`}>
               <thead>
                 <tr>
@@ -149,7 +150,7 @@ export function CsvImport({ runId }: CsvImportProps) {
                 ))}
               </tbody>
             </table>
-          </div>
+          </ScrollArea>
           <div className={styles.actions}>
             <button type="button" className="button" data-testid="csv-save" disabled={!preview.canSave || pending} onClick={() => source && send(source, preview.mapping, "save")}>
               Save all {count} readings

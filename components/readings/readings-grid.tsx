@@ -13,6 +13,7 @@ import type { PressureUnit } from "@/lib/units/pressure-entry";
 import { recordReadingsSchema } from "@/lib/validation/readings";
 import { entryColumns, type EntryRow } from "./entry-columns";
 import styles from "./readings.module.css";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 type FormInput = z.input<typeof recordReadingsSchema>;
 type FormOutput = z.output<typeof recordReadingsSchema>;
@@ -101,7 +102,7 @@ export function ReadingsGrid({ runId, pressureUnit, withChemistry, carryOver, zo
     <form onSubmit={onSubmit} noValidate aria-label="Enter readings">
       {notice && <div className={`notice ${notice.ok ? "notice-ok" : "notice-error"}`} role="status">{notice.text}</div>}
       {typeof rowErrors?.message === "string" && <p className="field-error">{rowErrors.message}</p>}
-      <div className="table-wrap">
+      <ScrollArea>
         <table className={`list ${styles.grid}`} data-testid="readings-grid" ref={tableRef} onKeyDown={onKeyDown}>
           <thead><tr><th>#</th>{columns.map((c) => <th key={c.key}>{c.title}</th>)}<th /></tr></thead>
           <tbody>
@@ -130,7 +131,7 @@ export function ReadingsGrid({ runId, pressureUnit, withChemistry, carryOver, zo
             })}
           </tbody>
         </table>
-      </div>
+      </ScrollArea>
       <div className={styles.actions}>
         <button className="button" type="submit" disabled={formState.isSubmitting}>{formState.isSubmitting ? "Saving…" : `Save ${rows.fields.length} reading${rows.fields.length === 1 ? "" : "s"}`}</button>
         <button type="button" className="button button-quiet" onClick={addRow}>Add a row</button>

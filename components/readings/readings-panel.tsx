@@ -7,6 +7,7 @@ import { CsvImport } from "./csv-import";
 import { elapsedHours, fixed, pressureCell, pressureInput } from "./reading-format";
 import { ReadingsGrid } from "./readings-grid";
 import styles from "./readings.module.css";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 /** Props of the readings panel of the run page. `labNumber` is accepted for the page's convenience; the run is found by id. */
 export type ReadingsPanelProps = { runId: string; labNumber?: string; actor: CurrentUser; zone?: string };
@@ -58,7 +59,7 @@ export async function ReadingsPanel({ runId, actor, zone = "UTC" }: ReadingsPane
       {current.length === 0 ? (
         <p className="empty">No readings yet.</p>
       ) : (
-        <div className="table-wrap">
+        <ScrollArea>
           <table className={`list ${styles.numbers}`} data-testid="readings-table">
             <thead>
               <tr>
@@ -113,7 +114,7 @@ export async function ReadingsPanel({ runId, actor, zone = "UTC" }: ReadingsPane
               })}
             </tbody>
           </table>
-        </div>
+        </ScrollArea>
       )}
       {canRecord ? (
         <>
