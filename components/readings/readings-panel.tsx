@@ -125,6 +125,7 @@ export async function ReadingsPanel({ runId, actor, zone = "UTC" }: ReadingsPane
               pressureUnit={unit}
               withChemistry={chemistry}
               zone={zone}
+              lastTimes={current.slice(-2).map((r) => new Date(r.takenAt).toISOString())}
               carryOver={last ? { influentPressure: pressureInput(last.influentPressurePa, unit), effluentPressure: pressureInput(last.effluentPressurePa, unit), cellPressure: pressureInput(last.cellPressurePa, unit), temperatureC: last.temperatureC.toFixed(1) } : {}}
             />
           </div>
