@@ -1,3 +1,4 @@
+import { mkdirSync } from "node:fs";
 import type { Browser, Page } from "puppeteer";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { formatTypedTime } from "../lib/format/typed-time";
@@ -37,6 +38,17 @@ describe.skipIf(!browserAvailable())("a day of readings entered by keyboard alon
   });
 
   it("twelve readings with back-filled times, typed and saved with Ctrl+Enter without the mouse", async () => {
+    try {
+      await journey();
+    } catch (error) {
+      // What each open page showed when it failed (e2e/artifacts is git-ignored).
+      mkdirSync("e2e/artifacts", { recursive: true });
+      for (const [i, page] of (await browser.pages()).entries()) await page.screenshot({ path: `e2e/artifacts/readings-by-keyboard-${i}.png`, fullPage: true }).catch(() => undefined);
+      throw error;
+    }
+  }, 300_000);
+
+  async function journey() {
     const now = Date.now();
     const cellTag = `CELL-K${String(now).slice(-6)}`;
     const admin = await pageSignedInAs(browser, "admin@quillfen.test");
@@ -61,9 +73,9 @@ describe.skipIf(!browserAvailable())("a day of readings entered by keyboard alon
     await setValue(tech, "Mounted at", labDateTime(new Date(now - 5 * DAY)));
     await tech.click("button::-p-text(Start the run)");
     await tech.waitForFunction(() => /^\/runs\/T\d{2}-\d{5}$/.test(location.pathname), { timeout: 30_000 });
-    await recordStage(tech, "Saturation", ["345", "310", "310"], new Date(now - 4.5 * DAY));
+    await recordStage(tech, "Saturation", ["345", "310", "310"], new Date(now - 4.8 * DAY));
     await tech.waitForFunction(() => (document.querySelector('[data-testid="stages"]')?.querySelectorAll("tbody tr").length ?? 0) === 1, { timeout: 30_000 });
-    await recordStage(tech, "Equilibration", ["550", "515", "515"], new Date(now - 4 * DAY));
+    await recordStage(tech, "Equilibration", ["550", "515", "515"], new Date(now - 4.5 * DAY)); // a hold of more than two days
     await tech.waitForFunction(() => (document.querySelector('[data-testid="stages"]')?.querySelectorAll("tbody tr").length ?? 0) === 2, { timeout: 30_000 });
     const permeationStart = new Date(Math.floor((now - 2 * DAY) / HOUR) * HOUR);
     await recordStage(tech, "Permeation", ["550", "530", "515"], permeationStart);
@@ -121,5 +133,5 @@ describe.skipIf(!browserAvailable())("a day of readings entered by keyboard alon
     expect(await tech.evaluate(() => (window as unknown as { mousePresses: number }).mousePresses)).toBe(0);
     expect(await textOf(tech, '[data-testid="readings-table"] tbody tr[data-sequence="12"]')).toContain(inflow(11));
     await tech.browserContext().close();
-  }, 300_000);
+  }
 });

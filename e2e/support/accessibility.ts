@@ -1,3 +1,4 @@
+import { appendFileSync, mkdirSync } from "node:fs";
 import { AxePuppeteer } from "@axe-core/puppeteer";
 import type { Page } from "puppeteer";
 import { discoverPages } from "../probe/support/app-map";
@@ -18,7 +19,7 @@ const TAGS = ["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22aa", "best-prac
 export async function scan(page: Page, state: string): Promise<Finding[]> {
   const results = await new AxePuppeteer(page).withTags(TAGS).analyze();
   const where = new URL(page.url());
-  return results.violations.map((v) => ({
+  const findings = results.violations.map((v) => ({
     page: `${where.pathname}${where.search}`,
     state,
     rule: v.id,
@@ -26,6 +27,10 @@ export async function scan(page: Page, state: string): Promise<Finding[]> {
     help: v.help,
     targets: v.nodes.slice(0, 4).map((n) => n.target.join(" ")),
   }));
+  // Kept as they are found (e2e/artifacts is git-ignored), to read while a long run goes on.
+  mkdirSync("e2e/artifacts", { recursive: true });
+  appendFileSync("e2e/artifacts/axe-findings.ndjson", findings.map((f) => `${JSON.stringify(f)}\n`).join("") || `${JSON.stringify({ page: where.pathname, state, clean: true })}\n`);
+  return findings;
 }
 
 /** Findings that fail the suite: serious or critical, or any other not listed with a reason. */
@@ -49,9 +54,13 @@ export function patternOf(pathname: string, matchers: ReturnType<typeof pageMatc
   return hits[0]?.pattern ?? null;
 }
 
-/** Waits until the page has settled: loaded, hydrated (client effects ran), no requests for a moment. */
+/**
+ * Waits until the page has loaded and React has hydrated it (client effects, such as a scroll area taking
+ * its tab stop, have run). Not network idle: the router's link prefetching keeps the network busy.
+ */
 export async function settle(page: Page): Promise<void> {
-  await page.waitForNetworkIdle({ idleTime: 300, timeout: 15_000 }).catch(() => undefined);
+  await page.waitForFunction(() => document.readyState === "complete", { timeout: 30_000 });
+  await new Promise((resolve) => setTimeout(resolve, 250));
 }
 
 /** Same-origin page links on the page (no API routes, files or fragments), as path and query. */
