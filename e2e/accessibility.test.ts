@@ -77,6 +77,7 @@ async function findEntryGrid(page: Page): Promise<boolean> {
   const runs = await page.$$eval('a[href^="/runs/"]', (as) => [...new Set(as.map((a) => a.getAttribute("href")!).filter((h) => /^\/runs\/[A-Z]\d{2}-\d{5}$/.test(h)))]);
   for (const run of runs) {
     await page.goto(`${baseUrl()}${run}`);
+    await settle(page); // hydrated: the grid's keys work
     if (await page.$('[data-testid="readings-grid"]')) return true;
   }
   return false;
