@@ -77,7 +77,7 @@ async function findEntryGrid(page: Page): Promise<boolean> {
   const runs = await page.$$eval('a[href^="/runs/"]', (as) => [...new Set(as.map((a) => a.getAttribute("href")!).filter((h) => /^\/runs\/[A-Z]\d{2}-\d{5}$/.test(h)))]);
   for (const run of runs) {
     await page.goto(`${baseUrl()}${run}`);
-    await settle(page); // hydrated: the grid's keys work
+    await settle(page, '[data-testid="readings-grid"]'); // hydrated: the grid's keys work
     if (await page.$('[data-testid="readings-grid"]')) return true;
   }
   return false;
@@ -146,6 +146,7 @@ describe.skipIf(!browserAvailable())("accessibility of every page (axe-core, hea
       await page.keyboard.up("Control");
       await page.waitForSelector('[data-testid="readings-grid"] [aria-invalid="true"]');
       findings.push(...(await scan(page, "readings grid: row refused in the browser")));
+      await (await page.$("form[aria-label='Enter readings']"))?.screenshot({ path: "e2e/artifacts/readings-grid-refused-in-browser.png" });
       // A row the server refuses (a time before the run began): the refusal is announced.
       await page.click("::-p-aria(Row 1 Inflow level (mm))", { count: 3 });
       await page.type("::-p-aria(Row 1 Inflow level (mm))", "400");
@@ -157,6 +158,7 @@ describe.skipIf(!browserAvailable())("accessibility of every page (axe-core, hea
       await page.keyboard.up("Control");
       await page.waitForFunction(() => (document.querySelector('[data-testid="readings-announcer"]')?.textContent ?? "").length > 0, { timeout: 30_000 });
       findings.push(...(await scan(page, "readings grid: row refused by the server")));
+      await (await page.$("form[aria-label='Enter readings']"))?.screenshot({ path: "e2e/artifacts/readings-grid-refused-by-server.png" });
     }
 
     // Every page the role may open was reached by following links.

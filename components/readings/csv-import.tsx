@@ -114,10 +114,12 @@ export function CsvImport({ runId }: CsvImportProps) {
           {(preview.mappingErrors.length > 0 || rowsWithErrors.length > 0) && (
             <div className="notice notice-error" data-testid="csv-row-errors">
               <strong>{preview.mappingErrors.length ? "The column mapping is not complete." : `${rowsWithErrors.length} row${rowsWithErrors.length === 1 ? " has" : "s have"} problems; nothing will be saved until they are fixed in the file.`}</strong>
-              <ul className={styles.errorList}>
-                {preview.mappingErrors.map((m) => <li key={m}>{m}</li>)}
-                {rowsWithErrors.flatMap((r) => r.errors.map((e) => <li key={`${r.row}-${e.field}-${e.message}`} data-row={r.row} data-field={e.field}>{e.message}</li>))}
-              </ul>
+              <ScrollArea className={styles.errorScroll} label="Problems in the file">
+                <ul className={styles.errorList}>
+                  {preview.mappingErrors.map((m) => <li key={m}>{m}</li>)}
+                  {rowsWithErrors.flatMap((r) => r.errors.map((e) => <li key={`${r.row}-${e.field}-${e.message}`} data-row={r.row} data-field={e.field}>{e.message}</li>))}
+                </ul>
+              </ScrollArea>
             </div>
           )}
           <ScrollArea>

@@ -58,9 +58,18 @@ export function patternOf(pathname: string, matchers: ReturnType<typeof pageMatc
  * Waits until the page has loaded and React has hydrated it (client effects, such as a scroll area taking
  * its tab stop, have run). Not network idle: the router's link prefetching keeps the network busy.
  */
-export async function settle(page: Page): Promise<void> {
+export async function settle(page: Page, selector = "main"): Promise<void> {
   await page.waitForFunction(() => document.readyState === "complete", { timeout: 30_000 });
-  await new Promise((resolve) => setTimeout(resolve, 250));
+  await waitForHydration(page, selector);
+  await new Promise((resolve) => setTimeout(resolve, 150));
+}
+
+/** Waits until React has hydrated the element (it then carries React's props), so its handlers answer keys. */
+export async function waitForHydration(page: Page, selector: string): Promise<void> {
+  await page.waitForFunction((s) => {
+    const el = document.querySelector(s);
+    return !el || Object.keys(el).some((k) => k.startsWith("__reactProps"));
+  }, { timeout: 30_000 }, selector);
 }
 
 /** Same-origin page links on the page (no API routes, files or fragments), as path and query. */
