@@ -114,7 +114,8 @@ export function ReadingsGrid({ runId, pressureUnit, withChemistry, carryOver, zo
     (errors) => {
       setTriedToSave(true);
       const count = problemsOf(errors, columns, watched.length).length;
-      setNotice({ ok: false, text: `Nothing was saved: ${count} cell${count === 1 ? " needs" : "s need"} attention; the list above the grid links to each.` });
+      const whole = errors.readings?.message ?? errors.readings?.root?.message;
+      setNotice({ ok: false, text: count ? `Nothing was saved: ${count} cell${count === 1 ? " needs" : "s need"} attention; the list above the grid links to each.` : `Nothing was saved: ${whole ?? "check the rows."}` });
     },
   );
 
@@ -142,7 +143,7 @@ export function ReadingsGrid({ runId, pressureUnit, withChemistry, carryOver, zo
   };
 
   const problems = triedToSave ? problemsOf(formState.errors, columns, rows.fields.length) : [];
-  const listMessage = typeof formState.errors.readings?.message === "string" ? formState.errors.readings.message : null;
+  const listMessage = formState.errors.readings?.message ?? formState.errors.readings?.root?.message ?? null;
   return (
     <form onSubmit={onSubmit} onKeyDown={onKeyDown} noValidate aria-label="Enter readings">
       {/* Present from the start, so that what is put in it later is announced. */}
