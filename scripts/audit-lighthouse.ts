@@ -41,6 +41,12 @@ async function firstLink(page: Page, base: string, from: string, pattern: RegExp
   return found;
 }
 
+/** What an audit found, briefly: the first few rows of its details (issue types, nodes, URLs). */
+function describeItems(details: unknown): string {
+  const items = (details as { items?: Array<Record<string, unknown>> } | undefined)?.items ?? [];
+  return items.slice(0, 4).map((item) => `\n      ${JSON.stringify(item).slice(0, 400)}`).join("");
+}
+
 async function main() {
   const chromePath = process.env.CHROME_PATH ?? CHROMIUM_CANDIDATES.find((p) => existsSync(p));
   if (!chromePath) throw new Error("Lighthouse needs Chromium: install Debian's chromium or set CHROME_PATH.");
@@ -70,7 +76,7 @@ async function main() {
         const shortfalls = CATEGORIES.flatMap((c) =>
           (categories[c]?.auditRefs ?? [])
             .filter((ref) => ref.weight > 0 && audits[ref.id]?.score !== null && (audits[ref.id]?.score ?? 1) < 1)
-            .map((ref) => `${c}: ${ref.id} (${audits[ref.id]?.title})`),
+            .map((ref) => `${c}: ${ref.id} (${audits[ref.id]?.title})${describeItems(audits[ref.id]?.details)}`),
         );
         scores.push({ ...target, accessibility: Math.round((categories.accessibility?.score ?? 0) * 100), bestPractices: Math.round((categories["best-practices"]?.score ?? 0) * 100), shortfalls });
       }
