@@ -157,7 +157,7 @@ export function ReadingsGrid({ runId, pressureUnit, withChemistry, carryOver, zo
           <ul>
             {problems.map((p) => (
               <li key={p.id}>
-                <a href={`#${p.id}`} onClick={(e) => { e.preventDefault(); focusCell(p.row, p.col); }}>Row {p.row + 1}, {p.title}: {p.message}</a>
+                <a href={`#${p.id}`} onClick={(e) => { e.preventDefault(); focusCell(p.row, p.col); }}>{/^Row \d+/.test(p.message) ? p.message : `Row ${p.row + 1}, ${p.title}: ${p.message}`}</a>
               </li>
             ))}
           </ul>
