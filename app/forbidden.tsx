@@ -9,7 +9,7 @@ export default async function Forbidden() {
   const path = (await headers()).get("x-seepline-path") ?? "";
   const action = actionForPath(path);
   return (
-    <div className="plain">
+    <main className="plain" id="main" tabIndex={-1}>
       <div className="plain-card">
         <Wordmark />
         <div className="status-code">403 · not allowed</div>
@@ -20,6 +20,6 @@ export default async function Forbidden() {
         </p>
         <p><Link href="/">Back to your start page</Link></p>
       </div>
-    </div>
+    </main>
   );
 }

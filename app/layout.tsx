@@ -14,7 +14,11 @@ export default async function RootLayout({ children }: { children: React.ReactNo
   await connection();
   return (
     <html lang="en">
-      <body>{children}</body>
+      <body>
+        {/* The first tab stop of every page: past the navigation to the page's main landmark. */}
+        <a className="skip-link" href="#main">Skip to main content</a>
+        {children}
+      </body>
     </html>
   );
 }

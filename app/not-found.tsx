@@ -3,7 +3,7 @@ import { Wordmark } from "@/components/shell/wordmark";
 
 export default function NotFound() {
   return (
-    <div className="plain">
+    <main className="plain" id="main" tabIndex={-1}>
       <div className="plain-card">
         <Wordmark />
         <div className="status-code">404 · not found</div>
@@ -11,6 +11,6 @@ export default function NotFound() {
         <p>The page or record does not exist, or it is not yours to see. Check a lab number typed by hand.</p>
         <p><Link href="/">Back to your start page</Link></p>
       </div>
-    </div>
+    </main>
   );
 }

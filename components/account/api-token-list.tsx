@@ -5,6 +5,7 @@ import { formatDateTime } from "@/lib/format/dates";
 import { API_TOKEN_SCOPE_LABELS } from "@/lib/policy/api-tokens";
 import type { ActionResult } from "@/lib/server/actions/action-result";
 import type { ApiTokenRow } from "@/lib/server/api-tokens/list-api-tokens";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 function standing(token: ApiTokenRow, zone: string): string {
   if (token.revokedAt) return `revoked ${formatDateTime(token.revokedAt, zone)}`;
@@ -18,7 +19,7 @@ export function ApiTokenList({ tokens, zone, showOwner, revoke }: { tokens: ApiT
   const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
   if (!tokens.length) return <p className="muted">No API tokens yet.</p>;
   return (
-    <div className="table-wrap">
+    <ScrollArea>
       {message && <div className={message.ok ? "notice notice-ok" : "notice notice-error"} role="status">{message.text}</div>}
       <table className="list" data-testid="api-token-list">
         <thead><tr><th>Name</th>{showOwner && <th>Owner</th>}<th>May</th><th>Standing</th><th>Last used</th><th /></tr></thead>
@@ -42,6 +43,6 @@ export function ApiTokenList({ tokens, zone, showOwner, revoke }: { tokens: ApiT
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollArea>
   );
 }

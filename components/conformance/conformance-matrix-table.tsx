@@ -1,6 +1,7 @@
 import type { MatrixLimit, MatrixRow } from "@/lib/conformance/conformance-matrix";
 import { formatNumber, formatResultValue, formatUnit } from "@/lib/results/format-result";
 import { TEST_PROPERTY_LABELS } from "@/lib/results/property-units";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 // Plain words and a tone per cell; a failure is always shown in full, never folded away.
 const TONE: Record<string, string> = {
@@ -22,7 +23,7 @@ export function ConformanceMatrixTable({ limits, rows, rollHref }: { limits: Mat
   if (limits.length === 0) return <p className="empty">The project has no specification with limits yet, so there is nothing to conform to.</p>;
   if (rows.length === 0) return <p className="empty">No rolls yet.</p>;
   return (
-    <div className="table-wrap">
+    <ScrollArea>
       <table className="list" data-testid="conformance-matrix">
         <thead>
           <tr>
@@ -50,6 +51,6 @@ export function ConformanceMatrixTable({ limits, rows, rollHref }: { limits: Mat
         </tbody>
       </table>
       <p className="hint">Each result is judged against the limit as the specification writes it (ASTM E29: rounded to the limit&apos;s last place, halves to even, unless the limit is absolute); hover a result for the decision in words. A roll conforms when every property it is asked for has an approved result that conforms.</p>
-    </div>
+    </ScrollArea>
   );
 }

@@ -2,6 +2,7 @@ import { describeTestingFrequency, type PropertyCoverage } from "@/lib/conforman
 import { formatNumber } from "@/lib/results/format-result";
 import { TEST_PROPERTY_LABELS } from "@/lib/results/property-units";
 import type { MatrixLimit } from "@/lib/conformance/conformance-matrix";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 /** Per property: the specification's testing frequency, the tests the delivered area asks for, those done, and what lacks one. */
 export function SamplingCoverageTable({ coverage, limits }: { coverage: PropertyCoverage[]; limits: MatrixLimit[] }) {
@@ -9,7 +10,7 @@ export function SamplingCoverageTable({ coverage, limits }: { coverage: Property
   const area = coverage[0]!.deliveredAreaM2;
   const unsized = coverage[0]!.rollsWithoutSize;
   return (
-    <div className="table-wrap">
+    <ScrollArea>
       <p>Delivered: <strong>{formatNumber(area, { significantDigits: 4 })} m²</strong>{unsized.length > 0 && <span className="muted"> (not counted: {unsized.join(", ")}, whose size was not recorded)</span>}</p>
       <table className="list" data-testid="sampling-coverage">
         <thead><tr><th>Property</th><th>Frequency</th><th>Tests asked for</th><th>Approved</th><th>Under way</th><th>Covered</th><th>Still lacking a test</th></tr></thead>
@@ -28,6 +29,6 @@ export function SamplingCoverageTable({ coverage, limits }: { coverage: Property
           })}
         </tbody>
       </table>
-    </div>
+    </ScrollArea>
   );
 }

@@ -1,4 +1,5 @@
 import { formatDateTime } from "@/lib/format/dates";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 type CorrectionRow = { id: string; field: string; oldValue: string; newValue: string; reason: string; createdAt: Date; actor: { name: string }; itemLabel?: string };
 
@@ -6,7 +7,7 @@ type CorrectionRow = { id: string; field: string; oldValue: string; newValue: st
 export function CorrectionHistory({ corrections, zone = "UTC" }: { corrections: CorrectionRow[]; zone?: string }) {
   if (corrections.length === 0) return <p className="empty">No correction has been made.</p>;
   return (
-    <div className="table-wrap">
+    <ScrollArea>
       <table className="list" data-testid="correction-history">
         <thead><tr><th>When</th><th>By</th><th>What</th><th>Was</th><th>Now</th><th>Why</th></tr></thead>
         <tbody>
@@ -18,6 +19,6 @@ export function CorrectionHistory({ corrections, zone = "UTC" }: { corrections: 
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollArea>
   );
 }

@@ -1,5 +1,6 @@
 import { formatDateTime } from "@/lib/format/dates";
 import { ITEM_STATE_LABELS } from "@/lib/format/states";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 type Event = {
   id: string; action: string; fromState: string | null; toState: string | null; occurredAt: Date; note: string;
@@ -17,7 +18,7 @@ const state = (s: string | null) => (s ? (ITEM_STATE_LABELS[s] ?? s) : "—");
 export function CustodyLedger({ events, zone = "UTC" }: { events: Event[]; zone?: string }) {
   if (events.length === 0) return <p className="empty">No custody event recorded.</p>;
   return (
-    <div className="table-wrap">
+    <ScrollArea>
       <table className="list" data-testid="custody-ledger">
         <thead><tr><th>When</th><th>Event</th><th>By</th><th>From → to</th><th>Where</th><th>Note</th></tr></thead>
         <tbody>
@@ -33,6 +34,6 @@ export function CustodyLedger({ events, zone = "UTC" }: { events: Event[]; zone?
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollArea>
   );
 }

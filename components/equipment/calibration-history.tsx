@@ -3,6 +3,7 @@ import { readBurettePanel, readCalibrationValues, readLeakageCheck, UNCERTAINTY_
 import { formatNumber } from "@/lib/results/format-result";
 import type { EquipmentKind } from "@/lib/validation/equipment";
 import styles from "./equipment.module.css";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 type CalibrationRow = {
   id: string; calibratedAt: Date; dueAt: Date; reference: string; performedBy: string; passed: boolean; values: unknown;
@@ -30,7 +31,7 @@ export function CalibrationHistory({ kind, calibrations, zone = "UTC" }: { kind:
   if (calibrations.length === 0) return <p className="empty">No calibration on record: it cannot be used for a run until one is recorded.</p>;
   const burettes = kind === "BURETTE_PANEL";
   return (
-    <div className="table-wrap">
+    <ScrollArea>
       <table className="list" data-testid="calibration-history">
         <thead>
           <tr>
@@ -58,6 +59,6 @@ export function CalibrationHistory({ kind, calibrations, zone = "UTC" }: { kind:
           })}
         </tbody>
       </table>
-    </div>
+    </ScrollArea>
   );
 }

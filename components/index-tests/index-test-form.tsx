@@ -12,6 +12,7 @@ import { ZonedDateTimeInput } from "@/components/ui/zoned-date-time-input";
 import { INDEX_TEST_FIELDS } from "@/lib/index-tests/index-test-fields";
 import { INDEX_METHODS, type IndexMethodCode } from "@/lib/index-tests/index-test-methods";
 import { recordIndexTestSchema } from "@/lib/validation/index-tests";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 type Option = { id: string; label: string };
 
@@ -87,7 +88,7 @@ export function IndexTestForm(props: {
           </Field>
         ))}
         {layout.specimenColumns.length > 0 && (
-          <div className="table-wrap">
+          <ScrollArea>
             <p className="hint">At least {String(settings.minSpecimens)} specimen{Number(settings.minSpecimens) === 1 ? "" : "s"} (the lab&apos;s settings); leave spare rows blank.</p>
             {error("observations.specimens") && <p className="field-error" role="alert">{error("observations.specimens")}</p>}
             <table className="list" data-testid="specimen-rows">
@@ -106,7 +107,7 @@ export function IndexTestForm(props: {
                 ))}
               </tbody>
             </table>
-          </div>
+          </ScrollArea>
         )}
       </fieldset>
       <button className="button" type="submit" disabled={formState.isSubmitting}>Record the test for review</button>

@@ -15,6 +15,7 @@ import { nowToTheMinute } from "@/components/ui/now-for-input";
 import { ZonedDateTimeInput } from "@/components/ui/zoned-date-time-input";
 import { LabNumberLinks } from "./lab-number-links";
 import styles from "./shipment-form.module.css";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 type FormInput = z.input<typeof logShipmentSchema>;
 type FormOutput = z.output<typeof logShipmentSchema>;
@@ -109,9 +110,9 @@ export function ShipmentForm({ options, zone }: { options: Options; zone: string
         </div>
         {typeof rowErrors?.message === "string" && <p className="field-error">{rowErrors.message}</p>}
         {rolls.fields.length > 0 && (
-          <div className="table-wrap">
+          <ScrollArea>
             <table className={`list ${styles.grid}`} data-testid="roll-grid">
-              <thead><tr><th>#</th>{COLUMN_TITLES.map((t) => <th key={t}>{t}</th>)}<th /></tr></thead>
+              <thead><tr><th>#</th>{COLUMN_TITLES.map((t) => <th key={t}>{t}</th>)}<th><span className="visually-hidden">Remove</span></th></tr></thead>
               <tbody>
                 {rolls.fields.map((field, index) => {
                   const errors = rowErrors?.[index];
@@ -138,7 +139,7 @@ export function ShipmentForm({ options, zone }: { options: Options; zone: string
                 })}
               </tbody>
             </table>
-          </div>
+          </ScrollArea>
         )}
       </section>
       <div>

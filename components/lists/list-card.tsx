@@ -1,4 +1,5 @@
 import styles from "./lists.module.css";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 /** A list's card: title with the total found, the table (or a plain sentence when nothing matches), the pager. */
 export function ListCard({ title, total, empty, testId, actions, pager, children }: { title: string; total: number; empty: string; testId: string; actions?: React.ReactNode; pager: React.ReactNode; children: React.ReactNode }) {
@@ -10,7 +11,7 @@ export function ListCard({ title, total, empty, testId, actions, pager, children
         </h2>
         {actions}
       </div>
-      {total === 0 ? <p className="empty">{empty}</p> : <div className="table-wrap">{children}</div>}
+      {total === 0 ? <p className="empty">{empty}</p> : <ScrollArea>{children}</ScrollArea>}
       {pager}
     </section>
   );

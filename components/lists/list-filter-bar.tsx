@@ -44,6 +44,7 @@ export function ListFilterBar({ values, keep, client, project, show, dateLabel, 
     <form
       className={styles.filters}
       role="search"
+      aria-label="Filter the list"
       aria-busy={pending}
       onSubmit={(event) => {
         event.preventDefault();

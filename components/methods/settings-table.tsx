@@ -1,4 +1,5 @@
 import { SETTING_SOURCE_LABELS, type MethodSettingsDefinition } from "@/lib/methods/settings-definition";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 export function settingText(value: unknown, unit: string): string {
   if (value === null || value === undefined) return "not set";
@@ -12,7 +13,7 @@ export function settingText(value: unknown, unit: string): string {
 export function SettingsTable({ definition, values, previous }: { definition: MethodSettingsDefinition; values: Record<string, unknown>; previous?: Record<string, unknown> | null }) {
   const groups = [...new Set(definition.fields.map((f) => f.group))];
   return (
-    <div className="table-wrap">
+    <ScrollArea>
       <table className="list" data-testid="method-settings">
         <thead><tr><th>Setting</th><th>In force</th><th>Default</th><th>Source of the default</th></tr></thead>
         {groups.map((group) => (
@@ -32,6 +33,6 @@ export function SettingsTable({ definition, values, previous }: { definition: Me
           </tbody>
         ))}
       </table>
-    </div>
+    </ScrollArea>
   );
 }

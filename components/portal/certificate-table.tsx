@@ -2,6 +2,7 @@ import { revisionStanding } from "@/lib/certificates/revision-standing";
 import { formatDate } from "@/lib/format/dates";
 import type { PortalCertificate, PortalCertificateRevision } from "@/lib/server/portal/list-portal-certificates";
 import styles from "./portal.module.css";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 const TONE = { ok: "state-ok", warn: "state-warn", bad: "state-bad" } as const;
 
@@ -44,7 +45,7 @@ function Download({ number, revision }: { number: string; revision: PortalCertif
  */
 export function CertificateTable({ certificates, showProject = false, zone = "UTC" }: { certificates: PortalCertificate[]; showProject?: boolean; zone?: string }) {
   return (
-    <div className="table-wrap">
+    <ScrollArea>
       <table className={`list ${styles.certificates}`} data-testid="portal-certificates">
         <thead>
           <tr>
@@ -76,6 +77,6 @@ export function CertificateTable({ certificates, showProject = false, zone = "UT
           </tbody>
         ))}
       </table>
-    </div>
+    </ScrollArea>
   );
 }

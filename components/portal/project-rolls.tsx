@@ -2,12 +2,13 @@ import { describeRollProgress } from "@/lib/portal/roll-progress";
 import type { PortalProject } from "@/lib/server/portal/get-portal-project";
 import styles from "./portal.module.css";
 import { RollProgress } from "./roll-progress";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 /** The project's rolls, one row each, with where the roll stands in the chain. */
 export function ProjectRolls({ rolls, zone = "UTC" }: { rolls: PortalProject["rolls"]; zone?: string }) {
   if (rolls.length === 0) return <p className="empty">No rolls of this project have arrived yet.</p>;
   return (
-    <div className="table-wrap">
+    <ScrollArea>
       <table className="list" data-testid="portal-rolls">
         <thead><tr><th>Roll</th><th>Shipment</th><th>Now</th><th>Progress</th></tr></thead>
         <tbody>
@@ -28,6 +29,6 @@ export function ProjectRolls({ rolls, zone = "UTC" }: { rolls: PortalProject["ro
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollArea>
   );
 }

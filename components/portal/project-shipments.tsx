@@ -1,13 +1,14 @@
 import { formatDate } from "@/lib/format/dates";
 import type { PortalProject } from "@/lib/server/portal/get-portal-project";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 /** Shipments of the project with their receipt acknowledgements (the PDF route checks the organisation again). */
 export function ProjectShipments({ shipments, zone = "UTC" }: { shipments: PortalProject["shipments"]; zone?: string }) {
   if (shipments.length === 0) return <p className="empty">No shipment of this project has arrived yet.</p>;
   return (
-    <div className="table-wrap">
+    <ScrollArea>
       <table className="list" data-testid="portal-shipments">
-        <thead><tr><th>Shipment</th><th>Received</th><th>Rolls</th><th>Receipt</th><th></th></tr></thead>
+        <thead><tr><th>Shipment</th><th>Received</th><th>Rolls</th><th>Receipt</th><th><span className="visually-hidden">Receipt document</span></th></tr></thead>
         <tbody>
           {shipments.map((s) => (
             <tr key={s.labNumber}>
@@ -20,6 +21,6 @@ export function ProjectShipments({ shipments, zone = "UTC" }: { shipments: Porta
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollArea>
   );
 }

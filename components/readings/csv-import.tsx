@@ -9,6 +9,7 @@ import { PRESSURE_UNIT_SYMBOLS, type PressureUnit } from "@/lib/units/pressure-e
 import { MAX_READINGS_FILE_BYTES, READINGS_FILE_LIMIT_TEXT } from "@/lib/validation/readings";
 import { elapsedHours, fixed, pressureCell } from "./reading-format";
 import styles from "./readings.module.css";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 export type CsvImportProps = { labNumber: string };
 
@@ -140,14 +141,16 @@ function ImportPreview({ preview, pending, setColumn, remap, onSave, onCancel }:
       {(preview.mappingErrors.length > 0 || preview.errors.length > 0) && (
         <div className="notice notice-error" data-testid="csv-row-errors">
           <strong>{preview.mappingErrors.length ? "The column mapping is not complete." : `${rowsWithErrors.toLocaleString("en-GB")} row${rowsWithErrors === 1 ? " has" : "s have"} problems; nothing will be saved until they are fixed in the file.`}</strong>
-          <ul className={styles.errorList}>
-            {preview.mappingErrors.map((m) => <li key={m}>{m}</li>)}
-            {preview.errors.map((e) => <li key={`${e.row}-${e.field}-${e.message}`} data-row={e.row} data-field={e.field}>{e.message}</li>)}
-          </ul>
+          <ScrollArea className={styles.errorScroll} label="Problems in the file">
+            <ul className={styles.errorList}>
+              {preview.mappingErrors.map((m) => <li key={m}>{m}</li>)}
+              {preview.errors.map((e) => <li key={`${e.row}-${e.field}-${e.message}`} data-row={e.row} data-field={e.field}>{e.message}</li>)}
+            </ul>
+          </ScrollArea>
           {preview.errorsNotListed > 0 && <p>…and {preview.errorsNotListed.toLocaleString("en-GB")} more; so many usually mean a column is mapped wrongly or in the wrong unit.</p>}
         </div>
       )}
-      <div className="table-wrap">
+      <ScrollArea>
         <table className={`list ${styles.mapping} ${styles.numbers}`}>
           <thead>
             <tr>
@@ -172,7 +175,7 @@ function ImportPreview({ preview, pending, setColumn, remap, onSave, onCancel }:
             {preview.last.map(row)}
           </tbody>
         </table>
-      </div>
+      </ScrollArea>
       <div className={styles.actions}>
         <button type="button" className="button" data-testid="csv-save" disabled={!preview.canSave || pending} onClick={onSave}>
           Save all {count.toLocaleString("en-GB")} readings

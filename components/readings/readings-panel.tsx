@@ -8,6 +8,7 @@ import { ReadingsPager } from "./readings-pager";
 import { elapsedHours, fixed, pressureCell, pressureInput } from "./reading-format";
 import { ReadingsGrid } from "./readings-grid";
 import styles from "./readings.module.css";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 /**
  * Props of the readings panel of the run page. `labNumber` is accepted for the page's convenience; the run is
@@ -62,7 +63,7 @@ export async function ReadingsPanel({ runId, actor, zone = "UTC", page, basePath
       {current.length === 0 ? (
         <p className="empty">No readings yet.</p>
       ) : (
-        <div className="table-wrap">
+        <ScrollArea>
           <table className={`list ${styles.numbers}`} data-testid="readings-table">
             <thead>
               <tr>
@@ -117,7 +118,7 @@ export async function ReadingsPanel({ runId, actor, zone = "UTC", page, basePath
               })}
             </tbody>
           </table>
-        </div>
+        </ScrollArea>
       )}
       {canRecord ? (
         <>
@@ -128,6 +129,7 @@ export async function ReadingsPanel({ runId, actor, zone = "UTC", page, basePath
               pressureUnit={unit}
               withChemistry={chemistry}
               zone={zone}
+              lastTimes={current.slice(-2).map((r) => new Date(r.takenAt).toISOString())}
               carryOver={last ? { influentPressure: pressureInput(last.influentPressurePa, unit), effluentPressure: pressureInput(last.effluentPressurePa, unit), cellPressure: pressureInput(last.cellPressurePa, unit), temperatureC: last.temperatureC.toFixed(1) } : {}}
             />
           </div>

@@ -2,6 +2,7 @@ import type { RunVerdict } from "@/lib/evaluation/run-evaluation-context";
 import type { TestMethod } from "@/lib/hydraulics";
 import { UNIT_SYSTEM_LABELS, type UnitSystem } from "@/lib/format/result-numbers";
 import { reportedResults, type PreviewLimits } from "@/lib/results/reported-results";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 type Props = { verdict: RunVerdict; method: TestMethod; earlyEnd: boolean; unitSystem: UnitSystem; limits: PreviewLimits };
 
@@ -17,7 +18,7 @@ export function ResultPanel({ verdict, method, earlyEnd, unitSystem, limits }: P
     <section className="card" data-testid="result-panel">
       <h2>Reported result</h2>
       <p className="muted">Shown in {UNIT_SYSTEM_LABELS[unitSystem]} (change under My account).{limits ? ` Conformance preview against ${limits.specificationName}.` : ""}</p>
-      <div className="table-wrap">
+      <ScrollArea>
         <table className="list">
           <thead><tr><th>Property</th><th>Result</th><th>Expanded uncertainty (k = 2, about 95 %)</th><th>Limit</th><th>Preview</th></tr></thead>
           <tbody>
@@ -36,7 +37,7 @@ export function ResultPanel({ verdict, method, earlyEnd, unitSystem, limits }: P
             ))}
           </tbody>
         </table>
-      </div>
+      </ScrollArea>
       <ul className="muted" data-testid="reported-decisions">
         {reported.lines.map((l) => <li key={l.property}>{l.label}: {l.conformance.limit === null ? l.conformance.note : l.conformance.statement}</li>)}
       </ul>

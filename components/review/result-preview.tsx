@@ -4,6 +4,7 @@ import { formatPropertyUncertainty, formatPropertyValue, type UnitSystem } from 
 import { formatPercent, resultUncertainty } from "@/lib/results/result-record";
 import { resultsOfVerdict } from "@/lib/results/results-of-verdict";
 import type { TestMethod } from "@/lib/hydraulics";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 /**
  * The results approval would record, each with its expanded uncertainty (k = 2) and the full budget:
@@ -30,7 +31,7 @@ export function ResultPreview({ verdict, method, earlyEnd, unitSystem = "SI" }: 
               {r.earlyEnd && <span className="state state-warn"> ended early</span>}
             </p>
             {u.stated ? (
-              <div className="table-wrap">
+              <ScrollArea>
                 <table className="list" data-testid={`uncertainty-budget-${r.property}`}>
                   <thead><tr><th>Input</th><th>Standard uncertainty</th><th>From</th><th>Adds (relative)</th></tr></thead>
                   <tbody>
@@ -45,7 +46,7 @@ export function ResultPreview({ verdict, method, earlyEnd, unitSystem = "SI" }: 
                   </tbody>
                 </table>
                 <p className="muted">Expanded relative uncertainty {formatPercent(u.expandedRelative)} (k = 2), first-order propagation (GUM) of the inputs above.</p>
-              </div>
+              </ScrollArea>
             ) : <p className="muted" data-testid="uncertainty-not-stated">{u.reason}</p>}
           </div>
         );

@@ -26,7 +26,7 @@ export function CriteriaPanel({ met, criteria, trend = null, settingsLabel }: { 
       <h2>Termination criteria {met ? <span className="state state-ok" data-testid="criteria-verdict">all met</span> : <span className="state state-warn" data-testid="criteria-verdict">not yet met</span>}</h2>
       {settingsLabel && <p className="muted" data-testid="criteria-settings">Judged by {settingsLabel}.</p>}
       <table className="list">
-        <thead><tr><th>Criterion</th><th>Value</th><th>Limit</th><th /></tr></thead>
+        <thead><tr><th>Criterion</th><th>Value</th><th>Limit</th><th>Met</th></tr></thead>
         <tbody>
           {criteria.map((c) => (
             <tr key={c.key}>

@@ -1,5 +1,6 @@
 import { formatDateTime } from "@/lib/format/dates";
 import { formatPressure } from "@/lib/units/pressure-entry";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 type Stage = { id: string; sequence: number; kind: string; cellPressurePa: number; influentPressurePa: number; effluentPressurePa: number; startedAt: Date; endedAt: Date | null; marginAcknowledged: boolean; departureNote?: string | null; recordedBy: { name: string } };
 const KIND: Record<string, string> = { SATURATION: "Saturation", BACK_PRESSURE: "Back-pressure", EQUILIBRATION: "Equilibration", PERMEATION: "Permeation" };
@@ -7,7 +8,7 @@ const KIND: Record<string, string> = { SATURATION: "Saturation", BACK_PRESSURE: 
 export function RunStagesTable({ stages, pressureUnit, zone = "UTC" }: { stages: Stage[]; pressureUnit: "KPA" | "PSI"; zone?: string }) {
   if (stages.length === 0) return <p className="empty">No stage recorded yet: start with saturation.</p>;
   return (
-    <div className="table-wrap">
+    <ScrollArea>
       <table className="list" data-testid="stages">
         <thead><tr><th>#</th><th>Stage</th><th>Cell</th><th>Influent</th><th>Effluent</th><th>From</th><th>To</th><th>By</th></tr></thead>
         <tbody>
@@ -21,6 +22,6 @@ export function RunStagesTable({ stages, pressureUnit, zone = "UTC" }: { stages:
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollArea>
   );
 }

@@ -28,7 +28,7 @@ export function DisposeForm({ items }: { items: Item[] }) {
     <div className="stack-gap">
       {message && <div className={`notice ${message.ok ? "notice-ok" : "notice-error"}`} role="status"><LabNumberLinks text={message.text} /></div>}
       <table className="list" data-testid="retention-due">
-        <thead><tr><th /><th>Lab number</th><th>Kind</th><th>Retained until</th><th>Where</th></tr></thead>
+        <thead><tr><th><span className="visually-hidden">Choose</span></th><th>Lab number</th><th>Kind</th><th>Retained until</th><th>Where</th></tr></thead>
         <tbody>{items.map((i) => (
           <tr key={i.id}>
             <td><input type="checkbox" checked={chosen.has(i.id)} onChange={() => toggle(i.id)} aria-label={`Dispose of ${i.labNumber}`} /></td>

@@ -3,6 +3,7 @@ import { describeTestingFrequency } from "@/lib/conformance/sampling-coverage";
 import { TEST_PROPERTY_LABELS, type SpecificationLimitRow } from "@/lib/results/property-units";
 import { CONFORMANCE_METHOD_LABELS, LIMIT_DIRECTION_LABELS } from "@/lib/validation/specifications";
 import styles from "./specifications.module.css";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 export type { SpecificationLimitRow as LimitRow } from "@/lib/results/property-units";
 type LimitRow = SpecificationLimitRow;
@@ -11,7 +12,7 @@ type LimitRow = SpecificationLimitRow;
 export function LimitsTable({ limits, testId }: { limits: LimitRow[]; testId?: string }) {
   if (limits.length === 0) return <p className="empty">No limits yet.</p>;
   return (
-    <div className="table-wrap">
+    <ScrollArea>
       <table className="list" data-testid={testId}>
         <thead>
           <tr><th>Property</th><th>Limit</th><th>Unit</th><th>Direction</th><th>Sig. digits</th><th>Conformance</th><th>Test method</th><th>Testing frequency</th></tr>
@@ -31,7 +32,7 @@ export function LimitsTable({ limits, testId }: { limits: LimitRow[]; testId?: s
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollArea>
   );
 }
 

@@ -61,3 +61,26 @@ export function pdfText(bytes: Buffer): string {
   writeFileSync(file, bytes);
   return execFileSync("pdftotext", ["-layout", file, "-"], { encoding: "utf8" });
 }
+
+/**
+ * The administrator registers a permeameter cell of the journey's own (so journeys never compete for the
+ * demo's cells) and records its calibration with an apparatus leakage check, ten days back.
+ */
+export async function registerCalibratedCell(page: Page, cellTag: string, now = Date.now()): Promise<void> {
+  const day = (offsetDays: number) => new Date(now + offsetDays * 86_400_000).toISOString().slice(0, 10);
+  await page.goto(`${baseUrl()}/equipment/new`);
+  await fill(page, "Asset tag", cellTag);
+  await fill(page, "Name", "Flexible-wall permeameter cell, end-to-end test");
+  await fill(page, "Rated maximum pressure", "1000");
+  await page.click("button::-p-text(Register equipment)");
+  await page.waitForFunction((t) => location.pathname === `/equipment/${t}`, { timeout: 30_000 }, cellTag);
+  await setValue(page, "Calibrated on", day(-10));
+  await setValue(page, "Next due", day(300));
+  await fill(page, "Certificate reference", `CAL-${cellTag}`);
+  await fill(page, "Performed by", "Haldrow Metrology (invented)");
+  await setValue(page, "Checked on", day(-10));
+  await fill(page, "Leakage rate", "1e-13");
+  await fill(page, "How it was checked", "impermeable dummy specimen at 550 kPa for 24 h");
+  await page.click("button::-p-text(Record calibration)");
+  await page.waitForFunction(() => document.querySelector('[data-testid="calibration-history"]')?.textContent?.includes("leakage"), { timeout: 30_000 });
+}

@@ -4,7 +4,7 @@ import path from "node:path";
 import { ROOT } from "./paths";
 
 // What a production build depends on. A fresh clone has new file times, so contents are hashed, not dates.
-const INPUTS = ["app", "components", "lib", "public", "proxy.ts", "next.config.js", "tsconfig.json", "package-lock.json", "prisma/schema.prisma"];
+const INPUTS = ["app", "components", "lib", "public", "proxy.ts", "instrumentation-client.ts", "next.config.js", "tsconfig.json", "package-lock.json", "prisma/schema.prisma"];
 const STAMP = path.join(ROOT, ".next", "seepline-build-stamp");
 
 function* files(entry: string): Generator<string> {

@@ -14,13 +14,13 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
   const callbackUrl = safeRedirectPath(params.callbackUrl);
   if (await getCurrentUser()) redirect(callbackUrl);
   return (
-    <div className="plain">
+    <main className="plain" id="main" tabIndex={-1}>
       <div className="plain-card">
         <Wordmark />
         <h1>Sign in</h1>
         <p className="muted">{await getLabName()} · sample custody and hydraulic test records</p>
         <SignInForm callbackUrl={callbackUrl} />
       </div>
-    </div>
+    </main>
   );
 }

@@ -13,7 +13,7 @@ export default async function VerifyPage({ searchParams }: { searchParams: Promi
   const code = typed ? normaliseVerificationCode(typed) : null;
   if (code) redirect(`/verify/${code}`);
   return (
-    <div className="plain">
+    <main className="plain" id="main" tabIndex={-1}>
       <div className="plain-card">
         <Wordmark />
         <h1>Verify a certificate</h1>
@@ -28,6 +28,6 @@ export default async function VerifyPage({ searchParams }: { searchParams: Promi
           <div><button className="button" type="submit">Check</button></div>
         </form>
       </div>
-    </div>
+    </main>
   );
 }

@@ -15,7 +15,7 @@ export default async function SearchPage({ searchParams }: { searchParams: Promi
     <>
       <h1>Find by lab number</h1>
       {text && <p className="notice notice-caution" role="status">No item has the lab number <strong className="mono">{text}</strong>. Lab numbers look like S26-00001 (shipment), R26-00001 (roll), C26-00001 (coupon), P26-00001 (specimen), T26-00001 (run).</p>}
-      <LabNumberSearch />
+      <LabNumberSearch label="Search again" />
     </>
   );
 }

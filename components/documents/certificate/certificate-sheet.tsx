@@ -25,7 +25,7 @@ export function CertificateSheet({ snapshot, qrSvg, watermark }: CertificateShee
   return (
     <article className="doc cert" data-testid="certificate">
       <style dangerouslySetInnerHTML={{ __html: DOCUMENT_CSS + CERTIFICATE_CSS }} />
-      {watermark ? <div className="doc-watermark" aria-hidden="true">{watermark}</div> : null}
+      {watermark ? <div className="doc-watermark" aria-hidden="true" data-watermark={watermark} /> : null}
       <Letterhead lab={snapshot.lab} zoneStated />
       <CertificateHeading snapshot={snapshot} />
       <CertificateSummary snapshot={snapshot} />

@@ -4,7 +4,7 @@ import { Wordmark } from "@/components/shell/wordmark";
 /** An unknown, mistyped or not-yet-issued code: one answer for all, so the page reveals nothing. */
 export default function VerificationNotFound() {
   return (
-    <div className="plain">
+    <main className="plain" id="main" tabIndex={-1}>
       <div className="plain-card">
         <Wordmark />
         <div className="status-code">404 · not found</div>
@@ -13,6 +13,6 @@ export default function VerificationNotFound() {
           appears, the document may not have been issued by this laboratory: please contact us.</p>
         <p><Link href="/verify">Type a code</Link></p>
       </div>
-    </div>
+    </main>
   );
 }

@@ -40,7 +40,7 @@ export default async function VerificationPage({ params }: { params: Promise<{ c
   if (!result) notFound();
   const zone = await getLabTimeZone();
   return (
-    <div className="plain">
+    <main className="plain" id="main" tabIndex={-1}>
       <div className="plain-card">
         <Wordmark />
         <h1>Certificate verification</h1>
@@ -65,6 +65,6 @@ export default async function VerificationPage({ params }: { params: Promise<{ c
         )}
         <p className="hint"><Link href="/verify">Check another code</Link></p>
       </div>
-    </div>
+    </main>
   );
 }

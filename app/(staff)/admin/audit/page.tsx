@@ -8,6 +8,7 @@ import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { findAuditEntries, type AuditEntryPage } from "@/lib/server/audit/find-audit-entries";
 import { listAuditPeople } from "@/lib/server/audit/list-audit-people";
 import { AUDIT_PAGE_SIZE, auditSearch, readAuditFilterText, readAuditPaging } from "@/lib/validation/audit";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 export const metadata = { title: "Audit trail" };
 
@@ -47,7 +48,7 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
             {page.entries.length > 0 && <a className="button button-quiet" href={`/api/audit/export${auditSearch(filter)}`} download data-testid="audit-csv">Download all that match (CSV)</a>}
             {page.entries.length > 0 && <a className="button button-quiet" href={`/api/audit/export/xlsx${auditSearch(filter)}`} download data-testid="audit-xlsx">(XLSX)</a>}
           </div>
-          {page.entries.length === 0 ? <p className="empty">No change matches this filter.</p> : <div className="table-wrap"><AuditTable entries={page.entries} /></div>}
+          {page.entries.length === 0 ? <p className="empty">No change matches this filter.</p> : <ScrollArea><AuditTable entries={page.entries} /></ScrollArea>}
           <AuditPager filter={filter} pageSize={pageSize} newer={page.newer} older={page.older} paged={Boolean(paging.before || paging.after)} />
         </section>
       )}

@@ -3,6 +3,7 @@ import { CreateClientForm } from "@/components/clients/create-client-form";
 import { ActiveTag } from "@/components/ui/active-tag";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { listClientOrganizations } from "@/lib/server/clients/list-client-organizations";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 export const metadata = { title: "Clients" };
 
@@ -16,7 +17,7 @@ export default async function ClientsPage() {
       <div className="grid" style={{ gridTemplateColumns: "minmax(0, 2fr) minmax(300px, 1fr)" }}>
         <section className="card">
           <h2>Client organisations <span className="count">{clients.length}</span></h2>
-          <div className="table-wrap">
+          <ScrollArea>
             <table className="list" data-testid="client-list">
               <thead><tr><th>Code</th><th>Name</th><th>Projects</th><th>Contacts</th><th>Portal users</th><th>Status</th></tr></thead>
               <tbody>
@@ -30,7 +31,7 @@ export default async function ClientsPage() {
                 ))}
               </tbody>
             </table>
-          </div>
+          </ScrollArea>
         </section>
         <section className="card">
           <h2>New client</h2>

@@ -7,6 +7,7 @@ import { ROLE_LABELS } from "@/lib/policy/permissions";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { listClientOrganizationsForSelect, listUsers } from "@/lib/server/users/list-users";
 import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 export const metadata = { title: "People" };
 
@@ -21,9 +22,9 @@ export default async function UsersPage() {
       <div className="grid" style={{ gridTemplateColumns: "minmax(0, 2fr) minmax(300px, 1fr)" }}>
         <section className="card">
           <h2>Accounts <span className="count">{users.length}</span></h2>
-          <div className="table-wrap">
+          <ScrollArea>
             <table className="list" data-testid="user-list">
-              <thead><tr><th>Name</th><th>Role</th><th>Since</th><th>Status</th><th /></tr></thead>
+              <thead><tr><th>Name</th><th>Role</th><th>Since</th><th>Status</th><th><span className="visually-hidden">Actions</span></th></tr></thead>
               <tbody>
                 {users.map((u) => (
                   <tr key={u.id} data-email={u.email}>
@@ -36,7 +37,7 @@ export default async function UsersPage() {
                 ))}
               </tbody>
             </table>
-          </div>
+          </ScrollArea>
         </section>
         <section className="card">
           <h2>New account</h2>

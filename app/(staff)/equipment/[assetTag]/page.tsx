@@ -19,6 +19,7 @@ import { listEquipmentChanges } from "@/lib/server/equipment/list-equipment-chan
 import { formatPressure, paToEnteredPressure } from "@/lib/units/pressure-entry";
 import { EQUIPMENT_STATUS_LABELS } from "@/lib/validation/equipment";
 import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 type Props = { params: Promise<{ assetTag: string }> };
 
@@ -83,7 +84,7 @@ export default async function EquipmentItemPage({ params }: Props) {
         <section className="card">
           <h2>Runs that used it <span className="count">{equipment.runs.length}</span></h2>
           {equipment.runs.length === 0 ? <p className="empty">No run has used it yet.</p> : (
-            <div className="table-wrap">
+            <ScrollArea>
               <table className="list" data-testid="equipment-runs">
                 <thead><tr><th>Run</th><th>Used as</th><th>Method</th><th>Specimen</th><th>Assigned</th><th>Calibration used</th><th>State</th></tr></thead>
                 <tbody>{equipment.runs.map((r) => (
@@ -95,7 +96,7 @@ export default async function EquipmentItemPage({ params }: Props) {
                   </tr>
                 ))}</tbody>
               </table>
-            </div>
+            </ScrollArea>
           )}
         </section>
       </div>

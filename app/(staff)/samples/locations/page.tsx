@@ -1,3 +1,4 @@
+import { SampleTabs } from "@/components/lists/sample-tabs";
 import { LocationForm } from "@/components/samples/location-form";
 import { can } from "@/lib/policy/permissions";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
@@ -11,6 +12,7 @@ export default async function LocationsPage() {
   return (
     <>
       <h1>Storage locations</h1>
+      <SampleTabs current="locations" />
       <p className="muted">Where rolls, coupons and specimens are kept. Every move between them is a custody event.</p>
       <div className="grid" style={{ gridTemplateColumns: "minmax(0, 2fr) minmax(280px, 1fr)" }}>
         <section className="card">

@@ -1,3 +1,4 @@
+import { SampleTabs } from "@/components/lists/sample-tabs";
 import { DisposeForm } from "@/components/samples/dispose-form";
 import { can } from "@/lib/policy/permissions";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
@@ -12,6 +13,7 @@ export default async function RetentionPage() {
   return (
     <>
       <h1>Retention ended</h1>
+      <SampleTabs current="retention" />
       <p className="muted">Retained items whose retention period is over. Disposal is recorded for each item; nothing is deleted from the records.</p>
       <section className="card">
         {items.length === 0 ? <p className="empty">No retained item is due for disposal.</p> : can(actor.role, "sample.move") ? <DisposeForm items={items} /> : <p>{items.length} items are due; the intake clerk or a technician disposes of them.</p>}

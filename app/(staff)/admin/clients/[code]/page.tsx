@@ -9,6 +9,7 @@ import { ActiveTag } from "@/components/ui/active-tag";
 import { isAppError } from "@/lib/errors/app-error";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getClientOrganization } from "@/lib/server/clients/get-client-organization";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 type Props = { params: Promise<{ code: string }> };
 
@@ -40,9 +41,9 @@ export default async function ClientPage({ params }: Props) {
         <section className="card">
           <h2>Contacts <span className="count">{org.contacts.length}</span></h2>
           {org.contacts.length === 0 ? <p className="empty">No contact yet. A contact needs an e-mail address; with portal access they sign in to see this client&apos;s projects.</p> : (
-            <div className="table-wrap">
+            <ScrollArea>
               <table className="list" data-testid="client-contacts">
-                <thead><tr><th>Name</th><th>E-mail</th><th>Phone</th><th>Portal</th><th>Status</th><th /></tr></thead>
+                <thead><tr><th>Name</th><th>E-mail</th><th>Phone</th><th>Portal</th><th>Status</th><th><span className="visually-hidden">Actions</span></th></tr></thead>
                 <tbody>
                   {org.contacts.map((c) => (
                     <tr key={c.id} data-email={c.email}>
@@ -60,16 +61,16 @@ export default async function ClientPage({ params }: Props) {
                   ))}
                 </tbody>
               </table>
-            </div>
+            </ScrollArea>
           )}
           {org.users.length > 0 && <p className="muted">Portal users not listed as contacts: {org.users.map((u) => `${u.name} (${u.email}${u.active ? "" : ", deactivated"})`).join("; ")}.</p>}
         </section>
         <section className="card">
             <h2>Projects <span className="count">{org.projects.length}</span></h2>
             {org.projects.length === 0 ? <p className="empty">No project yet.</p> : (
-              <div className="table-wrap">
+              <ScrollArea>
                 <table className="list" data-testid="client-projects">
-                  <thead><tr><th>Code</th><th>Project and site</th><th>Specification</th><th>Shipments</th><th>Status</th><th /></tr></thead>
+                  <thead><tr><th>Code</th><th>Project and site</th><th>Specification</th><th>Shipments</th><th>Status</th><th><span className="visually-hidden">Actions</span></th></tr></thead>
                   <tbody>
                     {org.projects.map((p) => (
                       <tr key={p.id} data-code={p.code}>
@@ -88,7 +89,7 @@ export default async function ClientPage({ params }: Props) {
                     ))}
                   </tbody>
                 </table>
-              </div>
+              </ScrollArea>
             )}
         </section>
         <section className="card"><h2>New project</h2>{org.active ? <AddProjectForm clientOrganizationId={org.id} templates={org.templates} /> : <p className="empty">Reactivate the client to add projects.</p>}</section>

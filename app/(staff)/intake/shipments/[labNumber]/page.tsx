@@ -14,6 +14,7 @@ import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getGenealogy } from "@/lib/server/samples/get-genealogy";
 import { getShipment } from "@/lib/server/samples/get-sample-item";
 import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
+import { ScrollArea } from "@/components/ui/scroll-area";
 
 type Props = { params: Promise<{ labNumber: string }> };
 
@@ -56,7 +57,7 @@ export default async function ShipmentPage({ params }: Props) {
         </section>
         <section className="card">
           <h2>Rolls <span className="count">{shipment.rolls.length}</span></h2>
-          <div className="table-wrap">
+          <ScrollArea>
             <table className="list" data-testid="shipment-rolls">
               <thead><tr><th>Lab number</th><th>Roll</th><th>Lot</th><th>Product</th><th>Manufacturer</th><th>Size (mm)</th><th>MD marked</th><th>Condition</th><th>State</th></tr></thead>
               <tbody>
@@ -68,7 +69,7 @@ export default async function ShipmentPage({ params }: Props) {
                 ))}
               </tbody>
             </table>
-          </div>
+          </ScrollArea>
         </section>
         <div className="grid">
           <section className="card">
