@@ -52,7 +52,7 @@ export default async function CertificatePage({ params }: Props) {
             {r.status === "DRAFT" && draft && r.id === latest?.id && (
               <div className="stack-gap" data-testid="draft-editor">
                 <h3>Draft content <span className="count">version {draft.content.version}</span></h3>
-                <EditDraftForm key={draft.content.version} revisionId={r.id} content={draft.content} results={draft.results} specifications={draft.specifications} signatories={draft.signatories} />
+                <EditDraftForm key={draft.content.version} revisionId={r.id} content={draft.content} results={draft.results} indexResults={draft.indexResults} specifications={draft.specifications} signatories={draft.signatories} />
                 <p><a className="button button-quiet" href={`/api/certificates/${certificate.number}/preview?revision=${r.revision}`} target="_blank" rel="noopener" data-testid="draft-preview">Preview the PDF</a> <span className="muted">The certificate exactly as it would be issued now, marked DRAFT on every page.</span></p>
                 {draft.problems.length > 0 && <div className="notice notice-caution" data-testid="draft-problems">{draft.problems.map((p) => <p key={p.message}>{p.message}</p>)}</div>}
                 <IssueCertificateForm revisionId={r.id} />
