@@ -206,10 +206,10 @@ describe.skipIf(!browserAvailable())("a roll's whole conformance job: index test
     await qa.waitForSelector(pond);
     await qa.click(`${pond} button::-p-text(Choose every result the specification limits)`);
     // The roll's run (index flux, k) and its index tests are offered and chosen; GCL mass per area (no limit) is not.
-    const chosen = await qa.$$eval(`${pond} label`, (labels) => labels.filter((l) => (l.querySelector("input") as HTMLInputElement).checked).map((l) => (l as HTMLElement).innerText));
+    const chosen = await qa.$$eval(`${pond} label`, (labels) => labels.filter((l) => (l.querySelector("input") as HTMLInputElement).checked).map((l) => (l as HTMLElement).innerText.trim()));
     const mine = chosen.filter((l) => l.includes(run) || l.includes(roll));
     // Two run results (index flux and k) and five index-test results: swell, fluid loss, bentonite mass, tensile, peel.
-    expect(mine.filter((l) => l.startsWith(run))).toHaveLength(2);
+    expect(mine.filter((l) => l.startsWith(run)), chosen.join("\n")).toHaveLength(2);
     expect(mine.filter((l) => l.startsWith(`roll ${roll}`)).map((l) => l.split(" · ")[2]!.replace(/ [\d.]+ .*$/, "")).sort()).toEqual(
       ["bentonite fluid loss", "bentonite mass per unit area", "bentonite swell index", "peel strength", "tensile strength"],
     );
