@@ -191,13 +191,13 @@ function makeIndexTests(roll: string, issuedAt: number): CertificateIndexTest[] 
   const base = { performedBy: "Quenby Ardlow", approvedBy: "Ottilie Brannagh", approvedAt: new Date(issuedAt - 2 * 24 * HOUR).toISOString(), departures: [] };
   return [
     {
-      ...base, rollLabNumber: roll, couponLabNumber: "C26-00209", method: { code: "ASTM D6768", title: "Tensile strength (ASTM D6768)", edition: "D6768/D6768M-20" },
+      ...base, rollLabNumber: roll, couponLabNumber: "C26-00209", method: { code: "D6768", title: "Tensile strength (ASTM D6768)", edition: "D6768/D6768M-20" },
       testedAt: new Date(issuedAt - 3 * 24 * HOUR).toISOString(), specimenValues: ["9.1 kN/m", "8.9 kN/m", "9.5 kN/m", "9.0 kN/m", "8.7 kN/m"],
       instruments: ["Tensile frame TF-01 (calibration CAL-TF-01-2026)", "Load cell LC-01 (calibration CAL-LC-01-2026)"],
       results: [line("TENSILE_STRENGTH", "Tensile strength", 9.02, "kN/m", "9.0 kN/m", "4", "0.30 kN/m", 5)],
     },
     {
-      ...base, rollLabNumber: roll, couponLabNumber: null, method: { code: "ASTM D5890", title: "Swell index (ASTM D5890)", edition: "D5890-19" },
+      ...base, rollLabNumber: roll, couponLabNumber: null, method: { code: "D5890", title: "Swell index (ASTM D5890)", edition: "D5890-19" },
       testedAt: new Date(issuedAt - 3 * 24 * HOUR).toISOString(), specimenValues: ["27 mL/2 g"],
       instruments: ["Balance BAL-01 (calibration CAL-BAL-01-2026)", "Graduated cylinder GC-01 (calibration CAL-GC-01-2026)"],
       results: [line("SWELL_INDEX", "Bentonite swell index", 27, "mL/2 g", "27 mL/2 g", "24", null, 1)],

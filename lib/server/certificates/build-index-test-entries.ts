@@ -61,7 +61,7 @@ export async function buildIndexTestEntries(tx: Tx, options: { indexResultIds: s
     return {
       rollLabNumber: test.roll.labNumber,
       couponLabNumber: test.coupon?.labNumber ?? null,
-      method: { code: `ASTM ${test.methodCode}`, title, edition: method?.edition || undefined },
+      method: { code: test.methodCode, title, edition: method?.edition || undefined },
       testedAt: test.testedAt.toISOString(),
       specimenValues: main ? (record.specimenValues ?? []).map((v) => formatPropertyValue(main.property, v, main.unit, options.unitSystem).text) : [],
       departures: record.departures ?? [],
