@@ -1,6 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { buildCertificateSnapshot } from "@/lib/server/certificates/build-certificate-snapshot";
 import { createCertificateDraft } from "@/lib/server/certificates/create-certificate-draft";
+import { issueCertificate } from "@/lib/server/certificates/issue-certificate";
+import { reviseCertificate } from "@/lib/server/certificates/revise-certificate";
+import { findBrowser } from "../../e2e/support/find-browser";
 import { editCertificateDraft } from "@/lib/server/certificates/edit-certificate-draft";
 import { getDraftEditor } from "@/lib/server/certificates/get-draft-editor";
 import { listCertifiableResults } from "@/lib/server/certificates/list-certifiable-results";
@@ -10,7 +13,7 @@ import { withActor } from "@/lib/server/db/transaction";
 import { isUniqueViolation } from "@/lib/server/db/database-fault";
 import { setSpecificationLimit } from "@/lib/server/specifications/set-specification-limit";
 import { daysAgo } from "../support/custody-chain";
-import { db, makeUser } from "../support/factories";
+import { db, makeUser, TEST_PASSWORD } from "../support/factories";
 import { makeIndexInstruments, OBSERVATIONS, receiveProjectRolls } from "../support/index-test-fixtures";
 import { codeOf, failure } from "../support/refusals";
 
@@ -36,6 +39,9 @@ async function scenario() {
   const fluidResult = (await db().indexTestResult.findFirstOrThrow({ where: { indexTestId: fluid.id } })).id;
   return { qa, project, a, b, swellResult, fluidResult };
 }
+
+const browser = findBrowser();
+if (!browser && process.env.SEEPLINE_REQUIRE_BROWSER === "1") throw new Error("these tests issue certificates and need Chromium");
 
 const latestRevision = (certificateId: string) => db().certificateRevision.findFirstOrThrow({ where: { certificateId }, orderBy: { revision: "desc" } });
 
@@ -92,5 +98,19 @@ describe("index-test results on certificates", () => {
     // ...and then the first draft cannot take it back.
     const back = await failure(editCertificateDraft({ actor: qa, input: { revisionId: draft.id, baseVersion: 2, resultIds: [], indexResultIds: [swellResult], unitSystem: "SI" } }));
     expect(back.message).toContain(`already on certificate ${taken.number}`);
+  });
+
+  it.skipIf(!browser)("a revision carries the index-test results on, can leave one out, and says so on its first page", async () => {
+    const { qa, project, swellResult } = await scenario();
+    const certificate = await createCertificateDraft({ actor: qa, input: { projectId: project.id, indexResultIds: [swellResult] } });
+    await issueCertificate({ actor: qa, input: { revisionId: (await latestRevision(certificate.id)).id, password: TEST_PASSWORD } });
+    // The issued revision still holds the result: another certificate cannot take it.
+    expect((await failure(createCertificateDraft({ actor: qa, input: { projectId: project.id, indexResultIds: [swellResult] } }))).code).toBe("CONFLICT");
+    await reviseCertificate({ actor: qa, input: { certificateId: certificate.id, reason: "Swell index to be reported on the lot's own certificate" } });
+    const draft = await latestRevision(certificate.id);
+    expect((await db().certificateDraftContent.findFirstOrThrow({ where: { revisionId: draft.id } })).indexResultIds).toEqual([swellResult]);
+    await editCertificateDraft({ actor: qa, input: { revisionId: draft.id, baseVersion: 1, resultIds: [], indexResultIds: [], remarks: "Index results follow separately.", unitSystem: "SI" } });
+    const snapshot = await db().$transaction((tx) => buildCertificateSnapshot(tx, { revisionId: draft.id, signer: qa, meaning: "Reviewed", now: new Date(), baseUrl: "http://localhost" }));
+    expect(snapshot.changes).toEqual(expect.arrayContaining([expect.stringMatching(/^Removed: bentonite swell index of roll R\d{2}-\d{5} \(ASTM D5890\)\.$/)]));
   });
 });
