@@ -204,6 +204,13 @@ describe.skipIf(!browserAvailable())("a roll's whole conformance job: index test
     await qa.click("a::-p-text(New certificate)");
     const pond = 'section[aria-label="Results of Tailings pond B lining"]';
     await qa.waitForSelector(pond);
+    // A certificate may cover one shipment: choosing the roll's shipment takes only results of rolls it brought.
+    const ownShipment = /\(shipment (S\d{2}-\d{5})\)/.exec((await qa.$$eval(`${pond} label`, (ls) => ls.map((l) => (l as HTMLElement).innerText))).find((l) => l.includes(`roll ${roll} `)) ?? "")?.[1];
+    expect(ownShipment, "each result is labelled with its roll's shipment").toMatch(/^S\d{2}-\d{5}$/);
+    await qa.click(`${pond} button::-p-text(Only shipment ${ownShipment})`);
+    const ofShipment = await qa.$$eval(`${pond} label`, (labels) => labels.filter((l) => (l.querySelector("input") as HTMLInputElement).checked).map((l) => (l as HTMLElement).innerText.trim()));
+    expect(ofShipment.length).toBe(7);
+    for (const l of ofShipment) expect(l).toContain(`(shipment ${ownShipment})`);
     await qa.click(`${pond} button::-p-text(Choose every result the specification limits)`);
     // The roll's run (index flux, k) and its index tests are offered and chosen; GCL mass per area (no limit) is not.
     const chosen = await qa.$$eval(`${pond} label`, (labels) => labels.filter((l) => (l.querySelector("input") as HTMLInputElement).checked).map((l) => (l as HTMLElement).innerText.trim()));

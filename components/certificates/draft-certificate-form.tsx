@@ -5,7 +5,7 @@ import { useState, useTransition } from "react";
 import { createCertificateDraftAction } from "@/app/(staff)/certificates/actions";
 
 /** limited: the project's specification sets a limit for the result's property (a certificate judges only those). */
-type Choice = { id: string; label: string; limited: boolean };
+type Choice = { id: string; label: string; limited: boolean; shipment: string };
 type Group = { project: { id: string; name: string; code: string; client: string }; results: Choice[]; indexResults: Choice[] };
 
 /** Choose approved results of one project (runs' and index tests') to gather on a new certificate. */
@@ -14,7 +14,9 @@ export function DraftCertificateForm({ groups }: { groups: Group[] }) {
   const [pending, startTransition] = useTransition();
   const [chosen, setChosen] = useState<Record<string, string[]>>({});
   const [message, setMessage] = useState<string | null>(null);
-  const everything = (g: Group) => [...g.results, ...g.indexResults].filter((r) => r.limited).map((r) => r.id);
+  // Every result the specification limits, of the project or of one shipment's rolls.
+  const everything = (g: Group, shipment?: string) => [...g.results, ...g.indexResults].filter((r) => r.limited && (!shipment || r.shipment === shipment)).map((r) => r.id);
+  const shipments = (g: Group) => [...new Set([...g.results, ...g.indexResults].map((r) => r.shipment))].sort();
   const toggle = (projectId: string, id: string) =>
     setChosen((c) => {
       const list = c[projectId] ?? [];
@@ -28,6 +30,11 @@ export function DraftCertificateForm({ groups }: { groups: Group[] }) {
           <h2>{g.project.name} <span className="count">{g.project.client} · {g.project.code}</span></h2>
           <p>
             <button type="button" className="button button-quiet" onClick={() => setChosen((c) => ({ ...c, [g.project.id]: everything(g) }))}>Choose every result the specification limits</button>
+            {shipments(g).length > 1 && shipments(g).map((shipment) => (
+              <button key={shipment} type="button" className="button button-quiet" onClick={() => setChosen((c) => ({ ...c, [g.project.id]: everything(g, shipment) }))}>
+                Only shipment {shipment}
+              </button>
+            ))}
           </p>
           {g.results.length > 0 && <h3>Hydraulic tests</h3>}
           {g.results.map((r) => (

@@ -18,7 +18,7 @@ export async function listCertifiableResults(options: { actor: CurrentUser }) {
     select: {
       id: true, property: true, value: true, unit: true, approvedAt: true,
       certificateResults: { where: { revision: { status: { in: [...LIVE_REVISION_STATES] } } }, select: { revision: { select: { contents: { orderBy: { version: "desc" }, take: 1, select: { resultIds: true } } } } } },
-      run: { select: { labNumber: true, methodCode: true, specimen: { select: { labNumber: true, coupon: { select: { roll: { select: { labNumber: true, project: { select: { id: true, name: true, code: true, clientOrganization: { select: { name: true } } } } } } } } } } } },
+      run: { select: { labNumber: true, methodCode: true, specimen: { select: { labNumber: true, coupon: { select: { roll: { select: { labNumber: true, shipment: { select: { labNumber: true } }, project: { select: { id: true, name: true, code: true, clientOrganization: { select: { name: true } } } } } } } } } } } },
     },
   });
   // Held by a live revision unless that revision's newest content leaves it out (as the database decides).

@@ -12,8 +12,10 @@ export type FreeIndexResult = {
   value: number;
   unit: string;
   rollLabNumber: string;
+  /** The shipment the roll arrived in (a certificate may cover one shipment's rolls). */
+  shipmentLabNumber: string;
   project: { id: string; name: string; code: string; client: string };
-  /** "R26-00012 · ASTM D5890 · bentonite swell index". */
+  /** "roll R26-00012 (shipment S26-00004) · ASTM D5890 · bentonite swell index". */
   label: string;
 };
 
@@ -32,7 +34,7 @@ export async function listFreeIndexResults(db: Tx | Db, options: { projectId?: s
         where: { revision: { status: { in: [...LIVE_REVISION_STATES] }, ...(options.exceptCertificateId ? { certificateId: { not: options.exceptCertificateId } } : {}) } },
         select: { revision: { select: { contents: { orderBy: { version: "desc" }, take: 1, select: { indexResultIds: true } } } } },
       },
-      indexTest: { select: { methodCode: true, roll: { select: { labNumber: true, project: { select: { id: true, name: true, code: true, clientOrganization: { select: { name: true } } } } } } } },
+      indexTest: { select: { methodCode: true, roll: { select: { labNumber: true, shipment: { select: { labNumber: true } }, project: { select: { id: true, name: true, code: true, clientOrganization: { select: { name: true } } } } } } } },
     },
   });
   const keep = new Set(options.keep ?? []);
@@ -42,9 +44,9 @@ export async function listFreeIndexResults(db: Tx | Db, options: { projectId?: s
       const { roll, methodCode } = r.indexTest;
       const method = isIndexMethodCode(methodCode) ? `ASTM ${INDEX_METHODS[methodCode].code}` : `ASTM ${methodCode}`;
       return {
-        id: r.id, property: r.property, value: r.value, unit: r.unit, rollLabNumber: roll.labNumber,
+        id: r.id, property: r.property, value: r.value, unit: r.unit, rollLabNumber: roll.labNumber, shipmentLabNumber: roll.shipment.labNumber,
         project: { id: roll.project.id, name: roll.project.name, code: roll.project.code, client: roll.project.clientOrganization.name },
-        label: `roll ${roll.labNumber} · ${method} · ${inSentence(TEST_PROPERTY_LABELS[r.property])}`,
+        label: `roll ${roll.labNumber} (shipment ${roll.shipment.labNumber}) · ${method} · ${inSentence(TEST_PROPERTY_LABELS[r.property])}`,
       };
     });
 }
