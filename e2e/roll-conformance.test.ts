@@ -1,8 +1,10 @@
+import { mkdirSync, writeFileSync } from "node:fs";
 import path from "node:path";
 import type { Browser, ElementHandle, Page } from "puppeteer";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { chooseByLabel, chooseByName, fill, labDateTime, setValue } from "./support/forms";
-import { cutAndPrepareSpecimen, recordStage } from "./support/run-steps";
+import { fetchInPage } from "./support/fetch-in-page";
+import { cutAndPrepareSpecimen, pdfPages, recordStage } from "./support/run-steps";
 import { baseUrl, browserAvailable, launchBrowser, pageSignedInAs, textOf } from "./support/session";
 
 const FIXTURE = path.resolve(import.meta.dirname, "fixtures", "readings-d5887.csv");
@@ -195,6 +197,52 @@ describe.skipIf(!browserAvailable())("a roll's whole conformance job: index test
     const staffRow = await textOf(qa, `[data-testid="conformance-matrix"] tr[data-roll="${roll}"]`);
     await qa.screenshot({ path: "tmp/e2e-roll-conformance-project.png", fullPage: true });
     expect(staffRow).toContain("Conforms");
+
+    // --- QA drafts the project's certificate with every result the specification limits, previews it, signs it.
+    await qa.click("nav a::-p-text(Certificates)");
+    await qa.waitForSelector("a::-p-text(New certificate)");
+    await qa.click("a::-p-text(New certificate)");
+    const pond = 'section[aria-label="Results of Tailings pond B lining"]';
+    await qa.waitForSelector(pond);
+    // A certificate may cover one shipment: choosing the roll's shipment takes only results of rolls it brought.
+    const ownShipment = /\(shipment (S\d{2}-\d{5})\)/.exec((await qa.$$eval(`${pond} label`, (ls) => ls.map((l) => (l as HTMLElement).innerText))).find((l) => l.includes(`roll ${roll} `)) ?? "")?.[1];
+    expect(ownShipment, "each result is labelled with its roll's shipment").toMatch(/^S\d{2}-\d{5}$/);
+    await qa.click(`${pond} button::-p-text(Only shipment ${ownShipment})`);
+    const ofShipment = await qa.$$eval(`${pond} label`, (labels) => labels.filter((l) => (l.querySelector("input") as HTMLInputElement).checked).map((l) => (l as HTMLElement).innerText.trim()));
+    expect(ofShipment.length).toBe(7);
+    for (const l of ofShipment) expect(l).toContain(`(shipment ${ownShipment})`);
+    await qa.click(`${pond} button::-p-text(Choose every result the specification limits)`);
+    // The roll's run (index flux, k) and its index tests are offered and chosen; GCL mass per area (no limit) is not.
+    const chosen = await qa.$$eval(`${pond} label`, (labels) => labels.filter((l) => (l.querySelector("input") as HTMLInputElement).checked).map((l) => (l as HTMLElement).innerText.trim()));
+    const mine = chosen.filter((l) => l.includes(run) || l.includes(roll));
+    // Two run results (index flux and k) and five index-test results: swell, fluid loss, bentonite mass, tensile, peel.
+    expect(mine.filter((l) => l.startsWith(run)), chosen.join("\n")).toHaveLength(2);
+    expect(mine.filter((l) => l.startsWith(`roll ${roll}`)).map((l) => l.split(" · ")[2]!.replace(/ [\d.]+ .*$/, "")).sort()).toEqual(
+      ["bentonite fluid loss", "bentonite mass per unit area", "bentonite swell index", "peel strength", "tensile strength"],
+    );
+    expect(chosen.some((l) => l.includes("GCL mass per unit area"))).toBe(false);
+    await qa.click(`${pond} button::-p-text(Draft a certificate with these results)`);
+    await qa.waitForFunction(() => /^\/certificates\/Q\d{2}-\d{5}$/.test(location.pathname), { timeout: 30_000 });
+    const number = qa.url().split("/").pop()!;
+    const previewHref = await qa.$eval('[data-testid="draft-preview"]', (a) => (a as HTMLAnchorElement).href);
+    const preview = await fetchInPage(qa, previewHref);
+    expect([preview.status, preview.type]).toEqual([200, "application/pdf"]);
+    mkdirSync("tmp", { recursive: true });
+    writeFileSync("tmp/e2e-roll-conformance-certificate-preview.pdf", preview.body);
+    const previewText = pdfPages(preview.body).join(" ").replace(/\s+/g, " ");
+    expect(previewText).toContain("DRAFT · NOT ISSUED");
+    expect(previewText).toContain("What this certificate covers of the specification");
+    // Each method with its edition (the editions the migration installs, from memory).
+    for (const edition of ["D5887/D5887M-20", "D5890-19", "D5891/D5891M-19", "D5993-18", "D6768/D6768M-20", "D6496/D6496M-20"]) expect(previewText).toContain(`Standard: ASTM ${edition}`);
+    // The worked examples' numbers: D5993 3.79 kg/m² (three squares), D6768 9.0 kN/m with SD 0.30 kN/m (five strips).
+    expect(previewText).toMatch(/Bentonite mass per unit area 3\.79 kg\/m² 3 /);
+    expect(previewText).toMatch(/Tensile strength 9\.0 kN\/m 5 0\.30 kN\/m/);
+    expect(previewText).toContain("Properties not reported, and why");
+    expect(previewText).toContain("Decision rule.");
+    await fill(qa, "Your password, to sign", "seepline-demo");
+    await qa.click("button::-p-text(Sign and issue)");
+    await qa.waitForFunction(() => document.querySelector('[data-testid="revision-1-status"]')?.textContent === "issued", { timeout: 90_000 });
+    await qa.screenshot({ path: "tmp/e2e-roll-conformance-certificate.png", fullPage: true });
     await qa.browserContext().close();
 
     // --- The client (Ostrel) sees the roll's conformance in the portal, property by property.
@@ -213,6 +261,8 @@ describe.skipIf(!browserAvailable())("a roll's whole conformance job: index test
     expect(await client.$eval('[data-testid="sampling-coverage"] tr[data-property="BENTONITE_MASS_PER_AREA"]', (r) => r.getAttribute("data-covered"))).toBe("no");
     expect(massRow).toMatch(/1 per 500 m² delivered\s+3\s+2\s+0\s+short/);
     expect(massRow).not.toContain(roll);
+    // The project's certificate, issued, names the roll among those it covers.
+    expect(await textOf(client, `[data-testid="portal-certificates"] tbody[data-certificate="${number}"] [data-testid="certificate-rolls"]`)).toContain(roll);
     await client.screenshot({ path: "tmp/e2e-roll-conformance-portal.png", fullPage: true });
     expect(labNumber(roll, "R")).toBe(roll);
     await client.browserContext().close();

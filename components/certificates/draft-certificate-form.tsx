@@ -4,14 +4,19 @@ import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
 import { createCertificateDraftAction } from "@/app/(staff)/certificates/actions";
 
-type Group = { project: { id: string; name: string; code: string; client: string }; results: Array<{ id: string; label: string }> };
+/** limited: the project's specification sets a limit for the result's property (a certificate judges only those). */
+type Choice = { id: string; label: string; limited: boolean; shipment: string };
+type Group = { project: { id: string; name: string; code: string; client: string }; results: Choice[]; indexResults: Choice[] };
 
-/** Choose approved results of one project to gather on a new certificate. */
+/** Choose approved results of one project (runs' and index tests') to gather on a new certificate. */
 export function DraftCertificateForm({ groups }: { groups: Group[] }) {
   const router = useRouter();
   const [pending, startTransition] = useTransition();
   const [chosen, setChosen] = useState<Record<string, string[]>>({});
   const [message, setMessage] = useState<string | null>(null);
+  // Every result the specification limits, of the project or of one shipment's rolls.
+  const everything = (g: Group, shipment?: string) => [...g.results, ...g.indexResults].filter((r) => r.limited && (!shipment || r.shipment === shipment)).map((r) => r.id);
+  const shipments = (g: Group) => [...new Set([...g.results, ...g.indexResults].map((r) => r.shipment))].sort();
   const toggle = (projectId: string, id: string) =>
     setChosen((c) => {
       const list = c[projectId] ?? [];
@@ -23,7 +28,22 @@ export function DraftCertificateForm({ groups }: { groups: Group[] }) {
       {groups.map((g) => (
         <section key={g.project.id} className="card" aria-label={`Results of ${g.project.name}`}>
           <h2>{g.project.name} <span className="count">{g.project.client} · {g.project.code}</span></h2>
+          <p>
+            <button type="button" className="button button-quiet" onClick={() => setChosen((c) => ({ ...c, [g.project.id]: everything(g) }))}>Choose every result the specification limits</button>
+            {shipments(g).length > 1 && shipments(g).map((shipment) => (
+              <button key={shipment} type="button" className="button button-quiet" onClick={() => setChosen((c) => ({ ...c, [g.project.id]: everything(g, shipment) }))}>
+                Only shipment {shipment}
+              </button>
+            ))}
+          </p>
+          {g.results.length > 0 && <h3>Hydraulic tests</h3>}
           {g.results.map((r) => (
+            <label key={r.id} style={{ display: "block", margin: "0.25rem 0" }}>
+              <input type="checkbox" checked={(chosen[g.project.id] ?? []).includes(r.id)} onChange={() => toggle(g.project.id, r.id)} /> {r.label}
+            </label>
+          ))}
+          {g.indexResults.length > 0 && <h3>Index tests</h3>}
+          {g.indexResults.map((r) => (
             <label key={r.id} style={{ display: "block", margin: "0.25rem 0" }}>
               <input type="checkbox" checked={(chosen[g.project.id] ?? []).includes(r.id)} onChange={() => toggle(g.project.id, r.id)} /> {r.label}
             </label>
@@ -33,7 +53,12 @@ export function DraftCertificateForm({ groups }: { groups: Group[] }) {
             className="button"
             disabled={pending || !(chosen[g.project.id] ?? []).length}
             onClick={() => startTransition(async () => {
-              const result = await createCertificateDraftAction({ projectId: g.project.id, resultIds: chosen[g.project.id] });
+              const picked = new Set(chosen[g.project.id]);
+              const result = await createCertificateDraftAction({
+                projectId: g.project.id,
+                resultIds: g.results.filter((r) => picked.has(r.id)).map((r) => r.id),
+                indexResultIds: g.indexResults.filter((r) => picked.has(r.id)).map((r) => r.id),
+              });
               if (result.ok) router.push(`/certificates/${result.data.number}`);
               else setMessage(result.message);
             })}

@@ -12,20 +12,21 @@ import { editCertificateDraftSchema, type EditCertificateDraftInput } from "@/li
 
 type Props = {
   revisionId: string;
-  content: { version: number; resultIds: string[]; specificationId: string | null; remarks: string; signatoryId: string | null; unitSystem: UnitSystem };
+  content: { version: number; resultIds: string[]; indexResultIds: string[]; specificationId: string | null; remarks: string; signatoryId: string | null; unitSystem: UnitSystem };
   results: Array<{ id: string; label: string }>;
+  indexResults: Array<{ id: string; label: string }>;
   specifications: Array<{ id: string; label: string }>;
   signatories: Array<{ id: string; name: string }>;
 };
 
-/** The draft's content: results included, specification, remarks, signatory, units. Each save is a new version. */
-export function EditDraftForm({ revisionId, content, results, specifications, signatories }: Props) {
+/** The draft's content: results (runs' and index tests') included, specification, remarks, signatory, units. Each save is a new version. */
+export function EditDraftForm({ revisionId, content, results, indexResults, specifications, signatories }: Props) {
   const router = useRouter();
   const [notice, setNotice] = useState<{ ok: boolean; text: string } | null>(null);
   const form = useForm<EditCertificateDraftInput>({
     resolver: zodResolver(editCertificateDraftSchema),
     defaultValues: {
-      revisionId, baseVersion: content.version, resultIds: content.resultIds, specificationId: content.specificationId ?? "",
+      revisionId, baseVersion: content.version, resultIds: content.resultIds, indexResultIds: content.indexResultIds, specificationId: content.specificationId ?? "",
       remarks: content.remarks, signatoryId: content.signatoryId ?? "", unitSystem: content.unitSystem,
     },
   });
@@ -46,6 +47,14 @@ export function EditDraftForm({ revisionId, content, results, specifications, si
         ))}
         {results.length === 0 && <p className="muted">This project has no approved result free for a certificate.</p>}
         {formState.errors.resultIds?.message && <span className="field-error">{formState.errors.resultIds.message}</span>}
+      </fieldset>
+      <fieldset data-testid="draft-index-results">
+        <legend>Index-test results on the certificate</legend>
+        {indexResults.map((r) => (
+          <label key={r.id} style={{ display: "block", margin: "0.25rem 0" }}><input type="checkbox" value={r.id} {...register("indexResultIds")} /> {r.label}</label>
+        ))}
+        {indexResults.length === 0 && <p className="muted">This project has no approved index-test result free for a certificate.</p>}
+        {formState.errors.indexResultIds?.message && <span className="field-error">{formState.errors.indexResultIds.message}</span>}
       </fieldset>
       <Field label="Specification" error={formState.errors.specificationId?.message} hint="Results are judged against its limits; none: no conformance is stated.">
         <select {...register("specificationId")}>

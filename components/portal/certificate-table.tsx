@@ -39,7 +39,7 @@ function Download({ number, revision }: { number: string; revision: PortalCertif
 }
 
 /**
- * Certificates with every issued revision: status (superseded ones say by which revision), issue date,
+ * Certificates with every issued revision: status (superseded ones say by which revision), the rolls it covers, issue date,
  * verification code and the PDF download (none for a revoked revision). `showProject` adds the project
  * column for the all-projects list.
  */
@@ -51,7 +51,7 @@ export function CertificateTable({ certificates, showProject = false, zone = "UT
           <tr>
             <th>Certificate</th>
             {showProject && <th>Project</th>}
-            <th>Rev.</th><th>Status</th><th>Issued</th><th>Verification</th><th>PDF</th>
+            <th>Rev.</th><th>Status</th><th>Rolls covered</th><th>Issued</th><th>Verification</th><th>PDF</th>
           </tr>
         </thead>
         {certificates.map((certificate) => (
@@ -69,6 +69,7 @@ export function CertificateTable({ certificates, showProject = false, zone = "UT
                   <RevisionStatus revision={revision} zone={zone} />
                   {revision.reason && <div className={`muted ${styles.reason}`}>Reason: {revision.reason}</div>}
                 </td>
+                <td className="mono" data-testid="certificate-rolls">{revision.rolls.length ? revision.rolls.join(", ") : "—"}</td>
                 <td className={styles.nowrap}>{formatDate(revision.issuedAt, zone)}</td>
                 <td><a className="mono" href={`/verify/${encodeURIComponent(revision.verificationCode)}`}>{revision.verificationCode}</a></td>
                 <td><Download number={certificate.number} revision={revision} /></td>

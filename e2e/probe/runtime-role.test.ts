@@ -11,7 +11,7 @@ import { recordFigure } from "./support/figures";
  * so nothing changes even if one were allowed. Then the same TRUNCATE as the migration owner, which the
  * protected tables' triggers refuse too.
  */
-const APPEND_ONLY = ["AuditLog", "CustodyEvent", "Reading", "Review", "CalibrationOverride", "Result", "Signature", "CertificateResult", "MethodSettingsVersion", "IndexTestResult", "IndexTestReview", "IndexTestEquipment", "ApiRequest", "ApiReadingKey", "CertificateDraftContent"];
+const APPEND_ONLY = ["AuditLog", "CustodyEvent", "Reading", "Review", "CalibrationOverride", "Result", "Signature", "CertificateResult", "MethodSettingsVersion", "IndexTestResult", "IndexTestReview", "IndexTestEquipment", "ApiRequest", "ApiReadingKey", "CertificateDraftContent", "CertificateIndexResult"];
 
 const RIGHT_REASONS = /permission denied|must be owner|must be superuser|append-only|cannot be changed|cannot be deleted|only increase|issued certificate revision|insufficient privilege|not allowed|no privileges were granted/i;
 

@@ -60,7 +60,7 @@ const LABELS: Record<string, string> = {
   fromLocationId: "From location", toLocationId: "To location", cellId: "Cell", actorId: "Person", pdfSha256: "PDF digest (SHA-256)",
   expandedUncertainty: "Expanded uncertainty (k = 2)", limitText: "Limit", lastValue: "Last number given", key: "Counter",
   conditionNotes: "Condition on arrival", machineDirectionMarked: "Machine direction marked", sessionVersion: "Sign-in version",
-  resultIds: "Results included", signatoryId: "Signatory", unitSystem: "Units of results", resultUnits: "Units of results", createdById: "Written by",
+  resultIds: "Results included", indexResultIds: "Index-test results included", indexTestResultId: "Index-test result", signatoryId: "Signatory", unitSystem: "Units of results", resultUnits: "Units of results", createdById: "Written by",
   timeZone: "Time zone", abandonmentReason: "Reason for abandoning", abandonedById: "Abandoned by", jobTitle: "Job title",
 };
 

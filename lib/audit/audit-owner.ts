@@ -65,6 +65,7 @@ const OWNERS: Record<string, (row: Row) => AuditOwner> = {
   Result: (row) => partOf("run", "runId", row, `result: ${property(row.property)}`),
   CertificateRevision: (row) => partOf("certificate", "certificateId", row, `revision ${text(row.revision)}`),
   CertificateResult: (row) => partOf("revision", "revisionId", row, "result on the certificate"),
+  CertificateIndexResult: (row) => partOf("revision", "revisionId", row, "index-test result on the certificate"),
   Signature: (row) => partOf("revision", "revisionId", row, "signature"),
   CertificateDraftContent: (row) => partOf("revision", "revisionId", row, "draft content"),
   CustodyEvent: (row) => {

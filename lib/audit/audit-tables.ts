@@ -45,6 +45,7 @@ export const AUDIT_TABLES = {
   Certificate: { slug: "certificate", label: "Certificate", plural: "Certificates" },
   CertificateRevision: { slug: "certificate-revision", label: "Certificate revision", plural: "Certificate revisions" },
   CertificateResult: { slug: "certificate-result", label: "Result on a certificate", plural: "Results on certificates" },
+  CertificateIndexResult: { slug: "certificate-index-result", label: "Index-test result on a certificate", plural: "Index-test results on certificates" },
   Signature: { slug: "signature", label: "Signature", plural: "Signatures" },
   CertificateDraftContent: { slug: "certificate-draft-content", label: "Certificate draft content", plural: "Certificate draft contents" },
 } as const satisfies Record<string, AuditTable>;

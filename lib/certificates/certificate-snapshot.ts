@@ -1,3 +1,5 @@
+import type { CertificateCoverage } from "./property-coverage";
+
 /**
  * What an issued certificate says, frozen at issue and stored with its PDF (CertificateRevision.snapshot).
  * The PDF is rendered from this and nothing else, so a revision can always be explained from its record.
@@ -36,6 +38,9 @@ export type CertificateResultLine = {
   uncertaintyNote?: string;
   /** The coverage of the expanded uncertainty in words ("coverage factor k = 2, ... about 95 %"). */
   coverage?: string;
+  /** Index tests: how many specimens the result is the mean of, and their standard deviation as printed. */
+  specimenCount?: number;
+  standardDeviationDisplay?: string | null;
 };
 
 /** The specimen as tested (ISO/IEC 17025 7.8.2.1 e, 7.8.3.1 a): what was cut, how it was conditioned, how it was loaded. */
@@ -93,6 +98,28 @@ export type CertificateTest = {
   approvedAt: string;
 };
 
+/**
+ * An index test on a roll (swell index, fluid loss, mass per unit area, moisture, tensile, peel) as
+ * reported: what was tested, by which method and edition, on how many specimens, with which instruments.
+ */
+export type CertificateIndexTest = {
+  rollLabNumber: string;
+  /** The coupon cut for the test (a tensile strip set, mass-per-area squares), if any. */
+  couponLabNumber: string | null;
+  method: { code: string; title: string; edition?: string };
+  testedAt: string;
+  /** Per specimen, in the main result's stored unit, as printed ("9.12 kN/m"). */
+  specimenValues: string[];
+  /** Departures from the method the technician recorded or the computation found. */
+  departures: string[];
+  /** "Balance BAL-01 (calibrated to 2027-03-01)". */
+  instruments: string[];
+  results: CertificateResultLine[];
+  performedBy: string;
+  approvedBy: string;
+  approvedAt: string;
+};
+
 export type CertificateSample = {
   rollLabNumber: string;
   rollNumber: string;
@@ -135,6 +162,10 @@ export type CertificateSnapshot = {
   changes?: string[];
   samples: CertificateSample[];
   tests: CertificateTest[];
+  /** Index tests reported (absent on snapshots from before index tests could be certified). */
+  indexTests?: CertificateIndexTest[];
+  /** Every property of the specification for every roll reported on: reported here, or why not. */
+  propertyCoverage?: CertificateCoverage;
   signatory: { name: string; role: string; meaning: string; signedAt: string };
   supersedes: { revision: number; reason: string } | null;
 };

@@ -5,10 +5,13 @@
 import type { CertificateSnapshot } from "./certificate-snapshot";
 import { inSentence } from "../format/sentence-case";
 
-type Comparable = Pick<CertificateSnapshot, "tests" | "specification" | "remarks" | "unitSystem" | "signatory">;
+type Comparable = Pick<CertificateSnapshot, "tests" | "specification" | "remarks" | "unitSystem" | "signatory"> & Partial<Pick<CertificateSnapshot, "indexTests">>;
 
 const resultKeys = (s: Comparable) =>
-  new Map(s.tests.flatMap((t) => t.results.map((r) => [`${t.runLabNumber} ${r.property}`, { label: `${inSentence(r.label)} of ${t.runLabNumber} (specimen ${t.specimenLabNumber})`, display: r.display }] as const)));
+  new Map<string, { label: string; display: string }>([
+    ...s.tests.flatMap((t) => t.results.map((r) => [`${t.runLabNumber} ${r.property}`, { label: `${inSentence(r.label)} of ${t.runLabNumber} (specimen ${t.specimenLabNumber})`, display: r.display }] as const)),
+    ...(s.indexTests ?? []).flatMap((t) => t.results.map((r) => [`${t.rollLabNumber} ${t.method.code} ${r.property}`, { label: `${inSentence(r.label)} of roll ${t.rollLabNumber} (${t.method.code.startsWith("ASTM") ? t.method.code : `ASTM ${t.method.code}`})`, display: r.display }] as const)),
+  ]);
 
 const specText = (s: Comparable) => (s.specification ? `${s.specification.name}${s.specification.revision ? `, ${s.specification.revision}` : ""}` : "no specification");
 

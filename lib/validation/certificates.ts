@@ -4,8 +4,10 @@ import { UNIT_SYSTEMS } from "../format/result-numbers";
 
 export const draftCertificateSchema = z.object({
   projectId: z.string().min(1, "Choose the project."),
-  resultIds: z.array(z.string().min(1)).min(1, "Choose at least one approved result."),
-});
+  resultIds: z.array(z.string().min(1)).max(200).default([]),
+  /** Approved index-test results (swell index, fluid loss, mass per area, tensile, peel...). */
+  indexResultIds: z.array(z.string().min(1)).max(400).default([]),
+}).refine((v) => v.resultIds.length + v.indexResultIds.length > 0, { message: "Choose at least one approved result.", path: ["resultIds"] });
 
 export const issueCertificateSchema = z.object({
   revisionId: z.string().min(1),
@@ -26,6 +28,7 @@ export const editCertificateDraftSchema = z.object({
   revisionId: z.string().min(1),
   baseVersion: z.coerce.number().int().min(0),
   resultIds: z.array(z.string().min(1)).max(200),
+  indexResultIds: z.array(z.string().min(1)).max(400).default([]),
   specificationId: z.string().trim().max(100).default(""),
   remarks: z.string().trim().max(2000, "Keep the remarks under 2,000 characters.").default(""),
   signatoryId: z.string().trim().max(100).default(""),

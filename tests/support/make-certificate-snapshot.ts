@@ -1,6 +1,7 @@
 import { conformanceSummary } from "@/lib/results/conformance-summary";
 import { formatResultValue, formatUncertainty } from "@/lib/results/format-result";
-import type { CertificateResultLine, CertificateSnapshot, CertificateTest } from "@/lib/certificates/certificate-snapshot";
+import type { CertificateIndexTest, CertificateResultLine, CertificateSnapshot, CertificateTest } from "@/lib/certificates/certificate-snapshot";
+import { certificateCoverage } from "@/lib/certificates/property-coverage";
 
 /**
  * Invented certificate snapshots, worded as buildCertificateSnapshot words real ones (lib/results formatting
@@ -16,6 +17,8 @@ export type SnapshotOptions = {
   conditions?: boolean;
   /** Carry every item ISO/IEC 17025 7.8.2.1 and 7.8.3.1 asks for, as snapshots built since issue 12 do. */
   complete?: boolean;
+  /** Add index tests (tensile strength and swell index on the first roll) and the specification's coverage. */
+  indexTests?: boolean;
 };
 
 function random(seed: number) {
@@ -119,6 +122,7 @@ export function makeCertificateSnapshot(options: SnapshotOptions = {}): Certific
     { at: new Date(issuedAt - 6 * 24 * HOUR).toISOString(), action: "tested", item: `S26-0031${n}`, by: "Tamsin Okerlund" },
   ];
   const usedRolls = rolls.slice(0, Math.min(rolls.length, testCount));
+  const indexTests = options.indexTests ? makeIndexTests(rolls[0]!, issuedAt) : undefined;
 
   return {
     number: "C26-00017",
@@ -141,6 +145,22 @@ export function makeCertificateSnapshot(options: SnapshotOptions = {}): Certific
         .sort((a, b) => a.at.localeCompare(b.at)),
     })),
     tests,
+    ...(indexTests && {
+      indexTests,
+      propertyCoverage: certificateCoverage(
+        [
+          { property: "INDEX_FLUX", label: "Index flux" }, { property: "HYDRAULIC_CONDUCTIVITY", label: "Hydraulic conductivity (20 °C)" },
+          { property: "SWELL_INDEX", label: "Bentonite swell index", testingFrequencyPerLot: true }, { property: "FLUID_LOSS", label: "Bentonite fluid loss", testingFrequencyPerLot: true },
+          { property: "TENSILE_STRENGTH", label: "Tensile strength", testingFrequencyAreaM2: 20_000 },
+        ],
+        [
+          { rollLabNumber: rolls[0]!, cells: [{ property: "FLUID_LOSS", status: "awaiting review", source: "Fluid loss (ASTM D5891)" }] },
+          { rollLabNumber: rolls[1]!, cells: [{ property: "SWELL_INDEX", status: "not required", source: null }, { property: "FLUID_LOSS", status: "not required", source: null }, { property: "TENSILE_STRENGTH", status: "not required", source: null }] },
+          { rollLabNumber: "R26-00414", cells: [] },
+        ],
+        new Set([...tests.flatMap((t) => t.results.map((r) => `${t.rollLabNumber} ${r.property}`)), ...indexTests.flatMap((t) => t.results.map((r) => `${t.rollLabNumber} ${r.property}`))]),
+      ),
+    }),
     signatory: { name: "Ottilie Brannagh", role: "QA manager", meaning: "Reviewed the results and records and approved this certificate for issue", signedAt: new Date(issuedAt).toISOString() },
     supersedes: options.supersedes ? { revision: 1, reason: "Client address corrected; the results are unchanged" } : null,
     ...(options.complete && {
@@ -152,4 +172,35 @@ export function makeCertificateSnapshot(options: SnapshotOptions = {}): Certific
       ...(options.supersedes && { changes: ['Remarks changed; they now read: "Specimens cut at the lab from the roll samples as received."'] }),
     }),
   };
+}
+
+/**
+ * Two index tests on one roll, worded as buildIndexTestEntries words them. Tensile strength, ASTM D6768: five
+ * 100 mm strips at 912, 887, 945, 901 and 865 N give 9.12, 8.87, 9.45, 9.01 and 8.65 kN/m, mean 4510 / 5 = 902 N
+ * per 0.1 m = 9.02 kN/m (printed to two digits, 9.0), sample standard deviation sqrt(3544 / 4) = 29.8 N, 0.30
+ * kN/m; against a minimum of 4 kN/m (E29 rounding: 9) it conforms. Swell index, ASTM D5890: 27 mL per 2 g
+ * against a minimum of 24 conforms.
+ */
+function makeIndexTests(roll: string, issuedAt: number): CertificateIndexTest[] {
+  const line = (property: string, label: string, value: number, unit: string, display: string, limitText: string, sd: string | null, count: number): CertificateResultLine => ({
+    property, label, value, unit, display, expandedUncertainty: null, uncertaintyDisplay: null,
+    uncertaintyNote: "The lab declares no expanded uncertainty for this method; the result is reported without one.",
+    conformance: conformanceSummary({ value, unit }, { limitText, unit, direction: "MINIMUM", conformanceMethod: "ROUNDING" }),
+    specimenCount: count, standardDeviationDisplay: sd,
+  });
+  const base = { performedBy: "Quenby Ardlow", approvedBy: "Ottilie Brannagh", approvedAt: new Date(issuedAt - 2 * 24 * HOUR).toISOString(), departures: [] };
+  return [
+    {
+      ...base, rollLabNumber: roll, couponLabNumber: "C26-00209", method: { code: "D6768", title: "Tensile strength (ASTM D6768)", edition: "D6768/D6768M-20" },
+      testedAt: new Date(issuedAt - 3 * 24 * HOUR).toISOString(), specimenValues: ["9.1 kN/m", "8.9 kN/m", "9.5 kN/m", "9.0 kN/m", "8.7 kN/m"],
+      instruments: ["Tensile frame TF-01 (calibration CAL-TF-01-2026)", "Load cell LC-01 (calibration CAL-LC-01-2026)"],
+      results: [line("TENSILE_STRENGTH", "Tensile strength", 9.02, "kN/m", "9.0 kN/m", "4", "0.30 kN/m", 5)],
+    },
+    {
+      ...base, rollLabNumber: roll, couponLabNumber: null, method: { code: "D5890", title: "Swell index (ASTM D5890)", edition: "D5890-19" },
+      testedAt: new Date(issuedAt - 3 * 24 * HOUR).toISOString(), specimenValues: ["27 mL/2 g"],
+      instruments: ["Balance BAL-01 (calibration CAL-BAL-01-2026)", "Graduated cylinder GC-01 (calibration CAL-GC-01-2026)"],
+      results: [line("SWELL_INDEX", "Bentonite swell index", 27, "mL/2 g", "27 mL/2 g", "24", null, 1)],
+    },
+  ];
 }

@@ -9,13 +9,15 @@ function sentence(text: string): string {
 
 /** Title, the identity panel (number, revision, issue date) and, for a correction, what it supersedes. */
 export function CertificateHeading({ snapshot }: { snapshot: CertificateSnapshot }) {
-  const methods = [...new Set(snapshot.tests.map((t) => t.method.code))];
+  const indexTests = snapshot.indexTests ?? [];
+  const methods = [...new Set([...snapshot.tests, ...indexTests].map((t) => t.method.code))];
+  const title = indexTests.length === 0 ? "Hydraulic tests on geosynthetic clay liner" : snapshot.tests.length === 0 ? "Index tests on geosynthetic clay liner" : "Hydraulic and index tests on geosynthetic clay liner";
   return (
     <>
       <div className="cert-head">
         <div>
           <div className="cert-kicker">Test certificate</div>
-          <h1>Hydraulic tests on geosynthetic clay liner</h1>
+          <h1>{title}</h1>
           <div className="doc-small">{methods.length ? `Methods: ${methods.join(", ")}` : "No tests are reported on this certificate."}</div>
         </div>
         <div className="cert-identity" data-testid="certificate-identity">

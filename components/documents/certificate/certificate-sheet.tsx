@@ -6,6 +6,8 @@ import { CertificateHeading } from "./certificate-heading";
 import { CertificateSamples } from "./certificate-samples";
 import { CertificateSummary } from "./certificate-summary";
 import { CertificateTestSection } from "./certificate-test";
+import { CertificateIndexTestSection } from "./certificate-index-test";
+import { CertificateCoverageSection } from "./certificate-coverage";
 import { CERTIFICATE_CSS } from "./certificate-styles";
 
 export type CertificateSheetProps = {
@@ -22,6 +24,8 @@ export type CertificateSheetProps = {
  */
 export function CertificateSheet({ snapshot, qrSvg, watermark }: CertificateSheetProps) {
   const zone = snapshot.lab.timeZone ?? "UTC";
+  const indexTests = snapshot.indexTests ?? [];
+  const count = snapshot.tests.length + indexTests.length;
   return (
     <article className="doc cert" data-testid="certificate">
       <style dangerouslySetInnerHTML={{ __html: DOCUMENT_CSS + CERTIFICATE_CSS }} />
@@ -30,7 +34,9 @@ export function CertificateSheet({ snapshot, qrSvg, watermark }: CertificateShee
       <CertificateHeading snapshot={snapshot} />
       <CertificateSummary snapshot={snapshot} />
       <CertificateSamples samples={snapshot.samples} zone={zone} />
-      {snapshot.tests.map((test, i) => <CertificateTestSection key={`${test.runLabNumber}-${i}`} test={test} index={i} count={snapshot.tests.length} zone={zone} />)}
+      {snapshot.propertyCoverage && snapshot.specification ? <CertificateCoverageSection coverage={snapshot.propertyCoverage} specificationName={snapshot.specification.name} /> : null}
+      {snapshot.tests.map((test, i) => <CertificateTestSection key={`${test.runLabNumber}-${i}`} test={test} index={i} count={count} zone={zone} />)}
+      {indexTests.map((test, i) => <CertificateIndexTestSection key={`${test.rollLabNumber}-${test.method.code}-${i}`} test={test} number={snapshot.tests.length + i + 1} count={count} zone={zone} />)}
       <CertificateClose snapshot={snapshot} qrSvg={qrSvg} preview={Boolean(watermark)} />
     </article>
   );

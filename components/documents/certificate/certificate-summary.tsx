@@ -5,7 +5,10 @@ import { CertificateVerdict, limitLabel } from "./certificate-verdict";
 /** Who the work was for, and every reported result with its verdict on one table. */
 export function CertificateSummary({ snapshot }: { snapshot: CertificateSnapshot }) {
   const { client, project, specification } = snapshot;
-  const lines = snapshot.tests.flatMap((test, t) => test.results.map((result) => ({ test, t, result })));
+  const lines = [
+    ...snapshot.tests.flatMap((test, t) => test.results.map((result) => ({ number: t + 1, code: test.method.code, item: test.specimenLabNumber, result }))),
+    ...(snapshot.indexTests ?? []).flatMap((test, t) => test.results.map((result) => ({ number: snapshot.tests.length + t + 1, code: test.method.code, item: test.couponLabNumber ?? test.rollLabNumber, result }))),
+  ];
   const assessed = lines.filter((l) => l.result.conformance);
   const failing = assessed.filter((l) => !l.result.conformance!.conforms).length;
   return (
@@ -22,13 +25,13 @@ export function CertificateSummary({ snapshot }: { snapshot: CertificateSnapshot
       <h2>Results at a glance</h2>
       <table data-testid="certificate-summary">
         <thead>
-          <tr><th>Test</th><th className="nowrap">Specimen</th><th>Property</th><th className="num">Result</th><th className="nowrap">U (k = 2, ≈95 %)</th><th className="nowrap">Limit</th><th>Verdict</th></tr>
+          <tr><th>Test</th><th className="nowrap">Item tested</th><th>Property</th><th className="num">Result</th><th className="nowrap">U (k = 2, ≈95 %)</th><th className="nowrap">Limit</th><th>Verdict</th></tr>
         </thead>
         <tbody>
-          {lines.map(({ test, t, result }, i) => (
+          {lines.map(({ number, code, item, result }, i) => (
             <tr key={i}>
-              <td className="nowrap">{t + 1} · {test.method.code}</td>
-              <td className="mono nowrap">{test.specimenLabNumber}</td>
+              <td className="nowrap">{number} · {code}</td>
+              <td className="mono nowrap">{item}</td>
               <td>{result.label}</td>
               <td className="num">{valueWithUnit(result.display, result.unit)}</td>
               <td className="nowrap">{result.uncertaintyDisplay ? withoutCoverageFactor(result.uncertaintyDisplay) : "not stated"}</td>

@@ -6,7 +6,7 @@ import { inSentence } from "@/lib/format/sentence-case";
 import { CertificateVerdict, limitLabel } from "./certificate-verdict";
 
 /** The numbers that decided a verdict: what was compared, by which ASTM E29 method, with which limit, and the statement. */
-function Decision({ result }: { result: CertificateResultLine }) {
+export function Decision({ result }: { result: CertificateResultLine }) {
   const c = result.conformance;
   if (!c) return null;
   return (
@@ -70,7 +70,7 @@ function SpecimenData({ test, zone }: { test: CertificateTest; zone: string }) {
 }
 
 /** Under the results: the three largest contributors to each stated uncertainty, or why none is stated. */
-function Uncertainties({ results }: { results: CertificateResultLine[] }) {
+export function Uncertainties({ results }: { results: CertificateResultLine[] }) {
   const lines = results.filter((r) => r.uncertaintyContributors?.length || r.uncertaintyNote);
   if (lines.length === 0) return null;
   return (

@@ -15,6 +15,10 @@ import type { Tx } from "../db/transaction";
 import { evaluateRunRecords } from "../runs/evaluate-run-records";
 import { findProjectLimits } from "../specifications/find-project-limits";
 import { readDraftContent } from "./draft-content";
+import { buildIndexTestEntries } from "./build-index-test-entries";
+import { loadProjectConformance } from "../conformance/load-project-conformance";
+import { certificateCoverage } from "@/lib/certificates/property-coverage";
+import { TEST_PROPERTY_LABELS, type TestProperty } from "@/lib/results/property-units";
 
 const PROPERTY_LABELS: Record<string, string> = { INDEX_FLUX: "Index flux", HYDRAULIC_CONDUCTIVITY: "Hydraulic conductivity at 20 °C" };
 const ACTION_WORDS: Record<string, string> = { RECEIVED: "received", STORED: "stored", CUT: "cut", PREPARED: "prepared", ASSIGNED: "mounted in a cell", TEST_STARTED: "permeation started", TESTED: "tested" };
@@ -147,22 +151,30 @@ export async function buildCertificateSnapshot(tx: Tx, options: { revisionId: st
       approvedAt: iso(run.reviews[0]?.createdAt) ?? "",
     });
 
-    if (!samples.has(roll.id)) {
-      const events = await tx.custodyEvent.findMany({
-        where: { OR: [{ rollId: roll.id }, { couponId: run.specimen.couponId }, { specimenId: run.specimen.id }], action: { in: Object.keys(ACTION_WORDS) as never } },
-        orderBy: [{ occurredAt: "asc" }, { sequence: "asc" }],
-        include: { actor: { select: { name: true } }, roll: { select: { labNumber: true } }, coupon: { select: { labNumber: true } }, specimen: { select: { labNumber: true } } },
-      });
-      samples.set(roll.id, {
-        rollLabNumber: roll.labNumber, rollNumber: roll.rollNumber, lotNumber: roll.lotNumber, product: roll.product, manufacturer: roll.manufacturer,
-        shipmentLabNumber: roll.shipment.labNumber, receivedAt: roll.shipment.receivedAt.toISOString(),
-        condition: roll.conditionNotes || roll.shipment.conditionNotes,
-        custody: events.map((e) => ({ at: e.occurredAt.toISOString(), action: ACTION_WORDS[e.action] ?? e.action.toLowerCase(), item: e.roll?.labNumber ?? e.coupon?.labNumber ?? e.specimen?.labNumber ?? "", by: e.actor.name })),
-      });
-    }
+    if (!samples.has(roll.id)) samples.set(roll.id, await rollSample(tx, roll, [{ couponId: run.specimen.couponId }, { specimenId: run.specimen.id }]));
   }
 
-  const judged = tests.flatMap((t) => t.results.filter((r) => r.conformance).map((r) => ({ label: r.label, method: r.conformance!.method })));
+  // Index tests the draft includes, and the rolls (and coupons) they were done on.
+  const index = await buildIndexTestEntries(tx, { indexResultIds: content.indexResultIds, limits, unitSystem: content.unitSystem });
+  for (const { rollId, couponId } of index.rolls) {
+    if (samples.has(rollId)) continue;
+    const roll = await tx.roll.findUniqueOrThrow({ where: { id: rollId }, include: { shipment: true } });
+    samples.set(rollId, await rollSample(tx, roll, couponId ? [{ couponId }] : []));
+  }
+  const sortedSamples = [...samples.values()].sort((a, b) => a.rollLabNumber.localeCompare(b.rollLabNumber));
+
+  // Every property of the specification for every roll reported on: reported here, or why not.
+  const reported = new Set([...tests.flatMap((t) => t.results.map((r) => `${t.rollLabNumber} ${r.property}`)), ...index.entries.flatMap((t) => t.results.map((r) => `${t.rollLabNumber} ${r.property}`))]);
+  const conformance = limits ? await loadProjectConformance({ projectId: certificate.projectId, specificationId: limits.specificationId, tx }) : null;
+  const propertyCoverage = conformance
+    ? certificateCoverage(
+        conformance.limits.map((l) => ({ property: l.property, label: TEST_PROPERTY_LABELS[l.property as TestProperty] ?? l.property, testingFrequencyAreaM2: l.testingFrequencyAreaM2, testingFrequencyPerLot: l.testingFrequencyPerLot })),
+        conformance.rows.map((r) => ({ rollLabNumber: r.roll.labNumber, cells: r.cells })),
+        reported,
+      )
+    : undefined;
+
+  const judged = [...tests, ...index.entries].flatMap((t) => t.results.filter((r) => r.conformance).map((r) => ({ label: r.label, method: r.conformance!.method })));
   const signedBy = signatory ?? { name: options.signer.name, role: options.signer.role };
   const snapshot: CertificateSnapshot = {
     number: certificate.number,
@@ -182,14 +194,35 @@ export async function buildCertificateSnapshot(tx: Tx, options: { revisionId: st
     decisionRule: decisionRuleText(judged) ?? undefined,
     remarks: content.remarks,
     unitSystem: content.unitSystem,
-    samples: [...samples.values()],
+    samples: sortedSamples,
     tests,
+    indexTests: index.entries,
+    ...(propertyCoverage && { propertyCoverage }),
     signatory: { name: signedBy.name, role: ROLE_LABELS[signedBy.role], meaning: options.meaning, signedAt: options.now.toISOString() },
     supersedes: revision.supersedes ? { revision: revision.supersedes.revision, reason: revision.reason } : null,
   };
   const previous = revision.supersedes?.snapshot as CertificateSnapshot | null | undefined;
   if (previous && typeof previous === "object" && Array.isArray(previous.tests)) snapshot.changes = revisionChanges(previous, snapshot);
   return snapshot;
+}
+
+/** A roll as received, with its custody from receipt to test (its own events and those of `parts`: the coupons and specimens tested). */
+async function rollSample(
+  tx: Tx,
+  roll: { id: string; labNumber: string; rollNumber: string; lotNumber: string; product: string; manufacturer: string; conditionNotes: string | null; shipment: { labNumber: string; receivedAt: Date; conditionNotes: string | null } },
+  parts: Array<{ couponId: string } | { specimenId: string }>,
+): Promise<CertificateSample> {
+  const events = await tx.custodyEvent.findMany({
+    where: { OR: [{ rollId: roll.id }, ...parts], action: { in: Object.keys(ACTION_WORDS) as never } },
+    orderBy: [{ occurredAt: "asc" }, { sequence: "asc" }],
+    include: { actor: { select: { name: true } }, roll: { select: { labNumber: true } }, coupon: { select: { labNumber: true } }, specimen: { select: { labNumber: true } } },
+  });
+  return {
+    rollLabNumber: roll.labNumber, rollNumber: roll.rollNumber, lotNumber: roll.lotNumber, product: roll.product, manufacturer: roll.manufacturer,
+    shipmentLabNumber: roll.shipment.labNumber, receivedAt: roll.shipment.receivedAt.toISOString(),
+    condition: roll.conditionNotes || roll.shipment.conditionNotes || undefined,
+    custody: events.map((e) => ({ at: e.occurredAt.toISOString(), action: ACTION_WORDS[e.action] ?? e.action.toLowerCase(), item: e.roll?.labNumber ?? e.coupon?.labNumber ?? e.specimen?.labNumber ?? "", by: e.actor.name })),
+  };
 }
 
 /** The client's contact for the certificate: the first active contact (name, e-mail, telephone), else the organisation's e-mail. */

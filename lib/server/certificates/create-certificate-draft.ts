@@ -9,8 +9,12 @@ import { allocateLabNumber } from "../db/allocate-lab-number";
 import { withActor } from "../db/transaction";
 import { parseOrThrow } from "../validation/parse";
 import { explainCertificateCollision, refuseResultsOnLiveCertificates } from "./certificate-collision";
+import { checkIndexResultsForProject, refuseIndexResultsOnLiveCertificates } from "./index-results";
 
-/** A QA manager gathers approved results of one project's rolls into a new certificate, as a draft with its own number. */
+/**
+ * A QA manager gathers approved results of one project's rolls (runs' and index tests') into a new
+ * certificate, as a draft with its own number.
+ */
 export async function createCertificateDraft(options: { actor: CurrentUser; input: unknown; now?: Date }) {
   requirePermission(options.actor, "certificate.issue");
   const input = parseOrThrow(draftCertificateSchema, options.input);
@@ -28,12 +32,14 @@ export async function createCertificateDraft(options: { actor: CurrentUser; inpu
     if (unapproved) throw new AppError("INVALID_INPUT", `The result of ${unapproved.run.labNumber} is not approved yet.`);
     // A trigger decides a race between two drafts taking the same result (explained below).
     await refuseResultsOnLiveCertificates(tx, input.resultIds);
+    const indexResultIds = await checkIndexResultsForProject(tx, input.indexResultIds, project.id);
+    await refuseIndexResultsOnLiveCertificates(tx, indexResultIds);
     const certificate = await tx.certificate.create({
       data: { number: await allocateLabNumber(tx, "certificate", options.now), projectId: project.id, clientOrganizationId: project.clientOrganizationId },
       select: { id: true, number: true },
     });
     const revision = await tx.certificateRevision.create({
-      data: { certificateId: certificate.id, revision: 1, status: "DRAFT", verificationCode: newVerificationCode(randomBytes(12)), results: { create: results.map((r) => ({ resultId: r.id })) } },
+      data: { certificateId: certificate.id, revision: 1, status: "DRAFT", verificationCode: newVerificationCode(randomBytes(12)), results: { create: results.map((r) => ({ resultId: r.id })) }, indexResults: { create: indexResultIds.map((indexTestResultId) => ({ indexTestResultId })) } },
       select: { id: true },
     });
     // The draft's first content: these results, judged by the project's newest specification, in the units its
@@ -41,7 +47,7 @@ export async function createCertificateDraft(options: { actor: CurrentUser; inpu
     const specification = await tx.specification.findFirst({ where: { projectId: project.id, isTemplate: false }, orderBy: [{ createdAt: "desc" }, { id: "desc" }], select: { id: true, limits: { select: { unit: true } } } });
     const unitSystem = specification?.limits.some((l) => l.unit.trim().startsWith("cm")) ? "CENTIMETRE" : "SI";
     await tx.certificateDraftContent.create({
-      data: { revisionId: revision.id, version: 1, resultIds: results.map((r) => r.id), specificationId: specification?.id ?? null, unitSystem, createdById: options.actor.id },
+      data: { revisionId: revision.id, version: 1, resultIds: results.map((r) => r.id), indexResultIds, specificationId: specification?.id ?? null, unitSystem, createdById: options.actor.id },
     });
     return certificate;
   }).catch((error: unknown) => {

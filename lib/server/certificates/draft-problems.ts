@@ -4,6 +4,7 @@ import { TEST_PROPERTY_LABELS, type TestProperty } from "@/lib/results/property-
 import type { Db } from "../db/client";
 import type { Tx } from "../db/transaction";
 import { findProjectLimits } from "../specifications/find-project-limits";
+import { indexTestName } from "./index-results";
 import type { DraftContent } from "./draft-content";
 
 /**
@@ -12,15 +13,20 @@ import type { DraftContent } from "./draft-content";
  */
 export async function draftProblems(db: Tx | Db, options: { projectId: string; content: DraftContent }): Promise<Array<{ field: "resultIds" | "specificationId"; message: string }>> {
   const { content } = options;
-  if (content.resultIds.length === 0) return [{ field: "resultIds", message: "The draft includes no results: include at least one approved result before signing." }];
+  if (content.resultIds.length + content.indexResultIds.length === 0) return [{ field: "resultIds", message: "The draft includes no results: include at least one approved result before signing." }];
   if (!content.specificationId) return [];
   const limits = await findProjectLimits({ projectId: options.projectId, specificationId: content.specificationId, tx: db });
   if (!limits) return [{ field: "specificationId", message: "The chosen specification no longer belongs to this project: choose another." }];
   const results = await db.result.findMany({ where: { id: { in: content.resultIds } }, select: { property: true, run: { select: { labNumber: true } } } });
-  return results
-    .filter((r) => !limits.get(r.property as TestProperty))
+  const indexResults = await db.indexTestResult.findMany({ where: { id: { in: content.indexResultIds } }, select: { property: true, indexTest: { select: { methodCode: true, roll: { select: { labNumber: true } } } } } });
+  const lines = [
+    ...results.map((r) => ({ property: r.property as TestProperty, of: r.run.labNumber })),
+    ...indexResults.map((r) => ({ property: r.property as TestProperty, of: indexTestName(r.indexTest) })),
+  ];
+  return lines
+    .filter((r) => !limits.get(r.property))
     .map((r) => ({
       field: "specificationId" as const,
-      message: `${limits.specificationName} sets no limit for ${inSentence(TEST_PROPERTY_LABELS[r.property as TestProperty])} (the result of ${r.run.labNumber}): choose a specification that does, or leave the result out.`,
+      message: `${limits.specificationName} sets no limit for ${inSentence(TEST_PROPERTY_LABELS[r.property])} (the result of ${r.of}): choose a specification that does, or leave the result out.`,
     }));
 }

@@ -8,10 +8,11 @@ import { withActor } from "../db/transaction";
 import { parseOrThrow } from "../validation/parse";
 import { explainCertificateCollision, refuseResultsOnLiveCertificates } from "./certificate-collision";
 import { readDraftContent } from "./draft-content";
+import { checkIndexResultsForProject, refuseIndexResultsOnLiveCertificates } from "./index-results";
 
 /**
  * A QA manager changes a draft revision: which of the project's approved results it includes, the
- * specification it is judged by, the remarks, who is to sign it and the units it prints. Each save is a
+ * specification it is judged by (index-test results as well as runs'), the remarks, who is to sign it and the units it prints. Each save is a
  * new content version (nothing is deleted or rewritten); a result taken in for the first time joins the
  * revision's results, and the database refuses one another live certificate includes.
  */
@@ -22,7 +23,7 @@ export async function editCertificateDraft(options: { actor: CurrentUser; input:
   return withActor(options.actor, async (tx) => {
     const revision = await tx.certificateRevision.findUnique({
       where: { id: input.revisionId },
-      select: { id: true, revision: true, status: true, results: { select: { resultId: true } }, certificate: { select: { id: true, number: true, projectId: true } } },
+      select: { id: true, revision: true, status: true, results: { select: { resultId: true } }, indexResults: { select: { indexTestResultId: true } }, certificate: { select: { id: true, number: true, projectId: true } } },
     });
     if (!revision) throw new AppError("NOT_FOUND");
     const { certificate } = revision;
@@ -37,6 +38,8 @@ export async function editCertificateDraft(options: { actor: CurrentUser; input:
     if (stray) throw new AppError("INVALID_INPUT", `The result of ${stray.run.labNumber} belongs to another project.`, { fieldErrors: { resultIds: "Only this project's results." } });
     const unapproved = results.find((r) => !r.approvedAt);
     if (unapproved) throw new AppError("INVALID_INPUT", `The result of ${unapproved.run.labNumber} is not approved yet.`, { fieldErrors: { resultIds: "Only approved results." } });
+
+    const indexResultIds = await checkIndexResultsForProject(tx, input.indexResultIds, certificate.projectId);
 
     if (input.specificationId) {
       const specification = await tx.specification.findUnique({ where: { id: input.specificationId }, select: { projectId: true, isTemplate: true } });
@@ -53,9 +56,13 @@ export async function editCertificateDraft(options: { actor: CurrentUser; input:
     const onRevision = new Set(revision.results.map((r) => r.resultId));
     const joining = resultIds.filter((id) => !onRevision.has(id));
     if (joining.length) await tx.certificateResult.createMany({ data: joining.map((resultId) => ({ revisionId: revision.id, resultId })) });
+    await refuseIndexResultsOnLiveCertificates(tx, indexResultIds, certificate.id);
+    const indexOnRevision = new Set(revision.indexResults.map((r) => r.indexTestResultId));
+    const indexJoining = indexResultIds.filter((id) => !indexOnRevision.has(id));
+    if (indexJoining.length) await tx.certificateIndexResult.createMany({ data: indexJoining.map((indexTestResultId) => ({ revisionId: revision.id, indexTestResultId })) });
     return tx.certificateDraftContent.create({
       data: {
-        revisionId: revision.id, version: current.version + 1, resultIds, specificationId: input.specificationId || null,
+        revisionId: revision.id, version: current.version + 1, resultIds, indexResultIds, specificationId: input.specificationId || null,
         remarks: input.remarks, signatoryId: input.signatoryId || null, unitSystem: input.unitSystem, createdById: options.actor.id,
       },
       select: { version: true },

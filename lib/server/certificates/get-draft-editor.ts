@@ -8,6 +8,7 @@ import { getDb } from "../db/client";
 import { refuseResultsOnLiveCertificates } from "./certificate-collision";
 import { readDraftContent } from "./draft-content";
 import { draftProblems } from "./draft-problems";
+import { listFreeIndexResults } from "./list-free-index-results";
 
 /**
  * What the draft editor offers: the draft's content, the results it may include (those on it and the
@@ -20,12 +21,13 @@ export async function getDraftEditor(options: { actor: CurrentUser; revisionId: 
   const revision = await db.certificateRevision.findUniqueOrThrow({ where: { id: options.revisionId }, select: { id: true, certificate: { select: { id: true, projectId: true } } } });
   const { projectId, id: certificateId } = revision.certificate;
   const content = await readDraftContent(db, revision.id);
-  const [results, specifications, signatories, problems] = await Promise.all([
+  const [results, indexResults, specifications, signatories, problems] = await Promise.all([
     db.result.findMany({
       where: { approvedAt: { not: null }, run: { specimen: { coupon: { roll: { projectId } } } } },
       orderBy: [{ run: { labNumber: "asc" } }, { property: "asc" }],
       select: { id: true, property: true, value: true, unit: true, run: { select: { labNumber: true, specimen: { select: { labNumber: true } } } } },
     }),
+    listFreeIndexResults(db, { projectId, exceptCertificateId: certificateId, keep: content.indexResultIds }),
     db.specification.findMany({ where: { projectId, isTemplate: false }, orderBy: { createdAt: "desc" }, select: { id: true, name: true, revision: true } }),
     db.user.findMany({ where: { role: "QA_MANAGER", active: true }, orderBy: { name: "asc" }, select: { id: true, name: true } }),
     draftProblems(db, { projectId, content }),
@@ -43,6 +45,7 @@ export async function getDraftEditor(options: { actor: CurrentUser; revisionId: 
       id: r.id,
       label: `${r.run.labNumber} · specimen ${r.run.specimen.labNumber} · ${inSentence(TEST_PROPERTY_LABELS[r.property as TestProperty])} ${formatPropertyValue(r.property, r.value, r.unit, content.unitSystem).text}`,
     })),
+    indexResults: indexResults.map((r) => ({ id: r.id, label: `${r.label} ${formatPropertyValue(r.property, r.value, r.unit, content.unitSystem).text}` })),
     specifications: specifications.map((s) => ({ id: s.id, label: s.revision ? `${s.name} (${s.revision})` : s.name })),
     signatories,
   };

@@ -32,11 +32,12 @@ export async function reviseCertificate(options: { actor: CurrentUser; input: un
       data: {
         certificateId: input.certificateId, revision: latest.revision + 1, status: "DRAFT", reason: input.reason, supersedesId: latest.id,
         verificationCode: newVerificationCode(randomBytes(12)), results: { create: content.resultIds.map((resultId) => ({ resultId })) },
+        indexResults: { create: content.indexResultIds.map((indexTestResultId) => ({ indexTestResultId })) },
       },
       select: { id: true, revision: true },
     });
     await tx.certificateDraftContent.create({
-      data: { revisionId: created.id, version: 1, resultIds: content.resultIds, specificationId: content.specificationId, remarks: content.remarks, signatoryId: content.signatoryId, unitSystem: content.unitSystem, createdById: options.actor.id },
+      data: { revisionId: created.id, version: 1, resultIds: content.resultIds, indexResultIds: content.indexResultIds, specificationId: content.specificationId, remarks: content.remarks, signatoryId: content.signatoryId, unitSystem: content.unitSystem, createdById: options.actor.id },
     });
     return created;
   }).catch(async (error: unknown) => {

@@ -25,9 +25,10 @@ const RUN_PROPERTIES = (methodCode: string): TestProperty[] => (methodCode === "
  * returned or under way, and what is not tested yet. No permission check: a building block for operations
  * that made their own (the roll page, the project page, the portal, the technician's queue).
  */
-export async function loadProjectConformance(options: { projectId: string; rollId?: string; tx?: Tx | Db }): Promise<ProjectConformance> {
+export async function loadProjectConformance(options: { projectId: string; rollId?: string; specificationId?: string; tx?: Tx | Db }): Promise<ProjectConformance> {
   const db = options.tx ?? getDb();
-  const spec = await findProjectLimits({ projectId: options.projectId, tx: db });
+  // A certificate draft may name one of the project's specifications; otherwise the newest applies.
+  const spec = await findProjectLimits({ projectId: options.projectId, specificationId: options.specificationId, tx: db });
   const rolls = await db.roll.findMany({
     where: { projectId: options.projectId },
     orderBy: { labNumber: "asc" },

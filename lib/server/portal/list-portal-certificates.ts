@@ -20,6 +20,8 @@ export type PortalCertificateRevision = {
   supersededByRevision: number | null;
   /** Whether a PDF was stored at issue (the digest is stored with it). */
   hasPdf: boolean;
+  /** The rolls (lab numbers) the revision reports on, from its frozen snapshot. */
+  rolls: string[];
 };
 
 export type PortalCertificate = {
@@ -50,7 +52,7 @@ export async function listPortalCertificates(options: { actor: CurrentUser; proj
         where: { status: { in: VISIBLE } },
         orderBy: { revision: "desc" },
         select: {
-          revision: true, status: true, reason: true, verificationCode: true, issuedAt: true, supersededAt: true, revokedAt: true, pdfSha256: true,
+          revision: true, status: true, reason: true, verificationCode: true, issuedAt: true, supersededAt: true, revokedAt: true, pdfSha256: true, snapshot: true,
           supersededBy: { select: { revision: true, status: true } },
         },
       },
@@ -59,9 +61,10 @@ export async function listPortalCertificates(options: { actor: CurrentUser; proj
   return certificates.map((c) => ({
     number: c.number,
     project: c.project,
-    revisions: c.revisions.map(({ pdfSha256, supersededBy, ...r }) => ({
+    revisions: c.revisions.map(({ pdfSha256, supersededBy, snapshot, ...r }) => ({
       ...r,
       hasPdf: pdfSha256 !== null,
+      rolls: rollsOf(snapshot),
       supersededByRevision: r.status === "SUPERSEDED" ? supersedingRevision(r.revision, supersededBy, c.revisions) : null,
     })),
   }));
@@ -72,4 +75,10 @@ function supersedingRevision(revision: number, link: { revision: number; status:
   if (link && link.status !== "DRAFT") return link.revision;
   const later = visible.map((v) => v.revision).filter((n) => n > revision);
   return later.length > 0 ? Math.min(...later) : null;
+}
+
+// The rolls a frozen snapshot reports on (its samples table); none for a revision without a snapshot.
+function rollsOf(snapshot: unknown): string[] {
+  const samples = (snapshot as { samples?: Array<{ rollLabNumber?: unknown }> } | null)?.samples;
+  return Array.isArray(samples) ? samples.map((s) => s.rollLabNumber).filter((n): n is string => typeof n === "string") : [];
 }

@@ -51,6 +51,24 @@ const CHECKLIST: Item[] = [
     expect(section(h, "certificate-summary")).toContain("± 0.21 × 10⁻⁹ m³/m²/s");
     expect(section(h, "certificate-uncertainty")).toContain("coverage probability of about 95 %");
   } },
+  { clause: "7.8.2.1 e, l; 7.8.3.1 b, c", item: "an index test: method with edition, item, specimens, result with standard deviation, uncertainty or why none, limit and E29 decision", field: "indexTests[] (method.edition, couponLabNumber, specimenValues, results[].standardDeviationDisplay, uncertaintyNote, conformance)", check: (h, s) => {
+    const t = section(h, "certificate-index-test");
+    expect(t).toContain(s.indexTests![0]!.method.edition!);
+    expect(t).toContain("C26-00209");
+    // ASTM D6768: five strips, mean 9.02 kN/m printed 9.0, standard deviation 0.30 kN/m (worked in make-certificate-snapshot).
+    expect(t).toMatch(/Tensile strength 9\.0 kN\/m 5 0\.30 kN\/m not stated ≥ 4 kN\/m conforms/);
+    expect(t).toContain("Specimens 5: 9.1 kN/m; 8.9 kN/m; 9.5 kN/m; 9.0 kN/m; 8.7 kN/m");
+    expect(t).toContain("no expanded uncertainty for this method");
+    expect(t).toContain("9.02 kN/m, rounded to 9 kN/m (ASTM E29, half to even), is not below the minimum of 4 kN/m: conforms.");
+    expect(section(h, "certificate-summary")).toMatch(/4 · D6768 C26-00209 Tensile strength 9\.0 kN\/m/);
+  } },
+  { clause: "7.8.3.1 b", item: "conformity with the whole specification: every property listed, those not reported named with the reason", field: "propertyCoverage (rows, notTested, otherRolls)", check: (h) => {
+    const t = section(h, "certificate-coverage");
+    expect(t).toContain("Bentonite fluid loss of R26-00412: pending: Fluid loss (ASTM D5891) awaits the QA manager's review.");
+    expect(t).toContain("Bentonite swell index of R26-00413: not required for this roll by the specification's sampling frequency (1 per lot)");
+    expect(t).toContain("Tensile strength of R26-00413: not required for this roll by the specification's sampling frequency (1 per 20,000 m² delivered)");
+    expect(t).toContain("The project's other rolls (R26-00414) have no result on this certificate");
+  } },
   { clause: "7.8.8", item: "an amended report identified as such, with the reason and what changed", field: "supersedes, reason, changes", check: () => {
     const amended = render(makeCertificateSnapshot({ tests: 1, complete: true, supersedes: true, conditions: true }));
     const t = section(amended, "certificate-amendment");
@@ -61,7 +79,7 @@ const CHECKLIST: Item[] = [
 ];
 
 describe("ISO/IEC 17025:2017 7.8.2.1 and 7.8.3.1 checklist on a rendered certificate", () => {
-  const snapshot = makeCertificateSnapshot({ tests: 3, complete: true, conditions: true, deviations: true });
+  const snapshot = makeCertificateSnapshot({ tests: 3, complete: true, conditions: true, deviations: true, indexTests: true });
   const html = render(snapshot);
   for (const item of CHECKLIST) it(`${item.clause}: ${item.item} (${item.field})`, () => item.check(html, snapshot));
 

@@ -25,6 +25,18 @@ describe("what a revision changes", () => {
     after.tests[0]!.results[0]!.display = "2.5 × 10⁻⁹ m³/m²/s";
     expect(revisionChanges(before, after)).toEqual(["Restated: index flux of T26-00091 (specimen S26-00311), now 2.5 × 10⁻⁹ m³/m²/s (was 2.4 × 10⁻⁹ m³/m²/s)."]);
   });
+
+  it("names index-test results added, left out and restated", () => {
+    const withIndex = makeCertificateSnapshot({ tests: 2, complete: true, indexTests: true });
+    const after = structuredClone(withIndex);
+    after.indexTests = after.indexTests!.slice(0, 1);
+    after.indexTests[0]!.results[0]!.display = "9.1 kN/m";
+    expect(revisionChanges(withIndex, after)).toEqual([
+      "Removed: bentonite swell index of roll R26-00412 (ASTM D5890).",
+      "Restated: tensile strength of roll R26-00412 (ASTM D6768), now 9.1 kN/m (was 9.0 kN/m).",
+    ]);
+    expect(revisionChanges(before, withIndex)).toEqual(["Added: tensile strength of roll R26-00412 (ASTM D6768).", "Added: bentonite swell index of roll R26-00412 (ASTM D5890)."]);
+  });
 });
 
 describe("the decision rule in words", () => {

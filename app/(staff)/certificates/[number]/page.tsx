@@ -3,6 +3,8 @@ import { EditDraftForm } from "@/components/certificates/edit-draft-form";
 import { IssueCertificateForm } from "@/components/certificates/issue-certificate-form";
 import { ReviseCertificateForm } from "@/components/certificates/revise-certificate-form";
 import { isAppError } from "@/lib/errors/app-error";
+import { inSentence } from "@/lib/format/sentence-case";
+import { TEST_PROPERTY_LABELS } from "@/lib/results/property-units";
 import { formatDateTime } from "@/lib/format/dates";
 import { can } from "@/lib/policy/permissions";
 import { formatPropertyValue } from "@/lib/format/result-numbers";
@@ -31,6 +33,7 @@ export default async function CertificatePage({ params }: Props) {
   const latest = certificate.revisions[0];
   const draft = mayIssue && latest?.status === "DRAFT" ? await getDraftEditor({ actor, revisionId: latest.id }) : null;
   const included = new Set(draft?.content.resultIds ?? []);
+  const includedIndex = new Set(draft?.content.indexResultIds ?? []);
   return (
     <>
       <h1>Certificate <span className="mono">{certificate.number}</span></h1>
@@ -42,6 +45,10 @@ export default async function CertificatePage({ params }: Props) {
             {r.reason && <p>Reason: {r.reason}</p>}
             <ul>
               {r.results.filter(({ result }) => (r.id === latest?.id && draft ? included.has(result.id) : !r.contents[0] || r.contents[0].resultIds.includes(result.id))).map(({ result }) => <li key={result.id}>{result.run.labNumber} · specimen {result.run.specimen.labNumber} · {result.property === "INDEX_FLUX" ? "index flux" : "hydraulic conductivity at 20 °C"} {formatPropertyValue(result.property, result.value, result.unit, actor.resultUnits ?? "SI").text}</li>)}
+              {r.indexResults
+                .map(({ indexTestResult: x }) => x)
+                .filter((x) => (r.id === latest?.id && draft ? includedIndex.has(x.id) : !r.contents[0] || r.contents[0].indexResultIds.includes(x.id)))
+                .map((x) => <li key={x.id}>roll {x.indexTest.roll.labNumber} · ASTM {x.indexTest.methodCode} · {inSentence(TEST_PROPERTY_LABELS[x.property])} {formatPropertyValue(x.property, x.value, x.unit, actor.resultUnits ?? "SI").text}</li>)}
             </ul>
             {r.issuedAt && (
               <p className="muted">
@@ -52,7 +59,7 @@ export default async function CertificatePage({ params }: Props) {
             {r.status === "DRAFT" && draft && r.id === latest?.id && (
               <div className="stack-gap" data-testid="draft-editor">
                 <h3>Draft content <span className="count">version {draft.content.version}</span></h3>
-                <EditDraftForm key={draft.content.version} revisionId={r.id} content={draft.content} results={draft.results} specifications={draft.specifications} signatories={draft.signatories} />
+                <EditDraftForm key={draft.content.version} revisionId={r.id} content={draft.content} results={draft.results} indexResults={draft.indexResults} specifications={draft.specifications} signatories={draft.signatories} />
                 <p><a className="button button-quiet" href={`/api/certificates/${certificate.number}/preview?revision=${r.revision}`} target="_blank" rel="noopener" data-testid="draft-preview">Preview the PDF</a> <span className="muted">The certificate exactly as it would be issued now, marked DRAFT on every page.</span></p>
                 {draft.problems.length > 0 && <div className="notice notice-caution" data-testid="draft-problems">{draft.problems.map((p) => <p key={p.message}>{p.message}</p>)}</div>}
                 <IssueCertificateForm revisionId={r.id} />

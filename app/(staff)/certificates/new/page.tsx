@@ -13,7 +13,7 @@ export default async function NewCertificatePage() {
       <h1>New certificate</h1>
       <p className="muted">Approved results not yet on a certificate, by project. A certificate covers one project.</p>
       {groups.length === 0 ? <p className="empty">No approved result is waiting for a certificate.</p> : (
-        <DraftCertificateForm groups={groups.map((g) => ({ project: g.project, results: g.results.map((r) => ({ id: r.id, label: `${r.run.labNumber} · specimen ${r.run.specimen.labNumber} · roll ${r.run.specimen.coupon.roll.labNumber} · ASTM ${r.run.methodCode} · ${formatPropertyValue(r.property, r.value, r.unit, actor.resultUnits ?? "SI").text}` })) }))} />
+        <DraftCertificateForm groups={groups.map((g) => ({ project: g.project, results: g.results.map((r) => ({ id: r.id, limited: g.limited.includes(r.property), shipment: r.run.specimen.coupon.roll.shipment.labNumber, label: `${r.run.labNumber} · specimen ${r.run.specimen.labNumber} · roll ${r.run.specimen.coupon.roll.labNumber} (shipment ${r.run.specimen.coupon.roll.shipment.labNumber}) · ASTM ${r.run.methodCode} · ${formatPropertyValue(r.property, r.value, r.unit, actor.resultUnits ?? "SI").text}` })), indexResults: g.indexResults.map((r) => ({ id: r.id, limited: g.limited.includes(r.property), shipment: r.shipmentLabNumber, label: `${r.label} ${formatPropertyValue(r.property, r.value, r.unit, actor.resultUnits ?? "SI").text}` })) }))} />
       )}
     </>
   );
