@@ -1,5 +1,18 @@
 import path from "node:path";
 import { defineConfig } from "vitest/config";
+import { BaseSequencer, type TestSpecification } from "vitest/node";
+
+/**
+ * The accessibility crawl runs first among the files: it must find the demo as seeded (a run waiting for
+ * review, a draft certificate), before other end-to-end journeys approve or issue them.
+ */
+class AccessibilityFirst extends BaseSequencer {
+  override async sort(files: TestSpecification[]) {
+    const sorted = await super.sort(files);
+    const first = sorted.filter((f) => f.moduleId.endsWith("/e2e/accessibility.test.ts"));
+    return [...first, ...sorted.filter((f) => !first.includes(f))];
+  }
+}
 
 // One runner, three projects: `npm test` runs them all; `vitest --project unit` runs one.
 const alias = {
@@ -11,6 +24,7 @@ const alias = {
 export default defineConfig({
   resolve: { alias },
   test: {
+    sequence: { sequencer: AccessibilityFirst },
     projects: [
       {
         resolve: { alias },

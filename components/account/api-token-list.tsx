@@ -22,7 +22,7 @@ export function ApiTokenList({ tokens, zone, showOwner, revoke }: { tokens: ApiT
     <ScrollArea>
       {message && <div className={message.ok ? "notice notice-ok" : "notice notice-error"} role="status">{message.text}</div>}
       <table className="list" data-testid="api-token-list">
-        <thead><tr><th>Name</th>{showOwner && <th>Owner</th>}<th>May</th><th>Standing</th><th>Last used</th><th /></tr></thead>
+        <thead><tr><th>Name</th>{showOwner && <th>Owner</th>}<th>May</th><th>Standing</th><th>Last used</th><th>Revoke</th></tr></thead>
         <tbody>
           {tokens.map((t) => (
             <tr key={t.id} data-token-name={t.name}>

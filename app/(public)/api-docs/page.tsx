@@ -18,7 +18,7 @@ export default function ApiDocsPage() {
   const paths = Object.entries(doc.paths ?? {}) as Array<[string, Record<string, Operation>]>;
   const schemas = Object.entries((doc.components?.schemas ?? {}) as Record<string, Schema>);
   return (
-    <main className="stack" style={{ maxWidth: "60rem", margin: "0 auto", padding: "1.5rem" }}>
+    <main className="stack" id="main" tabIndex={-1} style={{ maxWidth: "60rem", margin: "0 auto", padding: "1.5rem" }}>
       <h1>{doc.info.title}, version {doc.info.version}</h1>
       <p>{doc.info.description}</p>
       <p className="muted">
@@ -26,7 +26,7 @@ export default function ApiDocsPage() {
         <a href="/api/v1/openapi.json">/api/v1/openapi.json</a> (OpenAPI 3.1). <Link href="/">Back to Seepline</Link>
       </p>
       <nav aria-label="Requests">
-        <ul>{paths.flatMap(([path, ops]) => Object.keys(ops).map((m) => <li key={`${m} ${path}`}><a href={`#${m}-${path}`}><code>{m.toUpperCase()} /api/v1{path}</code></a></li>))}</ul>
+        <ul className="link-list">{paths.flatMap(([path, ops]) => Object.keys(ops).map((m) => <li key={`${m} ${path}`}><a href={`#${m}-${path}`}><code>{m.toUpperCase()} /api/v1{path}</code></a></li>))}</ul>
       </nav>
       {paths.flatMap(([path, ops]) =>
         Object.entries(ops).map(([method, op]) => (
