@@ -1,23 +1,12 @@
 import type { Browser, Page } from "puppeteer";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { fetchInPage } from "./support/fetch-in-page";
 import { fill } from "./support/forms";
 import { pdfPages, pdfText } from "./support/run-steps";
 import { baseUrl, browserAvailable, launchBrowser, pageSignedInAs, signInOverHttp, textOf } from "./support/session";
 
 async function cookieHeader(page: Page): Promise<string> {
   return (await page.browserContext().cookies()).map((c) => `${c.name}=${c.value}`).join("; ");
-}
-
-/** A PDF the page's own session fetches (a link's target), as bytes. */
-async function fetchInPage(page: Page, href: string): Promise<{ status: number; type: string | null; pdf: Buffer }> {
-  const got = await page.evaluate(async (url) => {
-    const response = await fetch(url);
-    const bytes = new Uint8Array(await response.arrayBuffer());
-    let binary = "";
-    for (let i = 0; i < bytes.length; i += 0x8000) binary += String.fromCharCode(...bytes.subarray(i, i + 0x8000));
-    return { status: response.status, type: response.headers.get("content-type"), base64: btoa(binary) };
-  }, href);
-  return { status: got.status, type: got.type, pdf: Buffer.from(got.base64, "base64") };
 }
 
 /** Follows the review queue's link to a run's review page, as QA does. */
@@ -100,7 +89,7 @@ describe.skipIf(!browserAvailable())("QA review, signed certificates, verificati
     const previewHref = await qa.$eval('[data-testid="draft-preview"]', (a) => (a as HTMLAnchorElement).href);
     const preview = await fetchInPage(qa, previewHref);
     expect([preview.status, preview.type]).toEqual([200, "application/pdf"]);
-    const previewPages = pdfPages(preview.pdf);
+    const previewPages = pdfPages(preview.body);
     expect(previewPages.length).toBeGreaterThanOrEqual(2);
     for (const [i, page] of previewPages.entries()) expect(page.replace(/\s+/g, " "), `preview page ${i + 1}`).toContain("DRAFT · NOT ISSUED");
     const previewText = previewPages.join(" ").replace(/\s+/g, " ");
@@ -148,7 +137,7 @@ describe.skipIf(!browserAvailable())("QA review, signed certificates, verificati
     expect(await textOf(qa, '[data-testid="revision-2-status"]')).toBe("issued");
     // Page 1 of revision 2 says it is amended, why, and what changed.
     const revision2 = await fetchInPage(qa, await qa.$eval('[data-testid="revision-2-pdf"]', (a) => (a as HTMLAnchorElement).href));
-    const firstPage = pdfPages(revision2.pdf)[0]!.replace(/\s+/g, " ");
+    const firstPage = pdfPages(revision2.body)[0]!.replace(/\s+/g, " ");
     expect(firstPage).toContain("Amended certificate. Revision 2 supersedes revision 1");
     expect(firstPage).toContain("Reason: The remark named the wrong way the specimens were cut.");
     expect(firstPage).toContain('Remarks changed; they now read: "Specimens cut with a 100 mm die at the laboratory."');
