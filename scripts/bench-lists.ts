@@ -11,6 +11,7 @@ import { parseListQuery, type ListKind } from "../lib/validation/list-query";
 import { createTestDatabase } from "../tests/support/test-database";
 import { median } from "./support/median";
 import { UTC_SESSION_OPTIONS } from "../lib/server/db/utc-session";
+import { captureStatements } from "./support/capture-statements";
 import { bulkSeedSql } from "./support/bulk-seed";
 
 const REPEAT = 7;
@@ -103,25 +104,6 @@ async function main() {
     if (keep) console.log(`\nkept the bench database: ${database.url}`);
     else await database.drop();
   }
-}
-
-/** The SQL statements `work` sends through Prisma, taken from a second client with query logging on. */
-async function captureStatements(url: string, work: () => Promise<void>): Promise<{ text: string; values: unknown[] }[]> {
-  const { PrismaPg } = await import("@prisma/adapter-pg");
-  const { PrismaClient } = await import("../lib/generated/prisma/client");
-  const statements: { text: string; values: unknown[] }[] = [];
-  const logging = new PrismaClient({ adapter: new PrismaPg({ connectionString: url, options: UTC_SESSION_OPTIONS }), log: [{ emit: "event", level: "query" }] });
-  logging.$on("query", (e) => statements.push({ text: e.query, values: JSON.parse(e.params) as unknown[] }));
-  const globalForDb = globalThis as unknown as { seeplineDb?: unknown };
-  const previous = globalForDb.seeplineDb;
-  globalForDb.seeplineDb = logging;
-  try {
-    await work();
-  } finally {
-    globalForDb.seeplineDb = previous;
-    await logging.$disconnect();
-  }
-  return statements;
 }
 
 main().catch((error) => {

@@ -13,6 +13,7 @@ import type { ChildProcess } from "node:child_process";
 import pg from "pg";
 import type { CurrentUser } from "../lib/server/auth/current-user";
 import { UTC_SESSION_OPTIONS } from "../lib/server/db/utc-session";
+import { captureStatements } from "./support/capture-statements";
 import { parseListQuery } from "../lib/validation/list-query";
 import { DEMO_PASSWORD } from "../prisma/seed/demo-people";
 import { createTestDatabase } from "../tests/support/test-database";
@@ -202,25 +203,6 @@ async function main() {
     if (keep) console.log(`kept the bench database: ${database.url}`);
     else await database.drop();
   }
-}
-
-/** The SQL statements `work` sends through Prisma, taken from a second client with query logging on. */
-async function captureStatements(url: string, work: () => Promise<unknown>): Promise<{ text: string; values: unknown[] }[]> {
-  const { PrismaPg } = await import("@prisma/adapter-pg");
-  const { PrismaClient } = await import("../lib/generated/prisma/client");
-  const statements: { text: string; values: unknown[] }[] = [];
-  const logging = new PrismaClient({ adapter: new PrismaPg({ connectionString: url, options: UTC_SESSION_OPTIONS }), log: [{ emit: "event", level: "query" }] });
-  logging.$on("query", (e) => statements.push({ text: e.query, values: JSON.parse(e.params) as unknown[] }));
-  const globalForDb = globalThis as unknown as { seeplineDb?: unknown };
-  const previous = globalForDb.seeplineDb;
-  globalForDb.seeplineDb = logging;
-  try {
-    await work();
-  } finally {
-    globalForDb.seeplineDb = previous;
-    await logging.$disconnect();
-  }
-  return statements.filter((s) => !/^\s*(BEGIN|COMMIT|ROLLBACK)/i.test(s.text));
 }
 
 main().catch((error) => {
