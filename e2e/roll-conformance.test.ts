@@ -234,9 +234,9 @@ describe.skipIf(!browserAvailable())("a roll's whole conformance job: index test
     expect(previewText).toContain("What this certificate covers of the specification");
     // Each method with its edition (the editions the migration installs, from memory).
     for (const edition of ["D5887/D5887M-20", "D5890-19", "D5891/D5891M-19", "D5993-18", "D6768/D6768M-20", "D6496/D6496M-20"]) expect(previewText).toContain(`Standard: ASTM ${edition}`);
-    // The worked examples' numbers: D5993 3.79 kg/m² (three squares), D6768 9.0 kN/m with SD 0.30 kN/m (five strips).
+    // The worked examples' numbers: D5993 3.79 kg/m² (three squares), D6768 9.02 kN/m with SD 0.298 kN/m (five strips; three significant digits).
     expect(previewText).toMatch(/Bentonite mass per unit area 3\.79 kg\/m² 3 /);
-    expect(previewText).toMatch(/Tensile strength 9\.0 kN\/m 5 0\.30 kN\/m/);
+    expect(previewText).toMatch(/Tensile strength 9\.02 kN\/m 5 0\.298 kN\/m/);
     expect(previewText).toContain("Properties not reported, and why");
     expect(previewText).toContain("Decision rule.");
     await fill(qa, "Your password, to sign", "seepline-demo");

@@ -25,12 +25,12 @@ export const UNIT_SYSTEM_LABELS: Record<UnitSystem, string> = {
 export const PROPERTY_FORMATS: Record<TestProperty, { significantDigits: number; units: Record<UnitSystem, string> }> = {
   INDEX_FLUX: { significantDigits: 2, units: { SI: "m3/m2/s", CENTIMETRE: "cm3/cm2/s" } },
   HYDRAULIC_CONDUCTIVITY: { significantDigits: 2, units: { SI: "m/s", CENTIMETRE: "cm/s" } },
-  SWELL_INDEX: { significantDigits: 2, units: { SI: "mL/2 g", CENTIMETRE: "mL/2 g" } },
-  FLUID_LOSS: { significantDigits: 2, units: { SI: "mL", CENTIMETRE: "mL" } },
+  SWELL_INDEX: { significantDigits: 3, units: { SI: "mL/2 g", CENTIMETRE: "mL/2 g" } },
+  FLUID_LOSS: { significantDigits: 3, units: { SI: "mL", CENTIMETRE: "mL" } },
   BENTONITE_MASS_PER_AREA: { significantDigits: 3, units: { SI: "kg/m2", CENTIMETRE: "kg/m2" } },
   MOISTURE_CONTENT: { significantDigits: 3, units: { SI: "%", CENTIMETRE: "%" } },
   GCL_MASS_PER_AREA: { significantDigits: 3, units: { SI: "kg/m2", CENTIMETRE: "kg/m2" } },
-  TENSILE_STRENGTH: { significantDigits: 2, units: { SI: "kN/m", CENTIMETRE: "kN/m" } },
+  TENSILE_STRENGTH: { significantDigits: 3, units: { SI: "kN/m", CENTIMETRE: "kN/m" } },
   PEEL_STRENGTH: { significantDigits: 3, units: { SI: "N/m", CENTIMETRE: "N/m" } },
 };
 

@@ -57,7 +57,7 @@ describe("index-test results on certificates", () => {
     const snapshot = await db().$transaction((tx) => buildCertificateSnapshot(tx, { revisionId: revision.id, signer: qa, meaning: "Reviewed", now: new Date(), baseUrl: "http://localhost" }));
     expect(snapshot.tests).toEqual([]);
     const test = snapshot.indexTests![0]!;
-    // The edition the migration installs for D5890 (from memory), one 2 g specimen, 27.5 mL/2 g to two digits.
+    // The edition the migration installs for D5890 (from memory), one 2 g specimen, 27.5 mL/2 g to three digits.
     expect(test.method).toEqual({ code: "D5890", title: "Swell index (ASTM D5890)", edition: "D5890-19" });
     expect(test.rollLabNumber).toBe(a.labNumber);
     expect(test.instruments).toHaveLength(2);
