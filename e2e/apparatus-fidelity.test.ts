@@ -160,7 +160,8 @@ describe.skipIf(!browserAvailable())("every number computed as the apparatus wor
     }, runNumber);
     await qa.evaluate((run) => {
       const label = [...document.querySelectorAll("label")].find((l) => l.textContent?.includes(run))!;
-      label.closest("section")!.querySelector<HTMLButtonElement>("button")!.click();
+      const buttons = [...label.closest("section")!.querySelectorAll<HTMLButtonElement>("button")];
+      buttons.find((b) => b.textContent?.includes("Draft a certificate"))!.click();
     }, runNumber);
     await qa.waitForFunction(() => /^\/certificates\/Q\d{2}-\d{5}$/.test(location.pathname), { timeout: 30_000 });
     const number = qa.url().split("/").pop()!;
