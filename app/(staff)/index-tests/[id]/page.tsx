@@ -9,7 +9,7 @@ import { INDEX_METHODS, isIndexMethodCode } from "@/lib/index-tests/index-test-m
 import { reportIndexValue } from "@/lib/index-tests/reported-value";
 import { methodSettingsDefinition } from "@/lib/methods/registry";
 import { readStoredSettings } from "@/lib/methods/settings-definition";
-import { canApproveRun } from "@/lib/policy/permissions";
+import { can, canApproveRun } from "@/lib/policy/permissions";
 import { formatNumber, formatUnit } from "@/lib/results/format-result";
 import { TEST_PROPERTY_LABELS } from "@/lib/results/property-units";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
@@ -106,8 +106,8 @@ export default async function IndexTestPage({ params }: Props) {
           {test.reviews.length === 0 ? <p className="empty">No decision yet.</p> : (
             <ul>{test.reviews.map((r, i) => <li key={i}>{formatDateTime(r.createdAt, zone)}: {r.decision === "APPROVED" ? "approved" : "returned"} by {r.reviewer.name}{r.comments ? `: “${r.comments}”` : ""}</li>)}</ul>
           )}
-          {test.state === "SUBMITTED" && (review.ok ? <IndexTestReviewForm indexTestId={test.id} version={test.version} /> : actor.role === "QA_MANAGER" ? <p className="notice">{review.reason}</p> : null)}
-          {test.state === "RETURNED" && !test.correctedBy && method && actor.role === "TECHNICIAN" && (
+          {test.state === "SUBMITTED" && (review.ok ? <IndexTestReviewForm indexTestId={test.id} version={test.version} /> : can(actor.role, "run.review") ? <p className="notice">{review.reason}</p> : null)}
+          {test.state === "RETURNED" && !test.correctedBy && method && can(actor.role, "run.operate") && (
             <p><Link className="button" href={`/index-tests/new/${test.roll.labNumber}/${method.code}`}>Record the test again</Link></p>
           )}
         </section>
