@@ -1,5 +1,6 @@
 import "server-only";
 import { AppError } from "@/lib/errors/app-error";
+import { can } from "@/lib/policy/permissions";
 import { editCertificateDraftSchema } from "@/lib/validation/certificates";
 import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
@@ -48,7 +49,7 @@ export async function editCertificateDraft(options: { actor: CurrentUser; input:
     }
     if (input.signatoryId) {
       const signatory = await tx.user.findUnique({ where: { id: input.signatoryId }, select: { role: true, active: true } });
-      if (!signatory || signatory.role !== "QA_MANAGER" || !signatory.active)
+      if (!signatory || !can(signatory.role, "certificate.issue") || !signatory.active)
         throw new AppError("INVALID_INPUT", "The signatory must be an active QA manager.", { fieldErrors: { signatoryId: "Choose an active QA manager." } });
     }
 
