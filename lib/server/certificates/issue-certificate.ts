@@ -47,6 +47,9 @@ export async function issueCertificate(options: { actor: CurrentUser; input: unk
   const pdfSha256 = createHash("sha256").update(pdf).digest("hex");
 
   const issued = await withActor(options.actor, async (tx) => {
+    // Two signers at once: the second waits here for the first to commit, then sees the revision issued
+    // and is told so, instead of meeting the database's refusal of a signature on an issued revision.
+    await tx.$queryRaw`SELECT id FROM "CertificateRevision" WHERE id = ${input.revisionId} FOR UPDATE`;
     const revision = await tx.certificateRevision.findUniqueOrThrow({ where: { id: input.revisionId }, select: { status: true, supersedesId: true } });
     if (revision.status !== "DRAFT") throw new AppError("CONFLICT", `${snapshot.number} revision ${snapshot.revision} was issued by someone else a moment ago; reload the page.`);
     // What was rendered is what is signed: a change saved to the draft meanwhile stops the signing.
