@@ -5,7 +5,7 @@
  * from each bucket the point that makes the largest triangle with the point kept from the previous bucket and
  * the average of the next bucket is kept. Peaks, troughs and steps survive; flat stretches thin out. Pure.
  */
-export function largestTriangleThreeBuckets(xs: readonly number[], ys: readonly number[], threshold: number): number[] {
+export function largestTriangleThreeBuckets(xs: ArrayLike<number>, ys: ArrayLike<number>, threshold: number): number[] {
   const n = Math.min(xs.length, ys.length);
   if (threshold >= n) return Array.from({ length: n }, (_, i) => i);
   if (threshold < 3) return n === 1 ? [0] : [0, n - 1];
@@ -53,11 +53,24 @@ export function downsampleRows<T extends Record<string, number>>(rows: readonly 
   if (rows.length <= maxPoints) return [...rows];
   const share = Math.max(3, Math.floor(maxPoints / Math.max(1, keys.length)));
   const keep = new Set<number>([0, rows.length - 1]);
+  // Typed arrays, filled once per series: a data-logger run has 100,000 rows, and arrays of boxed numbers
+  // per series cost more in allocation and garbage collection than the triangles themselves.
+  const n = rows.length;
+  const xs = new Float64Array(n);
+  for (let i = 0; i < n; i++) xs[i] = rows[i]![x] as number;
+  const fx = new Float64Array(n);
+  const fy = new Float64Array(n);
+  const at = new Int32Array(n);
   for (const key of keys) {
-    const finite: number[] = [];
-    for (let i = 0; i < rows.length; i++) if (Number.isFinite(rows[i]![key]) && Number.isFinite(rows[i]![x])) finite.push(i);
-    const picked = largestTriangleThreeBuckets(finite.map((i) => rows[i]![x]), finite.map((i) => rows[i]![key]), share);
-    for (const p of picked) keep.add(finite[p]!);
+    let count = 0;
+    for (let i = 0; i < n; i++) {
+      const y = rows[i]![key] as number;
+      if (!Number.isFinite(y) || !Number.isFinite(xs[i]!)) continue;
+      fx[count] = xs[i]!;
+      fy[count] = y;
+      at[count++] = i;
+    }
+    for (const p of largestTriangleThreeBuckets(fx.subarray(0, count), fy.subarray(0, count), share)) keep.add(at[p]!);
   }
   return [...keep].sort((a, b) => a - b).map((i) => rows[i]!);
 }

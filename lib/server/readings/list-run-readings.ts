@@ -7,7 +7,7 @@ import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
 import { getDb } from "../db/client";
 import { currentVolumesMl } from "@/lib/evaluation/current-volumes";
-import { loadCurrentReadingsOnce } from "./load-current-readings";
+import { loadCurrentReadingsOnce, type CurrentReadingRow } from "./load-current-readings";
 import { BURETTE_PANEL_ROLE, buretteAreasMm2 } from "./reading-context";
 
 const READING_SELECT = {
@@ -19,6 +19,19 @@ const READING_SELECT = {
   correctedBy: { select: { id: true } },
 } as const;
 type ReadingRow = Prisma.ReadingGetPayload<{ select: typeof READING_SELECT }>;
+
+// The volumes of a kept set of readings (current-readings-cache.ts) are worked out once per burette areas.
+const globalForVolumes = globalThis as unknown as { seeplineVolumes?: WeakMap<readonly CurrentReadingRow[], { areas: string; volumes: Array<{ inflowMl: number; outflowMl: number }> }> };
+const volumesOfReadings = (globalForVolumes.seeplineVolumes ??= new WeakMap());
+
+function volumesOf(readings: CurrentReadingRow[], areasMm2: { inflow: number; outflow: number } | null) {
+  const areas = JSON.stringify(areasMm2);
+  const kept = volumesOfReadings.get(readings);
+  if (kept?.areas === areas) return kept.volumes;
+  const volumes = currentVolumesMl(readings, areasMm2);
+  volumesOfReadings.set(readings, { areas, volumes });
+  return volumes;
+}
 
 /** Readings shown a page at a time: a run logged every few minutes for weeks holds tens of thousands. */
 export const READINGS_PAGE_SIZE = 100;
@@ -60,7 +73,10 @@ export async function listRunReadings(options: { actor: CurrentUser; runId: stri
 
   const panel = run.equipment[0];
   const areasMm2 = buretteAreasMm2(panel?.calibration?.values);
-  const volumes = new Map(currentVolumesMl(currentAll, areasMm2).map((v, i) => [currentAll[i]!.id, v]));
+  const allVolumes = volumesOf(currentAll, areasMm2);
+  const firstShown = (page - 1) * pageSize;
+  const volumes = new Map(slice.map((r, i) => [r.id, allVolumes[firstShown + i]!]));
+  if (lastCurrent) volumes.set(lastCurrent.id, allVolumes[currentAll.length - 1]!);
   const base = currentAll[0];
   const withVolumes = <R extends ReadingRow>(r: R) => ({
     ...r,

@@ -41,11 +41,28 @@ export async function loadRunEvaluationContext(db: Source, runId: string, option
   };
 }
 
+// On globalThis, like the readings they belong to (current-readings-cache.ts): pages and route handlers share them.
+const globalForVerdicts = globalThis as unknown as { seeplineVerdicts?: WeakMap<readonly CurrentReadingRow[], Map<string, RunVerdict>> };
+const verdictsOfReadings = (globalForVerdicts.seeplineVerdicts ??= new WeakMap());
+
 /**
  * The hydraulics library's verdict on a run's current readings, or why there is none yet, with how it was
  * computed. The gradient uses the post-test bentonite layer thickness once it is measured, the initial
- * specimen thickness before.
+ * specimen thickness before. Readings passed in from the page's loader are the same array while the run's
+ * readings are unchanged, so the verdict on them is kept with them, per set of the other records it used
+ * (evaluating 100,000 readings takes the better part of a second).
  */
 export async function evaluateRunRecords(db: Source, runId: string, options: { readings?: Promise<CurrentReadingRow[]> } = {}): Promise<RunVerdict> {
-  return evaluateRunContext(await loadRunEvaluationContext(db, runId, options));
+  const context = await loadRunEvaluationContext(db, runId, options);
+  if (!options.readings) return evaluateRunContext(context);
+  const readings = context.readings as readonly CurrentReadingRow[];
+  const records = JSON.stringify({ ...context, readings: null });
+  const known = verdictsOfReadings.get(readings) ?? new Map<string, RunVerdict>();
+  const kept = known.get(records);
+  if (kept) return kept;
+  const verdict = evaluateRunContext(context);
+  if (known.size >= 4) known.clear();
+  known.set(records, verdict);
+  verdictsOfReadings.set(readings, known);
+  return verdict;
 }
