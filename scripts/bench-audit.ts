@@ -7,11 +7,9 @@
  * Run: DATABASE_URL=postgresql://postgres@127.0.0.1:5432/postgres npm run bench:audit
  * SEEPLINE_BENCH_AUDIT_ROWS=500000 for a smaller log; SEEPLINE_BENCH_KEEP_DB=1 keeps the database.
  */
-import pg from "pg";
 import type { CurrentUser } from "../lib/server/auth/current-user";
-import { createTestDatabase } from "../tests/support/test-database";
 import { median } from "./support/median";
-import { UTC_SESSION_OPTIONS } from "../lib/server/db/utc-session";
+import { withBenchDatabase } from "./support/bench-database";
 
 const ROWS = Number(process.env.SEEPLINE_BENCH_AUDIT_ROWS ?? 2_000_000);
 const READINGS = 2_000; // of the one run the record filter looks for
@@ -69,22 +67,12 @@ async function time(work: () => Promise<unknown>): Promise<number> {
 }
 
 async function main() {
-  if (!process.env.DATABASE_URL) throw new Error("set DATABASE_URL to a local PostgreSQL server, e.g. postgresql://postgres@127.0.0.1:5432/postgres");
-  const database = await createTestDatabase("bench_audit");
-  const keep = process.env.SEEPLINE_BENCH_KEEP_DB === "1";
   // The log is filled straight with SQL and an index dropped for a baseline, which only the owner may do;
   // the filter itself runs as the app's role.
-  const sql = new pg.Client({ connectionString: database.ownerUrl, options: UTC_SESSION_OPTIONS });
-  try {
-    await sql.connect();
-    const seedStart = performance.now();
-    await sql.query(SEED_SQL);
+  await withBenchDatabase("bench_audit", SEED_SQL, async ({ owner: sql, seedStart }) => {
     const { rows } = await sql.query(`SELECT count(*)::int AS n, min(id)::text AS lo, max(id)::text AS hi FROM "AuditLog"`);
     const { n, lo, hi } = rows[0] as { n: number; lo: string; hi: string };
     console.log(`seeded ${n.toLocaleString("en-GB")} audit rows in ${((performance.now() - seedStart) / 1000).toFixed(1)} s`);
-
-    process.env.DATABASE_URL = database.url;
-    process.env.NEXTAUTH_SECRET ??= "bench-only-secret-0123456789abcdefghij";
     const { findAuditEntries } = await import("../lib/server/audit/find-audit-entries");
     const { getDb } = await import("../lib/server/db/client");
     const actor: CurrentUser = { id: "bench-user-1", name: "Bench person 1", email: "bench1@example.test", role: "LAB_ADMIN", clientOrganizationId: null, pressureUnit: "KPA" };
@@ -142,11 +130,7 @@ async function main() {
     }
     console.log(`export of run T25-00042: ${exported} rows in ${(performance.now() - exportStart).toFixed(0)} ms`);
     await getDb().$disconnect();
-  } finally {
-    await sql.end();
-    if (keep) console.log(`\nkept the bench database: ${database.url}`);
-    else await database.drop();
-  }
+  });
 }
 
 main().catch((error) => {

@@ -5,12 +5,10 @@
  * Run: DATABASE_URL=postgresql://postgres@127.0.0.1:5432/postgres npx tsx --conditions=react-server scripts/bench-lists.ts
  * SEEPLINE_BENCH_KEEP_DB=1 keeps the database afterwards (its address is printed) to look at plans by hand.
  */
-import pg from "pg";
 import type { CurrentUser } from "../lib/server/auth/current-user";
 import { parseListQuery, type ListKind } from "../lib/validation/list-query";
-import { createTestDatabase } from "../tests/support/test-database";
 import { median } from "./support/median";
-import { UTC_SESSION_OPTIONS } from "../lib/server/db/utc-session";
+import { withBenchDatabase } from "./support/bench-database";
 import { captureStatements } from "./support/capture-statements";
 import { bulkSeedSql } from "./support/bulk-seed";
 
@@ -20,23 +18,13 @@ const SEED_SQL = bulkSeedSql();
 type Case = { kind: Exclude<ListKind, "runs">; name: string; params: Record<string, string> };
 
 async function main() {
-  if (!process.env.DATABASE_URL) throw new Error("set DATABASE_URL to a local PostgreSQL server, e.g. postgresql://postgres@127.0.0.1:5432/postgres");
-  const database = await createTestDatabase("bench");
-  const keep = process.env.SEEPLINE_BENCH_KEEP_DB === "1";
   // The bulk load ends with ANALYZE, which only the tables' owner may run; the timed queries use the app's role.
-  const sql = new pg.Client({ connectionString: database.ownerUrl, options: UTC_SESSION_OPTIONS });
-  try {
-    await sql.connect();
-    const seedStart = performance.now();
-    await sql.query(SEED_SQL);
+  await withBenchDatabase("bench", SEED_SQL, async ({ owner: sql, database, seedStart }) => {
     const counts = await sql.query(`SELECT (SELECT count(*) FROM "Roll") AS rolls, (SELECT count(*) FROM "Coupon") AS coupons,
       (SELECT count(*) FROM "Specimen") AS specimens, (SELECT count(*) FROM "Shipment") AS shipments, (SELECT count(*) FROM "AuditLog") AS audit`);
     const c = counts.rows[0] as Record<string, string>;
     console.log(`seeded ${c.rolls} rolls, ${c.coupons} coupons, ${c.specimens} specimens, ${c.shipments} shipments (${c.audit} audit rows, triggers on) in ${((performance.now() - seedStart) / 1000).toFixed(1)} s`);
 
-    // lib/server reads DATABASE_URL on first use, so point it at the bench database before loading it.
-    process.env.DATABASE_URL = database.url;
-    process.env.NEXTAUTH_SECRET ??= "bench-only-secret-0123456789abcdefghij";
     const { listRolls } = await import("../lib/server/lists/list-rolls");
     const { listCoupons } = await import("../lib/server/lists/list-coupons");
     const { listSpecimens } = await import("../lib/server/lists/list-specimens");
@@ -99,11 +87,7 @@ async function main() {
       for (const row of plan.rows as { "QUERY PLAN": string }[]) console.log(`  ${row["QUERY PLAN"]}`);
     }
     await getDb().$disconnect();
-  } finally {
-    await sql.end();
-    if (keep) console.log(`\nkept the bench database: ${database.url}`);
-    else await database.drop();
-  }
+  });
 }
 
 main().catch((error) => {

@@ -20,43 +20,13 @@ export function RunListFilters({ values, keep, choices, client, basePath }: { va
   return (
     <form className={styles.filters} role="search" method="get" action={basePath} data-testid="run-filters">
       {Object.entries(keep).map(([key, value]) => <input key={key} type="hidden" name={key} value={value} />)}
-      <div className="field">
-        <label htmlFor="run-filter-state">State</label>
-        <select id="run-filter-state" name="state" defaultValue={values.state ?? ""}>
-          <option value="">Any state</option>
-          {RUN_STATES.map((s) => <option key={s} value={s}>{RUN_STATE_LABELS[s] ?? s}</option>)}
-        </select>
-      </div>
-      <div className="field">
-        <label htmlFor="run-filter-cell">Cell</label>
-        <select id="run-filter-cell" name="cellId" defaultValue={values.cellId ?? ""}>
-          <option value="">Any cell</option>
-          {choices.cells.map((c) => <option key={c.id} value={c.id}>{c.assetTag}</option>)}
-        </select>
-      </div>
-      <div className="field">
-        <label htmlFor="run-filter-technician">Technician</label>
-        <select id="run-filter-technician" name="technicianId" defaultValue={values.technicianId ?? ""}>
-          <option value="">Anyone</option>
-          {choices.technicians.map((t) => <option key={t.id} value={t.id}>{t.name}</option>)}
-        </select>
-      </div>
-      <div className="field">
-        <label htmlFor="run-filter-method">Method</label>
-        <select id="run-filter-method" name="methodCode" defaultValue={values.methodCode ?? ""}>
-          <option value="">Any method</option>
-          {choices.methods.map((m) => <option key={m} value={m}>ASTM {m}</option>)}
-        </select>
-      </div>
+      <FilterSelect id="run-filter-state" name="state" label="State" anyLabel="Any state" value={values.state} options={RUN_STATES.map((s) => [s, RUN_STATE_LABELS[s] ?? s])} />
+      <FilterSelect id="run-filter-cell" name="cellId" label="Cell" anyLabel="Any cell" value={values.cellId} options={choices.cells.map((c) => [c.id, c.assetTag])} />
+      <FilterSelect id="run-filter-technician" name="technicianId" label="Technician" anyLabel="Anyone" value={values.technicianId} options={choices.technicians.map((t) => [t.id, t.name])} />
+      <FilterSelect id="run-filter-method" name="methodCode" label="Method" anyLabel="Any method" value={values.methodCode} options={choices.methods.map((m) => [m, `ASTM ${m}`])} />
       <SearchableChoice id="run-filter-client" name="clientOrganizationId" label="Client" kind="clients" allLabel="All clients" value={client} />
-      <div className="field">
-        <label htmlFor="run-filter-from">Mounted from</label>
-        <input id="run-filter-from" name="from" type="date" defaultValue={values.from ?? ""} />
-      </div>
-      <div className="field">
-        <label htmlFor="run-filter-to">Mounted to</label>
-        <input id="run-filter-to" name="to" type="date" defaultValue={values.to ?? ""} />
-      </div>
+      <DateFilter id="run-filter-from" name="from" label="Mounted from" value={values.from} />
+      <DateFilter id="run-filter-to" name="to" label="Mounted to" value={values.to} />
       <div className="field">
         <label htmlFor="run-filter-q">Run or specimen number</label>
         <input id="run-filter-q" name="q" type="search" defaultValue={values.q ?? ""} placeholder="T26-00042 or P26-00107" />
@@ -64,5 +34,27 @@ export function RunListFilters({ values, keep, choices, client, basePath }: { va
       <button type="submit" className="button button-quiet">Show runs</button>
       {any && <Link className={`button button-quiet ${styles.reset}`} href={basePath}>Clear filters</Link>}
     </form>
+  );
+}
+
+/** One choice of the filter form: "any" first, then the options as [value, label]. */
+function FilterSelect({ id, name, label, anyLabel, value, options }: { id: string; name: string; label: string; anyLabel: string; value: string | undefined; options: ReadonlyArray<readonly [string, string]> }) {
+  return (
+    <div className="field">
+      <label htmlFor={id}>{label}</label>
+      <select id={id} name={name} defaultValue={value ?? ""}>
+        <option value="">{anyLabel}</option>
+        {options.map(([v, text]) => <option key={v} value={v}>{text}</option>)}
+      </select>
+    </div>
+  );
+}
+
+function DateFilter({ id, name, label, value }: { id: string; name: string; label: string; value: string | undefined }) {
+  return (
+    <div className="field">
+      <label htmlFor={id}>{label}</label>
+      <input id={id} name={name} type="date" defaultValue={value ?? ""} />
+    </div>
   );
 }

@@ -8,17 +8,26 @@ import { db, makeProject, makeStorageLocation, unique } from "./factories";
 const DAY = 86_400_000;
 export const daysAgo = (days: number) => new Date(Date.now() - days * DAY);
 
-/** A shipment of `rolls` rolls logged by the clerk through the real operation, received `days` ago. */
-export async function receiveRolls(clerk: CurrentUser, days: number, rolls = 1) {
+/** What a test roll may say beyond the defaults (lot L1, no delivered size). */
+type RollExtras = { lotNumber?: string; deliveredLengthM?: string; deliveredWidthM?: string };
+
+/** A shipment of one roll per entry of `rolls`, for a new project, logged by the clerk through the real operation, received `days` ago. */
+export async function logTestShipment(clerk: CurrentUser, days: number, rolls: RollExtras[]) {
   const [project, location] = await Promise.all([makeProject(), makeStorageLocation()]);
   const shipment = await logShipment({
     actor: clerk,
     input: {
       clientOrganizationId: project.clientOrganizationId, projectId: project.id, deliveredBy: "Test courier", receivedAt: daysAgo(days).toISOString(),
       conditionNotes: "Wrapped, dry.", storageLocationId: location.id,
-      rolls: Array.from({ length: rolls }, () => ({ rollNumber: unique("R"), lotNumber: "L1", product: "Needle-punched GCL", manufacturer: "Test maker", machineDirectionMarked: "no" })),
+      rolls: rolls.map((extras) => ({ rollNumber: unique("R"), lotNumber: "L1", product: "Needle-punched GCL", manufacturer: "Test maker", machineDirectionMarked: "no", ...extras })),
     },
   });
+  return { project, shipment, location };
+}
+
+/** A shipment of `rolls` rolls logged by the clerk through the real operation, received `days` ago. */
+export async function receiveRolls(clerk: CurrentUser, days: number, rolls = 1) {
+  const { shipment, location } = await logTestShipment(clerk, days, Array.from({ length: rolls }, () => ({})));
   return { shipment, location, rolls: shipment.rolls };
 }
 

@@ -1,8 +1,7 @@
 import type { CurrentUser } from "@/lib/server/auth/current-user";
 import { withActor } from "@/lib/server/db/transaction";
-import { logShipment } from "@/lib/server/intake/log-shipment";
-import { daysAgo } from "./custody-chain";
-import { makeProject, makeStorageLocation, unique } from "./factories";
+import { logTestShipment } from "./custody-chain";
+import { unique } from "./factories";
 
 const DAY = 86_400_000;
 
@@ -27,18 +26,9 @@ export async function makeIndexInstruments() {
 
 /** A project whose rolls (lot, delivered length × width in m) arrive in one shipment `days` ago. */
 export async function receiveProjectRolls(clerk: CurrentUser, days: number, rolls: Array<{ lot: string; lengthM?: number; widthM?: number }>) {
-  const [project, location] = await Promise.all([makeProject(), makeStorageLocation()]);
-  const shipment = await logShipment({
-    actor: clerk,
-    input: {
-      clientOrganizationId: project.clientOrganizationId, projectId: project.id, deliveredBy: "Test courier", receivedAt: daysAgo(days).toISOString(),
-      conditionNotes: "Wrapped, dry.", storageLocationId: location.id,
-      rolls: rolls.map((r) => ({
-        rollNumber: unique("R"), lotNumber: r.lot, product: "Needle-punched GCL", manufacturer: "Test maker", machineDirectionMarked: "no",
-        deliveredLengthM: r.lengthM === undefined ? "" : String(r.lengthM), deliveredWidthM: r.widthM === undefined ? "" : String(r.widthM),
-      })),
-    },
-  });
+  const { project, location, shipment } = await logTestShipment(clerk, days, rolls.map((r) => ({
+    lotNumber: r.lot, deliveredLengthM: r.lengthM === undefined ? "" : String(r.lengthM), deliveredWidthM: r.widthM === undefined ? "" : String(r.widthM),
+  })));
   return { project, location, rolls: shipment.rolls };
 }
 

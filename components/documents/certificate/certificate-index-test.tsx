@@ -2,6 +2,7 @@ import { isoDateTime, valueWithUnit, withoutCoverageFactor } from "@/lib/certifi
 import type { CertificateIndexTest } from "@/lib/certificates/certificate-snapshot";
 import { Decision, Uncertainties } from "./certificate-test";
 import { CertificateVerdict, limitLabel } from "./certificate-verdict";
+import { Deviations, MethodEdition, TestHead } from "./certificate-test-frame";
 
 /**
  * One index test (swell index, fluid loss, mass per unit area, moisture, tensile, peel): method and edition,
@@ -12,16 +13,12 @@ export function CertificateIndexTestSection({ test, number, count, zone = "UTC" 
   const declared = test.results.filter((r) => r.uncertaintyDisplay && r.coverage);
   return (
     <section className="cert-test doc-keep" data-testid="certificate-index-test">
-      <div className="cert-test-head">
-        <h2>Test {number} of {count} · {test.method.code}</h2>
-        <div className="cert-test-ids">
-          roll <span className="mono">{test.rollLabNumber}</span>{test.couponLabNumber ? <> · coupon <span className="mono">{test.couponLabNumber}</span></> : null}
-        </div>
-      </div>
+      <TestHead number={number} count={count} methodCode={test.method.code}>
+        roll <span className="mono">{test.rollLabNumber}</span>{test.couponLabNumber ? <> · coupon <span className="mono">{test.couponLabNumber}</span></> : null}
+      </TestHead>
       <div className="cert-two">
         <div>
-          <h3 style={{ marginTop: 0 }}>{test.method.title}</h3>
-          <div className="doc-small" data-testid="certificate-index-method-edition">{test.method.edition ? `Standard: ASTM ${test.method.edition}` : `Standard: ${test.method.code}, edition not recorded`}</div>
+          <MethodEdition method={test.method} testId="certificate-index-method-edition" />
           <dl className="cert-conditions">
             <dt>Specimens</dt><dd data-testid="certificate-index-specimens">{test.specimenValues.length ? `${test.specimenValues.length}: ${test.specimenValues.join("; ")}` : "not recorded"}</dd>
             <dt>Instruments</dt><dd>{test.instruments.length ? test.instruments.join("; ") : "not recorded"}</dd>
@@ -58,8 +55,7 @@ export function CertificateIndexTestSection({ test, number, count, zone = "UTC" 
       {declared.length ? <p className="doc-small" style={{ margin: "4pt 0 0" }}>{declared.map((r) => `Uncertainty of ${r.label.toLowerCase()}: expanded, ${r.coverage}, as the lab declares it for the method.`).join(" ")}</p> : null}
       <Uncertainties results={test.results} />
       {test.results.map((r, i) => <Decision key={i} result={r} />)}
-      <h3>Deviations from the method</h3>
-      {test.departures.length ? <ul style={{ margin: 0, paddingLeft: "14pt" }}>{test.departures.map((d, i) => <li key={i}>{d}</li>)}</ul> : <p>None.</p>}
+      <Deviations items={test.departures} />
     </section>
   );
 }

@@ -4,6 +4,7 @@ import { CertificateChart } from "./certificate-chart";
 import { formatDecimalText } from "@/lib/format/result-numbers";
 import { inSentence } from "@/lib/format/sentence-case";
 import { CertificateVerdict, limitLabel } from "./certificate-verdict";
+import { Deviations, MethodEdition, TestHead } from "./certificate-test-frame";
 
 /** The numbers that decided a verdict: what was compared, by which ASTM E29 method, with which limit, and the statement. */
 export function Decision({ result }: { result: CertificateResultLine }) {
@@ -111,16 +112,12 @@ export function CertificateTestSection({ test, index, count, zone = "UTC" }: { t
     <section className="cert-test" data-testid="certificate-test">
       {/* The heading, conditions, results and verdicts of a test stay on one page; the chart may follow. */}
       <div className="doc-keep">
-      <div className="cert-test-head">
-        <h2>Test {index + 1} of {count} · {test.method.code}</h2>
-        <div className="cert-test-ids">
-          specimen <span className="mono">{test.specimenLabNumber}</span> · roll <span className="mono">{test.rollLabNumber}</span> · run <span className="mono">{test.runLabNumber}</span>
-        </div>
-      </div>
+      <TestHead number={index + 1} count={count} methodCode={test.method.code}>
+        specimen <span className="mono">{test.specimenLabNumber}</span> · roll <span className="mono">{test.rollLabNumber}</span> · run <span className="mono">{test.runLabNumber}</span>
+      </TestHead>
       <div className="cert-two">
         <div>
-          <h3 style={{ marginTop: 0 }}>{test.method.title}</h3>
-          <div className="doc-small" data-testid="certificate-method-edition">{test.method.edition ? `Standard: ASTM ${test.method.edition}` : `Standard: ${test.method.code}, edition not recorded`}</div>
+          <MethodEdition method={test.method} testId="certificate-method-edition" />
           <dl className="cert-conditions">
             <dt>Effective stress</dt><dd>{conditionValue(c.effectiveStressKPa, "kPa")}</dd>
             <dt>Head difference</dt><dd>{conditionValue(c.headKPa, "kPa")}</dd>
@@ -170,12 +167,7 @@ export function CertificateTestSection({ test, index, count, zone = "UTC" }: { t
 
       <CertificateChart test={test} />
 
-      <h3>Deviations from the method</h3>
-      {test.deviations.length ? (
-        <ul style={{ margin: 0, paddingLeft: "14pt" }}>{test.deviations.map((d, i) => <li key={i}>{d}</li>)}</ul>
-      ) : (
-        <p>None.</p>
-      )}
+      <Deviations items={test.deviations} />
     </section>
   );
 }
