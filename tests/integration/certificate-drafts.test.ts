@@ -8,6 +8,7 @@ import { createCertificateDraft } from "@/lib/server/certificates/create-certifi
 import { editCertificateDraft } from "@/lib/server/certificates/edit-certificate-draft";
 import { issueCertificate } from "@/lib/server/certificates/issue-certificate";
 import { listCertifiableResults } from "@/lib/server/certificates/list-certifiable-results";
+import { getPortalProject } from "@/lib/server/portal/get-portal-project";
 import { previewCertificateDraft } from "@/lib/server/certificates/preview-certificate-draft";
 import { reviseCertificate } from "@/lib/server/certificates/revise-certificate";
 import { findBrowser } from "../../e2e/support/find-browser";
@@ -155,5 +156,24 @@ describe("certificate drafts", () => {
     const snapshot = revised.snapshot as CertificateSnapshot;
     expect(snapshot.supersedes).toEqual({ revision: 1, reason: "The remark on specimen preparation was missing" });
     expect(snapshot.changes).toEqual(['Remarks changed; they now read: "Specimens trimmed by die from the roll sample."']);
+  }, 90_000);
+
+  it.skipIf(!browser)("the client's portal lists an issued certificate on a roll only when the final content includes the roll's result", async () => {
+    const [technician, qa] = await Promise.all([makeUser("TECHNICIAN"), makeUser("QA_MANAGER")]);
+    const kept = await approvedRun(technician.id, qa);
+    const leftOut = await approvedRun(technician.id, qa, kept.project.id);
+    const spec = await makeSpecification(kept.project.id, ["INDEX_FLUX"]);
+    const certificate = await createCertificateDraft({ actor: qa, input: { projectId: kept.project.id, resultIds: [kept.flux, leftOut.flux] } });
+    const draft = await draftOf(certificate.id);
+    await editCertificateDraft({ actor: qa, input: { revisionId: draft.id, baseVersion: 1, resultIds: [kept.flux], specificationId: spec.id, unitSystem: "SI" } });
+    await issueCertificate({ actor: qa, input: { revisionId: draft.id, password: TEST_PASSWORD } });
+
+    const client = await makeUser("CLIENT_USER", { clientOrganizationId: kept.project.clientOrganizationId });
+    const portal = await getPortalProject({ actor: client, projectCode: kept.project.code });
+    const rollOf = async (runId: string) => (await db().run.findUniqueOrThrow({ where: { id: runId }, select: { specimen: { select: { coupon: { select: { roll: { select: { labNumber: true } } } } } } } })).specimen.coupon.roll.labNumber;
+    const byRoll = Object.fromEntries(portal.rolls.map((r) => [r.labNumber, r]));
+    expect(byRoll[await rollOf(kept.run.id)]!.certificateNumbers).toEqual([certificate.number]);
+    expect(byRoll[await rollOf(leftOut.run.id)]!.certificateNumbers).toEqual([]);
+    expect(byRoll[await rollOf(leftOut.run.id)]!.progress.at(-1)!.status).not.toBe("done");
   }, 90_000);
 });

@@ -41,10 +41,19 @@ export async function getPortalProject(options: { actor: CurrentUser; projectCod
                       state: true, assignedAt: true, terminatedAt: true,
                       results: {
                         select: {
+                          id: true,
                           certificateResults: {
                             // Only issued revisions count, and only the organisation's own certificates.
                             where: { revision: { status: "ISSUED", certificate: scope } },
-                            select: { revision: { select: { issuedAt: true, certificate: { select: { number: true } } } } },
+                            select: {
+                              revision: {
+                                select: {
+                                  issuedAt: true, certificate: { select: { number: true } },
+                                  // A result offered to a draft and then left out is not on it: the final content says.
+                                  contents: { orderBy: { version: "desc" }, take: 1, select: { resultIds: true } },
+                                },
+                              },
+                            },
                           },
                         },
                       },
@@ -67,7 +76,7 @@ export async function getPortalProject(options: { actor: CurrentUser; projectCod
     siteLocation: project.siteLocation,
     shipments: project.shipments.map((s) => ({ labNumber: s.labNumber, receivedAt: s.receivedAt, acknowledgedAt: s.acknowledgedAt, rollCount: s._count.rolls })),
     rolls: project.rolls.map((roll) => {
-      const onCertificates = roll.coupons.flatMap((c) => c.specimens.flatMap((s) => s.runs.flatMap((r) => r.results.flatMap((res) => res.certificateResults.map((cr) => cr.revision)))));
+      const onCertificates = roll.coupons.flatMap((c) => c.specimens.flatMap((s) => s.runs.flatMap((r) => r.results.flatMap((res) => res.certificateResults.map((cr) => cr.revision).filter((rev) => includesResult(rev.contents, res.id))))));
       return {
         labNumber: roll.labNumber,
         rollNumber: roll.rollNumber,
@@ -87,3 +96,8 @@ export async function getPortalProject(options: { actor: CurrentUser; projectCod
 }
 
 export type PortalProject = Awaited<ReturnType<typeof getPortalProject>>;
+
+/** A revision without content versions (issued before drafts could be edited) carries every result offered to it. */
+function includesResult(contents: Array<{ resultIds: string[] }>, resultId: string): boolean {
+  return contents.length === 0 || contents[0]!.resultIds.includes(resultId);
+}
