@@ -3,7 +3,11 @@
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
 import { recordPostTestAction, submitRunAction, terminateRunAction } from "@/app/(staff)/runs/actions";
+import { useForm } from "react-hook-form";
 import { Field } from "@/components/ui/field";
+import { nowToTheMinute } from "@/components/ui/now-for-input";
+import { ZonedDateTimeInput } from "@/components/ui/zoned-date-time-input";
+import { formatDateTime } from "@/lib/format/dates";
 
 type Result = { ok: boolean; message: string; fieldErrors?: Record<string, string> };
 
@@ -21,20 +25,32 @@ function useStep() {
   return { pending, run, message, errors: result?.fieldErrors ?? {} };
 }
 
-/** Terminate when the criteria are met, or end early with a reason. */
-export function TerminateForm({ runId, version, criteriaMet }: { runId: string; version: number; criteriaMet: boolean }) {
+/**
+ * Terminate when the criteria are met, or end early with a reason, at the time permeation stopped (the
+ * certificate's end of testing): the moment the form opened unless the technician enters when it was.
+ */
+export function TerminateForm({ runId, version, criteriaMet, zone, lastReadingAt }: { runId: string; version: number; criteriaMet: boolean; zone: string; lastReadingAt: string | null }) {
   const step = useStep();
   const [reason, setReason] = useState("");
+  const { control, getValues } = useForm<{ endedAt: string }>({ defaultValues: { endedAt: nowToTheMinute() } });
+  const endedAt = () => getValues("endedAt");
   return (
     <div className="stack-gap" aria-label="Terminate the run">
       {step.message}
-      <button type="button" className="button" disabled={step.pending || !criteriaMet} onClick={() => step.run(() => terminateRunAction({ runId, version, kind: "CRITERIA_MET" }))}>
+      <Field
+        label="Permeation ended at"
+        hint={`Lab time (${zone}).${lastReadingAt ? ` The last reading was taken ${formatDateTime(new Date(lastReadingAt), zone)}.` : ""}`}
+        error={step.errors.endedAt}
+      >
+        <ZonedDateTimeInput control={control} name="endedAt" zone={zone} data-testid="terminate-ended-at" />
+      </Field>
+      <button type="button" className="button" disabled={step.pending || !criteriaMet} onClick={() => step.run(() => terminateRunAction({ runId, version, kind: "CRITERIA_MET", endedAt: endedAt() }))}>
         Terminate: criteria met
       </button>
       {!criteriaMet && <p className="muted">The criteria are not all met yet. To stop anyway, give the reason for an early end.</p>}
       <div className="inline-form">
         <input value={reason} onChange={(e) => setReason(e.target.value)} placeholder="Reason for ending early" aria-label="Reason for ending early" style={{ width: "20rem" }} />
-        <button type="button" className="button button-danger" disabled={step.pending} onClick={() => step.run(() => terminateRunAction({ runId, version, kind: "EARLY_END", reason }))}>End early</button>
+        <button type="button" className="button button-danger" disabled={step.pending} onClick={() => step.run(() => terminateRunAction({ runId, version, kind: "EARLY_END", reason, endedAt: endedAt() }))}>End early</button>
       </div>
     </div>
   );

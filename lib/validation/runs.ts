@@ -51,6 +51,9 @@ export const terminateRunSchema = z
     version: versionSchema,
     kind: z.enum(["CRITERIA_MET", "EARLY_END"]),
     reason: z.string().trim().max(500).optional(),
+    // When permeation actually stopped (the certificate's end of testing), not when the form was sent;
+    // absent, the moment it is sent.
+    endedAt: z.preprocess((v) => (v === "" || v === null ? undefined : v), pastDateTime("when permeation ended").optional()),
   })
   .superRefine((v, ctx) => {
     if (v.kind === "EARLY_END" && (!v.reason || v.reason.length < 5))

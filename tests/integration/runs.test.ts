@@ -127,7 +127,20 @@ describe("stages, termination, post-test and submission", () => {
     await addSteadyReadings(run.id, technician.id, 8);
 
     expect((await failure(submitRun({ actor: technician, input: { runId: run.id, version: 4 } }))).code).toBe("ILLEGAL_TRANSITION");
-    await terminateRun({ actor: technician, input: { runId: run.id, version: 4, kind: "CRITERIA_MET" } });
+    // The end of permeation is when it happened, entered by the technician: not before the last reading
+    // (taken 6 h ago), not in the future; nothing is saved when refused.
+    const hoursAgo = (h: number) => new Date(Date.now() - h * 3_600_000);
+    const tooEarly = await failure(terminateRun({ actor: technician, input: { runId: run.id, version: 4, kind: "CRITERIA_MET", endedAt: hoursAgo(7).toISOString() } }));
+    expect(tooEarly.fieldErrors.endedAt).toMatch(/^The end of permeation \(.+\) is before reading 8 was taken \(.+\); it cannot be earlier than that\.$/);
+    const ahead = await failure(terminateRun({ actor: technician, input: { runId: run.id, version: 4, kind: "CRITERIA_MET", endedAt: hoursAgo(-2).toISOString() } }));
+    expect(ahead.fieldErrors).toHaveProperty("endedAt");
+    expect((await db().run.findUniqueOrThrow({ where: { id: run.id } })).terminatedAt).toBeNull();
+    const endedAt = new Date(Math.floor(hoursAgo(5).getTime() / 60_000) * 60_000);
+    await terminateRun({ actor: technician, input: { runId: run.id, version: 4, kind: "CRITERIA_MET", endedAt: endedAt.toISOString() } });
+    expect((await db().run.findUniqueOrThrow({ where: { id: run.id } })).terminatedAt).toEqual(endedAt);
+    expect((await db().runStage.findFirstOrThrow({ where: { runId: run.id, kind: "PERMEATION" } })).endedAt).toEqual(endedAt);
+    const tested = await db().custodyEvent.findFirstOrThrow({ where: { specimenId: specimen.id, action: "TESTED" } });
+    expect(tested.occurredAt).toEqual(endedAt);
     expect((await db().specimen.findUniqueOrThrow({ where: { id: specimen.id } })).state).toBe("TESTED");
     expect((await failure(recordPostTest({ actor: technician, input: { runId: run.id, version: 5, thicknessMm: "0", finalMassG: "70" } }))).fieldErrors).toHaveProperty("thicknessMm");
     await recordPostTest({ actor: technician, input: { runId: run.id, version: 5, thicknessMm: "5.9", finalMassG: "71.2", observations: "Even hydration" } });

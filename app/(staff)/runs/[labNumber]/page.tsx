@@ -36,6 +36,12 @@ function projectedText(permeationStart: Date | null, projectedAtS: number | null
   return `Probably met about ${formatDateTime(new Date(permeationStart.getTime() + projectedAtS * 1000), zone)}. ${reason}`;
 }
 
+/** When the last current reading was taken: permeation start plus its elapsed time (ISO), or null. */
+function lastReadingAt(permeationStart: Date | null, readings: ReadonlyArray<{ elapsedS: number }>): string | null {
+  const last = readings.at(-1);
+  return permeationStart && last ? new Date(permeationStart.getTime() + last.elapsedS * 1000).toISOString() : null;
+}
+
 export default async function RunPage({ params, searchParams }: Props) {
   const actor = await requirePageUser("run.view");
   const { labNumber } = await params;
@@ -109,7 +115,7 @@ export default async function RunPage({ params, searchParams }: Props) {
             />
           </>
         ) : permeation ? <p className="notice notice-caution">{reason}</p> : null}
-        {mine && steps.includes("terminate") && <section className="card"><h2>End permeation</h2><TerminateForm runId={run.id} version={run.version} criteriaMet={evaluation?.termination.met ?? false} /></section>}
+        {mine && steps.includes("terminate") && <section className="card"><h2>End permeation</h2><TerminateForm runId={run.id} version={run.version} criteriaMet={evaluation?.termination.met ?? false} zone={zone} lastReadingAt={lastReadingAt(permeation?.startedAt ?? null, verdict.inputReadings)} /></section>}
         {mine && steps.includes("record-post-test") && <section className="card"><h2>Post-test measurements</h2><PostTestForm runId={run.id} version={run.version} /></section>}
         {mine && steps.includes("submit") && run.postTestThicknessMm && <section className="card"><h2>Review</h2><SubmitRunButton runId={run.id} version={run.version} /></section>}
         {mine && steps.includes("abandon") && (
