@@ -32,7 +32,9 @@ function useStep() {
 export function TerminateForm({ runId, version, criteriaMet, zone, lastReadingAt }: { runId: string; version: number; criteriaMet: boolean; zone: string; lastReadingAt: string | null }) {
   const step = useStep();
   const [reason, setReason] = useState("");
-  const { control, getValues } = useForm<{ endedAt: string }>({ defaultValues: { endedAt: nowToTheMinute() } });
+  // Now to the minute, unless the last reading was taken later in this same minute.
+  const now = nowToTheMinute();
+  const { control, getValues } = useForm<{ endedAt: string }>({ defaultValues: { endedAt: lastReadingAt && lastReadingAt > now ? lastReadingAt : now } });
   const endedAt = () => getValues("endedAt");
   return (
     <div className="stack-gap" aria-label="Terminate the run">
