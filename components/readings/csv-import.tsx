@@ -164,7 +164,7 @@ function ImportPreview({ preview, pending, setColumn, remap, onSave, onCancel }:
                   </select>
                 </th>
               ))}
-              <th>Elapsed (h)</th><th>Inflow (mL)</th><th>Outflow (mL)</th><th>Head ({PRESSURE_UNIT_SYMBOLS[preview.mapping.pressureUnit]})</th>
+              <th>Elapsed (h)</th><th>Inflow (mL)</th><th>Outflow (mL)</th><th>Line Δp ({PRESSURE_UNIT_SYMBOLS[preview.mapping.pressureUnit]})</th>
             </tr>
           </thead>
           <tbody>

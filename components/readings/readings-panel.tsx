@@ -68,7 +68,7 @@ export async function ReadingsPanel({ runId, actor, zone = "UTC", page, basePath
             <thead>
               <tr>
                 <th>#</th><th>Taken</th><th>Elapsed (h)</th><th>Inflow level (mm)</th><th>Outflow level (mm)</th><th>Inflow (mL)</th><th>Outflow (mL)</th>
-                <th>Head ({p})</th><th>Influent ({p})</th><th>Effluent ({p})</th><th>Cell ({p})</th><th>Temp. (°C)</th>
+                <th>Line Δp ({p})</th><th>Influent ({p})</th><th>Effluent ({p})</th><th>Cell ({p})</th><th>Temp. (°C)</th>
                 {chemistry && <><th>EC in</th><th>EC out</th><th>pH in</th><th>pH out</th></>}
                 <th>Recorded</th>
               </tr>

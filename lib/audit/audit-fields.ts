@@ -53,7 +53,7 @@ const REF_COLUMNS: Record<string, AuditRefKind> = {
 const LABELS: Record<string, string> = {
   inflowLevelMm: "Inflow burette level", outflowLevelMm: "Outflow burette level",
   inflowCumulativeMl: "Inflow volume, cumulative", outflowCumulativeMl: "Outflow volume, cumulative",
-  headPa: "Head difference", elapsedS: "Elapsed time", correctsId: "Corrects", correctionReason: "Reason for the correction",
+  headPa: "Line-pressure difference", elapsedS: "Elapsed time", correctsId: "Corrects", correctionReason: "Reason for the correction",
   influentEcMsPerM: "Influent EC", effluentEcMsPerM: "Effluent EC", influentPh: "Influent pH", effluentPh: "Effluent pH",
   permeantEcMsPerM: "Permeant EC", permeantPh: "Permeant pH", permeantMolarityMolPerL: "Permeant molarity",
   ratedMaxPressurePa: "Rated maximum pressure", clientOrganizationId: "Client", storageLocationId: "Storage location",

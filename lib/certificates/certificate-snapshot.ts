@@ -76,7 +76,7 @@ export type CertificateTest = {
   /** Dates of testing: specimen mounted, permeation started and ended (ISO). */
   dates?: { mountedAt: string; permeationStartedAt: string | null; permeationEndedAt: string | null };
   specimen?: CertificateSpecimen;
-  conditions: { effectiveStressKPa: number | null; headKPa: number | null; permeant: string; meanTemperatureC: number | null; cell: string; thicknessMm: number | null };
+  conditions: { effectiveStressKPa: number | null; headKPa: number | null; /** Mean total head over the reported intervals, m (absent on certificates issued before it was added). */ meanHeadM?: number | null; permeant: string; meanTemperatureC: number | null; cell: string; thicknessMm: number | null };
   terminatedAt: string | null;
   termination: string;
   deviations: string[];

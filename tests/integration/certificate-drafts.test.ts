@@ -129,6 +129,11 @@ describe("certificate drafts", () => {
     expect(snapshot.tests[0]!.method.edition).toBe("D5887/D5887M-20");
     expect(snapshot.tests[0]!.specimen).toMatchObject({ dieDiameterMm: expect.any(Number), initialThicknessMm: expect.any(Number), postTestThicknessMm: 5.9, permeant: "de-aired water" });
     expect(snapshot.tests[0]!.dates!.permeationStartedAt).not.toBeNull();
+    // Total head h = Δp / γw (DOMAIN.md; γw 9.81 kN/m³, common practice) with no burette levels recorded:
+    // 14 kPa / 9.81 = 1.4271 m, beside the 14 kPa line-pressure difference; the gradient is h over 5.9 mm.
+    expect(snapshot.tests[0]!.conditions.headKPa).toBeCloseTo(14, 9);
+    expect(snapshot.tests[0]!.conditions.meanHeadM).toBeCloseTo(14 / 9.81, 4);
+    expect(snapshot.tests[0]!.specimen!.gradient).toBeCloseTo(14 / 9.81 / 0.0059, 1);
     // Area of the die-cut specimen: A = pi d^2 / 4 (DOMAIN.md).
     expect(snapshot.tests[0]!.specimen!.areaMm2).toBeCloseTo((Math.PI * snapshot.tests[0]!.specimen!.dieDiameterMm ** 2) / 4, 9);
     expect(snapshot.tests[0]!.results[0]!.display).toMatch(/^\d\.\d × 10⁻[⁰¹²³⁴⁵⁶⁷⁸⁹]+ m³\/m²\/s$/);

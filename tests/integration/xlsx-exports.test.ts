@@ -39,7 +39,7 @@ describe("spreadsheet exports (read back with exceljs)", () => {
     expect(book.names).toEqual(["Readings", "Intervals", "Criteria"]);
 
     const readings = book.sheet("Readings");
-    expect(readings.header).toEqual(expect.arrayContaining(["Elapsed (h)", "Inflow volume, cumulative (mL)", "Head difference (kPa)", "Temperature (°C)", "Taken at (UTC)"]));
+    expect(readings.header).toEqual(expect.arrayContaining(["Elapsed (h)", "Inflow volume, cumulative (mL)", "Line-pressure difference (kPa)", "Temperature (°C)", "Taken at (UTC)"]));
     const saved = await db().reading.findMany({ where: { runId: run.id }, orderBy: { sequence: "asc" } });
     expect(readings.rows).toHaveLength(saved.length);
     readings.rows.forEach((row, i) => {
@@ -48,7 +48,7 @@ describe("spreadsheet exports (read back with exceljs)", () => {
       expect(row["Elapsed (h)"]).toBe(r.elapsedS / 3600);
       expect(row["Inflow volume, cumulative (mL)"]).toBe(r.inflowCumulativeMl);
       expect(row["Outflow volume, cumulative (mL)"]).toBe(r.outflowCumulativeMl);
-      expect(row["Head difference (kPa)"]).toBe(r.headPa / 1000);
+      expect(row["Line-pressure difference (kPa)"]).toBe(r.headPa / 1000);
       expect(row["Temperature (°C)"]).toBe(r.temperatureC);
       expect((row["Taken at (UTC)"] as Date).toISOString()).toBe(r.takenAt.toISOString());
     });

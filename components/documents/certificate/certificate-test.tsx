@@ -120,7 +120,8 @@ export function CertificateTestSection({ test, index, count, zone = "UTC" }: { t
           <MethodEdition method={test.method} testId="certificate-method-edition" />
           <dl className="cert-conditions">
             <dt>Effective stress</dt><dd>{conditionValue(c.effectiveStressKPa, "kPa")}</dd>
-            <dt>Head difference</dt><dd>{conditionValue(c.headKPa, "kPa")}</dd>
+            <dt>Line-pressure difference</dt><dd>{conditionValue(c.headKPa, "kPa")} <span className="doc-muted">(influent − effluent)</span></dd>
+            {c.meanHeadM != null && <><dt>Total head</dt><dd data-testid="certificate-total-head">{conditionValue(c.meanHeadM, "m", 3)} <span className="doc-muted">(mean over the reported intervals, burette levels included)</span></dd></>}
             <dt>Permeant</dt><dd>{c.permeant || "not recorded"}</dd>
             <dt>Temperature</dt><dd data-testid="certificate-temperature">{conditionValue(c.meanTemperatureC, "°C")} <span className="doc-muted">(mean while the reported flux was measured; k is corrected to 20 °C)</span></dd>
             <dt>Cell</dt><dd>{c.cell || "not recorded"}</dd>

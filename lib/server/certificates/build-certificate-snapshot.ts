@@ -117,6 +117,7 @@ export async function buildCertificateSnapshot(tx: Tx, options: { revisionId: st
       conditions: {
         effectiveStressKPa: run.effectiveStressPa === null ? null : run.effectiveStressPa / 1000,
         headKPa: permeation ? (permeation.influentPressurePa - permeation.effluentPressurePa) / 1000 : null,
+        meanHeadM: reportedWindow.length ? reportedWindow.reduce((a, iv) => a + iv.headM, 0) / reportedWindow.length : null,
         permeant,
         meanTemperatureC: temperatures.length ? temperatures.reduce((a, t) => a + t, 0) / temperatures.length : null,
         cell: run.cell.assetTag,

@@ -39,7 +39,7 @@ export async function exportRunWorkbook(options: { actor: CurrentUser; labNumber
     { header: "Outflow burette level (mm)", value: (r) => r.outflowLevelMm },
     { header: "Inflow volume, cumulative (mL)", value: (r) => r.inflowCumulativeMl, numFmt: "0.0000" },
     { header: "Outflow volume, cumulative (mL)", value: (r) => r.outflowCumulativeMl, numFmt: "0.0000" },
-    { header: "Head difference (kPa)", value: (r) => kPa(r.headPa), numFmt: "0.000" },
+    { header: "Line-pressure difference (kPa)", value: (r) => kPa(r.headPa), numFmt: "0.000" },
     { header: "Influent pressure (kPa)", value: (r) => kPa(r.influentPressurePa) },
     { header: "Effluent pressure (kPa)", value: (r) => kPa(r.effluentPressurePa) },
     { header: "Cell pressure (kPa)", value: (r) => kPa(r.cellPressurePa) },
