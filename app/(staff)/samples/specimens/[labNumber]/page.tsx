@@ -63,7 +63,11 @@ export default async function SpecimenPage({ params }: Props) {
           <section className="card">
             <h2>Runs</h2>
             {specimen.runs.length === 0 ? <p className="empty">Not yet assigned to a cell.</p> : (
-              <ul>{specimen.runs.map((r) => <li key={r.labNumber}><span className="mono">{r.labNumber}</span> ASTM {r.methodCode} <StateTag state={r.state} kind="run" /></li>)}</ul>
+              <ul>{specimen.runs.map((r) => <li key={r.labNumber}>{can(actor.role, "run.view") ? <Link className="mono" href={`/runs/${r.labNumber}`}>{r.labNumber}</Link> : <span className="mono">{r.labNumber}</span>} ASTM {r.methodCode} <StateTag state={r.state} kind="run" /></li>)}</ul>
+            )}
+            {/* The next step from here, for whoever mounts specimens: a prepared specimen with no active run. */}
+            {specimen.state === "PREPARED" && can(actor.role, "run.operate") && (
+              <p><Link className="button" href={`/runs/new?specimen=${specimen.id}`} data-testid="mount-specimen">Mount it in a cell</Link></p>
             )}
           </section>
         </div>
