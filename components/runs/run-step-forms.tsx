@@ -5,6 +5,7 @@ import { useState, useTransition } from "react";
 import { recordPostTestAction, submitRunAction, terminateRunAction } from "@/app/(staff)/runs/actions";
 import { useForm } from "react-hook-form";
 import { Field } from "@/components/ui/field";
+import { isUnreachable, SERVER_UNREACHABLE } from "@/components/ui/server-unreachable";
 import { nowToTheMinute } from "@/components/ui/now-for-input";
 import { ZonedDateTimeInput } from "@/components/ui/zoned-date-time-input";
 import { formatDateTime } from "@/lib/format/dates";
@@ -17,7 +18,13 @@ function useStep() {
   const [result, setResult] = useState<Result | null>(null);
   const run = (work: () => Promise<Result>) =>
     startTransition(async () => {
-      const outcome = await work();
+      let outcome: Result;
+      try {
+        outcome = await work();
+      } catch (error) {
+        if (!isUnreachable(error)) throw error;
+        outcome = { ok: false, message: SERVER_UNREACHABLE };
+      }
       setResult(outcome);
       if (outcome.ok) router.refresh();
     });

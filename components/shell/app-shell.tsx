@@ -1,6 +1,7 @@
 import { navigationFor } from "@/lib/policy/navigation";
 import { isStaffRole, ROLE_LABELS } from "@/lib/policy/permissions";
 import type { CurrentUser } from "@/lib/server/auth/current-user";
+import { ConnectionNotice } from "./connection-notice";
 import { LabNumberSearch } from "./lab-number-search";
 import { NavLinks } from "./nav-links";
 import { SignOutButton } from "./sign-out-button";
@@ -30,6 +31,7 @@ export function AppShell({ user, labName, children }: { user: CurrentUser; labNa
           </section>
         </div>
         <main className="shell-main" id="main" tabIndex={-1}>
+          <ConnectionNotice />
           {children}
         </main>
       </div>

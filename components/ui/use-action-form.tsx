@@ -6,6 +6,7 @@ import { useState } from "react";
 import { useForm, type FieldValues } from "react-hook-form";
 import type { z } from "zod";
 import { applyServerErrors } from "./apply-server-errors";
+import { isUnreachable, SERVER_UNREACHABLE } from "./server-unreachable";
 
 type Outcome<T> = { ok: true; data: T; message: string } | { ok: false; message: string; fieldErrors: Record<string, string> };
 export type FormNoticeValue = { ok: boolean; text: string } | null;
@@ -28,7 +29,13 @@ export function useActionForm<S extends z.ZodType<FieldValues, FieldValues>, T>(
   const [notice, setNotice] = useState<FormNoticeValue>(null);
   const form = useForm<z.input<S>, unknown, z.output<S>>({ resolver: zodResolver(options.schema as never) as never, values: options.defaultValues });
   const onSubmit = form.handleSubmit(async (values) => {
-    const result = await options.action(values);
+    let result: Outcome<T>;
+    try {
+      result = await options.action(values);
+    } catch (error) {
+      if (!isUnreachable(error)) throw error;
+      return setNotice({ ok: false, text: SERVER_UNREACHABLE });
+    }
     setNotice({ ok: result.ok, text: result.message });
     if (!result.ok) return applyServerErrors(form, result.fieldErrors);
     if (options.onSuccess) return options.onSuccess(result.data);
