@@ -109,6 +109,8 @@ export type CertificateIndexTest = {
   method: { code: string; title: string; edition?: string };
   testedAt: string;
   /** Per specimen, in the main result's stored unit, as printed ("9.12 kN/m"). */
+  /** How the test was run, as the method asks it reported (water temperature and hydration time, slurry, oven, direction); absent on older certificates. */
+  conditions?: string[];
   specimenValues: string[];
   /** Departures from the method the technician recorded or the computation found. */
   departures: string[];

@@ -21,6 +21,7 @@ export function CertificateIndexTestSection({ test, number, count, zone = "UTC" 
           <MethodEdition method={test.method} testId="certificate-index-method-edition" />
           <dl className="cert-conditions">
             <dt>Specimens</dt><dd data-testid="certificate-index-specimens">{test.specimenValues.length ? `${test.specimenValues.length}: ${test.specimenValues.join("; ")}` : "not recorded"}</dd>
+            {test.conditions?.length ? <><dt>Conditions</dt><dd data-testid="certificate-index-conditions">{test.conditions.join(" ")}</dd></> : null}
             <dt>Instruments</dt><dd>{test.instruments.length ? test.instruments.join("; ") : "not recorded"}</dd>
           </dl>
         </div>

@@ -9,7 +9,7 @@ import type { ProjectLimits } from "../specifications/find-project-limits";
 
 const EQUIPMENT_WORDS: Record<string, string> = { BALANCE: "Balance", OVEN: "Drying oven", GRADUATED_CYLINDER: "Graduated cylinder", FILTER_PRESS: "Filter press", TENSILE_FRAME: "Tensile frame", LOAD_CELL: "Load cell" };
 
-type IndexEvaluationRecord = { specimenValues?: number[]; departures?: string[] };
+type IndexEvaluationRecord = { specimenValues?: number[]; departures?: string[]; notes?: string[] };
 
 /**
  * The index tests a certificate reports, from the approved index-test results its draft includes: one
@@ -65,6 +65,7 @@ export async function buildIndexTestEntries(tx: Tx, options: { indexResultIds: s
       testedAt: test.testedAt.toISOString(),
       specimenValues: main ? (record.specimenValues ?? []).map((v) => formatPropertyValue(main.property, v, main.unit, options.unitSystem).text) : [],
       departures: record.departures ?? [],
+      conditions: record.notes ?? [],
       instruments: test.equipment.map((e) => `${EQUIPMENT_WORDS[e.equipment.kind] ?? e.role} ${e.equipment.assetTag}${e.calibration ? ` (calibration ${e.calibration.reference})` : ""}`),
       results,
       performedBy: test.performedBy.name,
