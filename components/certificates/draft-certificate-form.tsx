@@ -4,8 +4,11 @@ import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
 import { createCertificateDraftAction } from "@/app/(staff)/certificates/actions";
 
-/** limited: the project's specification sets a limit for the result's property (a certificate judges only those). */
-type Choice = { id: string; label: string; limited: boolean; shipment: string };
+/**
+ * limited: the project's specification sets a limit for the result's property (a certificate judges only those);
+ * noLimit: otherwise, when the project has a specification, the words signing refuses the result with.
+ */
+type Choice = { id: string; label: string; limited: boolean; noLimit: string | null; shipment: string };
 type Group = { project: { id: string; name: string; code: string; client: string }; results: Choice[]; indexResults: Choice[] };
 
 /** Choose approved results of one project (runs' and index tests') to gather on a new certificate. */
@@ -40,12 +43,14 @@ export function DraftCertificateForm({ groups }: { groups: Group[] }) {
           {g.results.map((r) => (
             <label key={r.id} style={{ display: "block", margin: "0.25rem 0" }}>
               <input type="checkbox" checked={(chosen[g.project.id] ?? []).includes(r.id)} onChange={() => toggle(g.project.id, r.id)} /> {r.label}
+              {r.noLimit && <span className="field-error" style={{ display: "block" }} data-testid="no-limit">Signing will refuse it: {r.noLimit}</span>}
             </label>
           ))}
           {g.indexResults.length > 0 && <h3>Index tests</h3>}
           {g.indexResults.map((r) => (
             <label key={r.id} style={{ display: "block", margin: "0.25rem 0" }}>
               <input type="checkbox" checked={(chosen[g.project.id] ?? []).includes(r.id)} onChange={() => toggle(g.project.id, r.id)} /> {r.label}
+              {r.noLimit && <span className="field-error" style={{ display: "block" }} data-testid="no-limit">Signing will refuse it: {r.noLimit}</span>}
             </label>
           ))}
           <button

@@ -3,7 +3,7 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
 import { editCertificateDraftAction } from "@/app/(staff)/certificates/actions";
 import { Field } from "@/components/ui/field";
 import { applyServerErrors } from "@/components/ui/apply-server-errors";
@@ -13,8 +13,9 @@ import { editCertificateDraftSchema, type EditCertificateDraftInput } from "@/li
 type Props = {
   revisionId: string;
   content: { version: number; resultIds: string[]; indexResultIds: string[]; specificationId: string | null; remarks: string; signatoryId: string | null; unitSystem: UnitSystem };
-  results: Array<{ id: string; label: string }>;
-  indexResults: Array<{ id: string; label: string }>;
+  /** noLimit: by specification id, the words signing refuses the result with when that specification sets no limit for it. */
+  results: Array<{ id: string; label: string; noLimit: Record<string, string> }>;
+  indexResults: Array<{ id: string; label: string; noLimit: Record<string, string> }>;
   specifications: Array<{ id: string; label: string }>;
   signatories: Array<{ id: string; name: string }>;
 };
@@ -31,6 +32,12 @@ export function EditDraftForm({ revisionId, content, results, indexResults, spec
     },
   });
   const { register, formState } = form;
+  // Said beside each result before saving, for the specification chosen now.
+  const specificationId = useWatch({ control: form.control, name: "specificationId" });
+  const noLimitNote = (r: { noLimit: Record<string, string> }) => {
+    const words = specificationId ? r.noLimit[specificationId] : undefined;
+    return words ? <span className="field-error" style={{ display: "block" }} data-testid="no-limit">Signing will refuse it: {words}</span> : null;
+  };
   const onSubmit = form.handleSubmit(async (values) => {
     const outcome = await editCertificateDraftAction(values);
     setNotice({ ok: outcome.ok, text: outcome.message });
@@ -43,7 +50,7 @@ export function EditDraftForm({ revisionId, content, results, indexResults, spec
       <fieldset>
         <legend>Results on the certificate</legend>
         {results.map((r) => (
-          <label key={r.id} style={{ display: "block", margin: "0.25rem 0" }}><input type="checkbox" value={r.id} {...register("resultIds")} /> {r.label}</label>
+          <label key={r.id} style={{ display: "block", margin: "0.25rem 0" }}><input type="checkbox" value={r.id} {...register("resultIds")} /> {r.label}{noLimitNote(r)}</label>
         ))}
         {results.length === 0 && <p className="muted">This project has no approved result free for a certificate.</p>}
         {formState.errors.resultIds?.message && <span className="field-error">{formState.errors.resultIds.message}</span>}
@@ -51,7 +58,7 @@ export function EditDraftForm({ revisionId, content, results, indexResults, spec
       <fieldset data-testid="draft-index-results">
         <legend>Index-test results on the certificate</legend>
         {indexResults.map((r) => (
-          <label key={r.id} style={{ display: "block", margin: "0.25rem 0" }}><input type="checkbox" value={r.id} {...register("indexResultIds")} /> {r.label}</label>
+          <label key={r.id} style={{ display: "block", margin: "0.25rem 0" }}><input type="checkbox" value={r.id} {...register("indexResultIds")} /> {r.label}{noLimitNote(r)}</label>
         ))}
         {indexResults.length === 0 && <p className="muted">This project has no approved index-test result free for a certificate.</p>}
         {formState.errors.indexResultIds?.message && <span className="field-error">{formState.errors.indexResultIds.message}</span>}

@@ -23,7 +23,7 @@ type Option = { id: string; label: string };
  */
 export function IndexTestForm(props: {
   methodCode: IndexMethodCode; rollId: string; rollLabNumber: string; settings: Record<string, unknown>; zone: string;
-  coupons: Option[]; instruments: Record<string, Option[]>; correctsId?: string;
+  coupons: Option[]; defaultCouponId: string; instruments: Record<string, Option[]>; correctsId?: string;
 }) {
   const { methodCode, settings } = props;
   const router = useRouter();
@@ -42,7 +42,7 @@ export function IndexTestForm(props: {
   const form = useForm<Record<string, unknown>>({
     resolver: zodResolver(schema as never),
     defaultValues: {
-      rollId: props.rollId, methodCode, couponId: props.coupons[0]?.id ?? "", testedAt: nowToTheMinute(), correctsId: props.correctsId ?? "",
+      rollId: props.rollId, methodCode, couponId: props.defaultCouponId, testedAt: nowToTheMinute(), correctsId: props.correctsId ?? "",
       instruments: Object.fromEntries(method.instruments.map((i) => [i.key, props.instruments[i.key]?.[0]?.id ?? ""])), observations,
     },
   });

@@ -220,8 +220,9 @@ export async function buildDemoScenario(tx: Tx, now = new Date()): Promise<void>
   // The approved run's burettes were refilled and drained once, after its seventh reading.
   const approved = await makeRun(certifiedSpecimen, certifiedRoll, "CELL-01", users.technician!, 18, "APPROVED", 12, 6);
   await approved.ended(12, 12, { thicknessMm: 5.9, massG: 71.3, observations: "Uniform hydration; no channels seen on the cut section." });
-  await moveRoll(certifiedRoll, "TESTED", "TESTED", users.technician!, ago(12), `Specimen ${certifiedSpecimen.labNumber} tested`);
   await tx.review.create({ data: { runId: approved.run.id, reviewerId: users.qa!, decision: "APPROVED", comments: "Criteria met; checklist complete.", createdAt: ago(11) } });
+  // As the app does: the approval of its run, with no other specimen in a cell, leaves the roll tested.
+  await moveRoll(certifiedRoll, "TESTED", "TESTED", users.qa!, ago(11), `Run ${approved.run.labNumber} approved`);
   // Computed as the app computes at approval; only the index flux goes on the demo's issued certificate.
   const [result] = await recordDemoResults(tx, approved.run.id, { approvedById: users.qa!, approvedAt: ago(11) });
   const certificate = await tx.certificate.create({ data: { number: await allocateLabNumber(tx, "certificate", ago(10)), projectId: projects["MWA-C4"]!, clientOrganizationId: orgs.MWA! } });

@@ -8,6 +8,14 @@ import { indexTestName } from "./index-results";
 import type { DraftContent } from "./draft-content";
 
 /**
+ * The sentence signing refuses a result with when the specification sets no limit for its property; the
+ * draft editor and the new-certificate screen show the same words beside such a result beforehand.
+ */
+export function missingLimitMessage(specificationName: string, line: { property: TestProperty; of: string }): string {
+  return `${specificationName} sets no limit for ${inSentence(TEST_PROPERTY_LABELS[line.property])} (the result of ${line.of}): choose a specification that does, or leave the result out.`;
+}
+
+/**
  * What stops a draft from being issued, one sentence each (none: it can be signed): no results included,
  * or a chosen specification without a limit for an included result's property.
  */
@@ -25,8 +33,5 @@ export async function draftProblems(db: Tx | Db, options: { projectId: string; c
   ];
   return lines
     .filter((r) => !limits.get(r.property))
-    .map((r) => ({
-      field: "specificationId" as const,
-      message: `${limits.specificationName} sets no limit for ${inSentence(TEST_PROPERTY_LABELS[r.property])} (the result of ${r.of}): choose a specification that does, or leave the result out.`,
-    }));
+    .map((r) => ({ field: "specificationId" as const, message: missingLimitMessage(limits.specificationName, r) }));
 }

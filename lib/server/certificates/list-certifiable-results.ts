@@ -1,8 +1,10 @@
 import "server-only";
+import type { TestProperty } from "@/lib/results/property-units";
 import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
 import { getDb } from "../db/client";
 import { findProjectLimits } from "../specifications/find-project-limits";
+import { missingLimitMessage } from "./draft-problems";
 import { LIVE_REVISION_STATES } from "./certificate-collision";
 import { listFreeIndexResults, type FreeIndexResult } from "./list-free-index-results";
 
@@ -35,6 +37,12 @@ export async function listCertifiableResults(options: { actor: CurrentUser }) {
     entry.indexResults.push(r);
     byProject.set(r.project.id, entry);
   }
-  // What the project's newest specification limits, so the form can choose every result it will judge.
-  return Promise.all([...byProject.values()].map(async (g) => ({ ...g, limited: ((await findProjectLimits({ projectId: g.project.id }))?.limits ?? []).map((l) => l.property) })));
+  // What the project's newest specification (the one a new draft takes) limits, so the form can choose every
+  // result it will judge, and say beside the others the words signing would refuse them with.
+  return Promise.all([...byProject.values()].map(async (g) => {
+    const limits = await findProjectLimits({ projectId: g.project.id });
+    const lines = [...g.results.map((r) => ({ id: r.id, property: r.property as TestProperty, of: r.run.labNumber })), ...g.indexResults];
+    const noLimit = limits ? Object.fromEntries(lines.filter((r) => !limits.get(r.property)).map((r) => [r.id, missingLimitMessage(limits.specificationName, r)])) : {};
+    return { ...g, limited: (limits?.limits ?? []).map((l) => l.property), noLimit: noLimit as Record<string, string> };
+  }));
 }

@@ -5,6 +5,7 @@ import { TEST_PROPERTY_LABELS, type TestProperty } from "@/lib/results/property-
 import type { Db } from "../db/client";
 import type { Tx } from "../db/transaction";
 import { LIVE_REVISION_STATES } from "./certificate-collision";
+import { indexTestName } from "./index-results";
 
 export type FreeIndexResult = {
   id: string;
@@ -17,6 +18,8 @@ export type FreeIndexResult = {
   project: { id: string; name: string; code: string; client: string };
   /** "roll R26-00012 (shipment S26-00004) · ASTM D5890 · bentonite swell index". */
   label: string;
+  /** The test as the certificate's checks name it ("the swell index (ASTM D5890) of R26-00012"). */
+  of: string;
 };
 
 /**
@@ -47,6 +50,7 @@ export async function listFreeIndexResults(db: Tx | Db, options: { projectId?: s
         id: r.id, property: r.property, value: r.value, unit: r.unit, rollLabNumber: roll.labNumber, shipmentLabNumber: roll.shipment.labNumber,
         project: { id: roll.project.id, name: roll.project.name, code: roll.project.code, client: roll.project.clientOrganization.name },
         label: `roll ${roll.labNumber} (shipment ${roll.shipment.labNumber}) · ${method} · ${inSentence(TEST_PROPERTY_LABELS[r.property])}`,
+        of: indexTestName(r.indexTest),
       };
     });
 }

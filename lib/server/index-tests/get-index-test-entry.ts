@@ -10,9 +10,9 @@ import { getDb } from "../db/client";
 import { findSettingsVersionInForce } from "../methods/settings-in-use";
 
 /**
- * What the entry form of an index test on a roll offers: the roll, its coupons that can take the test, the
- * instruments of each kind the method uses that are usable now (in calibration, or allowed by a QA
- * override), and the method's settings in force with their version.
+ * What the entry form of an index test on a roll offers: the roll, its coupons that can take the test (and
+ * the one cut for it, chosen beforehand), the instruments of each kind the method uses that are usable now
+ * (in calibration, or allowed by a QA override), and the method's settings in force with their version.
  */
 export async function getIndexTestEntry(options: { actor: CurrentUser; rollLabNumber: string; methodCode: IndexMethodCode; now?: Date }) {
   requirePermission(options.actor, "run.operate");
@@ -23,7 +23,7 @@ export async function getIndexTestEntry(options: { actor: CurrentUser; rollLabNu
     where: { labNumber: options.rollLabNumber.trim() },
     select: {
       id: true, labNumber: true, rollNumber: true, lotNumber: true, project: { select: { name: true } },
-      coupons: { where: { state: { in: ["CUT", "TESTED"] } }, orderBy: { labNumber: "asc" }, select: { id: true, labNumber: true, intendedMethodCode: true, positionInSample: true } },
+      coupons: { where: { state: { in: ["CUT", "TESTED"] } }, orderBy: { labNumber: "asc" }, select: { id: true, labNumber: true, intendedMethodCode: true, positionInSample: true, state: true } },
       indexTests: { where: { methodCode: options.methodCode, state: "RETURNED", correctedBy: null }, orderBy: { testedAt: "desc" }, take: 1, select: { id: true } },
     },
   });
@@ -42,7 +42,11 @@ export async function getIndexTestEntry(options: { actor: CurrentUser; rollLabNu
   const coupons = roll.coupons
     .filter((c) => !method.needsCoupon || c.intendedMethodCode === options.methodCode)
     .map((c) => ({ id: c.id, label: `${c.labNumber} · ${c.positionInSample}` }));
+  // Only a coupon cut for this very test is chosen for the person; one cut for something else (hydraulic
+  // specimens, another index test) is offered but left for them to choose.
+  const cutForIt = roll.coupons.filter((c) => c.intendedMethodCode === options.methodCode);
+  const defaultCouponId = (cutForIt.find((c) => c.state === "CUT") ?? cutForIt[0])?.id ?? "";
   const definition = methodSettingsDefinition(options.methodCode)!;
   const version = await findSettingsVersionInForce(db, options.methodCode, now);
-  return { roll, method, coupons, instruments, settings: readStoredSettings(definition, version?.settings ?? {}), settingsVersion: version?.version ?? null, returnedId: roll.indexTests[0]?.id ?? null };
+  return { roll, method, coupons, defaultCouponId, instruments, settings: readStoredSettings(definition, version?.settings ?? {}), settingsVersion: version?.version ?? null, returnedId: roll.indexTests[0]?.id ?? null };
 }

@@ -8,6 +8,7 @@ import { approveRunSchema } from "@/lib/validation/review";
 import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
 import { withActor } from "../db/transaction";
+import { markRollTestedIfDone } from "../custody/mark-roll-tested";
 import { evaluateRunRecords } from "../runs/evaluate-run-records";
 import { parseOrThrow } from "../validation/parse";
 
@@ -23,7 +24,7 @@ export async function approveRun(options: { actor: CurrentUser; input: unknown; 
   const input = parseOrThrow(approveRunSchema, options.input);
   const now = options.now ?? new Date();
   return withActor(options.actor, async (tx) => {
-    const run = await tx.run.findUnique({ where: { id: input.runId }, select: { id: true, labNumber: true, state: true, version: true, performedById: true, methodCode: true, terminationKind: true } });
+    const run = await tx.run.findUnique({ where: { id: input.runId }, select: { id: true, labNumber: true, state: true, version: true, performedById: true, methodCode: true, terminationKind: true, specimen: { select: { coupon: { select: { rollId: true } } } } } });
     if (!run) throw new AppError("NOT_FOUND");
     const allowed = canApproveRun(options.actor, run);
     if (!allowed.ok) throw new AppError("FORBIDDEN", allowed.reason);
@@ -58,6 +59,7 @@ export async function approveRun(options: { actor: CurrentUser; input: unknown; 
           approvedById: options.actor.id, approvedAt: now,
         },
       });
+    await markRollTestedIfDone(tx, { actor: options.actor, rollId: run.specimen.coupon.rollId, at: now, note: `Run ${run.labNumber} approved` });
     return { labNumber: run.labNumber, results: results.length };
   });
 }

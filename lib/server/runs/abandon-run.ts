@@ -5,6 +5,7 @@ import type { CurrentUser } from "../auth/current-user";
 import { requirePermission } from "../auth/require-permission";
 import { withActor } from "../db/transaction";
 import { applyCustodyAction } from "../custody/apply-custody-action";
+import { markRollTestedIfDone } from "../custody/mark-roll-tested";
 import { parseOrThrow } from "../validation/parse";
 import { advanceRun, loadRunForStep } from "./run-guards";
 
@@ -41,6 +42,8 @@ export async function abandonRun(options: { actor: CurrentUser; input: unknown; 
       await applyCustodyAction(tx, { actor: options.actor, kind: "specimen", id: run.specimen.id, action: "RETAINED", at: now, toLocationId, retainUntil, note });
     if (input.specimenFate === "disposal" && specimen.state !== "DISPOSED")
       await applyCustodyAction(tx, { actor: options.actor, kind: "specimen", id: run.specimen.id, action: "DISPOSED", at: now, toLocationId: null, note });
+    // With this specimen out of its cell, a roll whose other run was approved is now tested.
+    await markRollTestedIfDone(tx, { actor: options.actor, rollId: run.specimen.coupon.rollId, at: now, note });
     return { labNumber: run.labNumber, specimenLabNumber: run.specimen.labNumber };
   });
 }

@@ -38,7 +38,7 @@ export default async function NewIndexTestPage({ params }: Props) {
         <p className="notice notice-error">No coupon of this roll was cut for {entry.method.couponWhat} yet: <Link href={`/samples/rolls/${entry.roll.labNumber}`}>cut one on the roll page</Link> first.</p>
       ) : (
         <section className="card">
-          <IndexTestForm methodCode={method} rollId={entry.roll.id} rollLabNumber={entry.roll.labNumber} settings={entry.settings} zone={zone} coupons={entry.coupons} instruments={entry.instruments} correctsId={entry.returnedId ?? undefined} />
+          <IndexTestForm methodCode={method} rollId={entry.roll.id} rollLabNumber={entry.roll.labNumber} settings={entry.settings} zone={zone} coupons={entry.coupons} defaultCouponId={entry.defaultCouponId} instruments={entry.instruments} correctsId={entry.returnedId ?? undefined} />
         </section>
       )}
     </>
