@@ -164,7 +164,7 @@ export function ReadingsGrid({ runId, pressureUnit, withChemistry, carryOver, zo
         </nav>
       )}
       <ScrollArea label="Readings to enter">
-        <table className={`list ${styles.grid}`} data-testid="readings-grid" ref={tableRef} onFocus={onFocus}>
+        <table className={`list wrap-heads ${styles.grid}`} data-testid="readings-grid" ref={tableRef} onFocus={onFocus}>
           <thead><tr><th>#</th>{columns.map((c) => <th key={c.key}>{c.title}</th>)}<th><span className="visually-hidden">Remove and problems</span></th></tr></thead>
           <tbody>
             {rows.fields.map((field, index) => {
