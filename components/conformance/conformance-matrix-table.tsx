@@ -24,7 +24,7 @@ export function ConformanceMatrixTable({ limits, rows, rollHref }: { limits: Mat
   if (rows.length === 0) return <p className="empty">No rolls yet.</p>;
   return (
     <ScrollArea>
-      <table className="list" data-testid="conformance-matrix">
+      <table className="list wrap-heads" data-testid="conformance-matrix">
         <thead>
           <tr>
             <th>Roll</th><th>Lot</th>
@@ -39,7 +39,7 @@ export function ConformanceMatrixTable({ limits, rows, rollHref }: { limits: Mat
               <td>{row.roll.lotNumber}</td>
               {row.cells.map((c) => (
                 <td key={c.property} data-property={c.property} data-status={c.status} title={c.decision ?? undefined}>
-                  {c.value !== null && c.unit !== null && <div className="mono">{formatResultValue(c.value, c.unit, { significantDigits: 3 })}{c.standardDeviation !== null && <span className="muted"> (s {formatNumber(c.standardDeviation, { significantDigits: 2 })})</span>}{c.expandedUncertainty !== null && <span className="muted"> ± {formatNumber(c.expandedUncertainty, { significantDigits: 2 })}</span>}</div>}
+                  {c.value !== null && c.unit !== null && <div className="mono">{formatResultValue(c.value, c.unit, { significantDigits: 3 })}{c.standardDeviation !== null && <span className="muted"> (s {formatNumber(c.standardDeviation, { significantDigits: 2 })})</span>}{c.expandedUncertainty !== null && <span className="muted" style={{ display: "block" }}> ± {formatNumber(c.expandedUncertainty, { significantDigits: 2 })}</span>}</div>}
                   <span className={`state ${TONE[c.status] ?? ""}`}>{c.status}</span>
                   {c.status === "fails" && c.decision && <div className="hint" data-testid="failing-decision">{c.decision}</div>}
                   {c.source && c.status !== "conforms" && c.status !== "fails" && <div className="muted">{c.source}</div>}

@@ -38,7 +38,7 @@ export function StaffQueues({ queues, now, zone = "UTC" }: { queues: HomeQueues;
       {queues.indexTestsToReview && (
         <QueueTable title="Index tests to review" empty="No index test is waiting for review." testId="queue-index-reviews"
           headings={["Test", "Roll", "Technician", "Waiting"]} items={queues.indexTestsToReview}
-          row={(t) => <tr key={t.id}><td><Link href={`/index-tests/${t.id}`}>ASTM {t.methodCode}</Link></td><td className="mono">{t.roll.labNumber}</td><td>{t.performedBy.name}</td><td>{formatAge(t.testedAt, now)}</td></tr>} />
+          row={(t) => <tr key={t.id}><td><Link href={`/index-tests/${t.id}`}>ASTM {t.methodCode}</Link></td><td className="mono">{t.roll.labNumber}</td><td>{t.performedBy.name}</td><td>{formatAge(t.createdAt, now)}</td></tr>} />
       )}
       {queues.runs && (
         <QueueTable title="Runs in progress" empty="No run is in progress." testId="queue-runs"

@@ -164,7 +164,7 @@ export function ReadingsGrid({ runId, pressureUnit, withChemistry, carryOver, zo
         </nav>
       )}
       <ScrollArea label="Readings to enter">
-        <table className={`list ${styles.grid}`} data-testid="readings-grid" ref={tableRef} onFocus={onFocus}>
+        <table className={`list wrap-heads ${styles.grid}`} data-testid="readings-grid" ref={tableRef} onFocus={onFocus}>
           <thead><tr><th>#</th>{columns.map((c) => <th key={c.key}>{c.title}</th>)}<th><span className="visually-hidden">Remove and problems</span></th></tr></thead>
           <tbody>
             {rows.fields.map((field, index) => {
@@ -209,7 +209,7 @@ export function ReadingsGrid({ runId, pressureUnit, withChemistry, carryOver, zo
       <div className={styles.actions}>
         <button className="button" type="submit" disabled={formState.isSubmitting}>{formState.isSubmitting ? "Saving…" : `Save ${filled} reading${filled === 1 ? "" : "s"}`}</button>
         <button type="button" className="button button-quiet" onClick={addRow}>Add a row</button>
-        <span className="muted">Type a time as 14:30 or 2026-11-30 14:30 (the lab&apos;s clock). Enter or Tab moves to the next cell and adds a row at the end; Ctrl+Enter saves; a last row left blank is not saved. Nothing is saved unless every row is valid.</span>
+        <span className="muted">Type a time as 14:30 or 2026-11-30 14:30 (the lab&apos;s clock). Enter moves to the next cell and, on the last cell, adds a row; Tab moves on without adding one; Ctrl+Enter saves; a last row left blank is not saved. Nothing is saved unless every row is valid.</span>
       </div>
     </form>
   );

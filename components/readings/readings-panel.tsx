@@ -64,7 +64,7 @@ export async function ReadingsPanel({ runId, actor, zone = "UTC", page, basePath
         <p className="empty">No readings yet.</p>
       ) : (
         <ScrollArea>
-          <table className={`list ${styles.numbers}`} data-testid="readings-table">
+          <table className={`list wrap-heads ${styles.numbers}`} data-testid="readings-table">
             <thead>
               <tr>
                 <th>#</th><th>Taken</th><th>Elapsed (h)</th><th>Inflow level (mm)</th><th>Outflow level (mm)</th><th>Inflow (mL)</th><th>Outflow (mL)</th>

@@ -24,10 +24,16 @@ export function checkStagePressures(p: StagePressuresPa, requiredMarginPa: numbe
     .filter((i): i is { assetTag: string; ratedMaxPressurePa: number } => i.ratedMaxPressurePa !== null && highestPa > i.ratedMaxPressurePa)
     .map((i) => ({ assetTag: i.assetTag, ratedMaxPressurePa: i.ratedMaxPressurePa, pressurePa: highestPa }));
   const warnings: string[] = [];
-  if (!marginKept)
-    warnings.push(
-      `The cell pressure exceeds the higher line pressure by ${(marginPa / 1000).toFixed(1)} kPa, less than the ${(requiredMarginPa / 1000).toFixed(0)} kPa confining margin: the membrane can burst or the specimen can be lifted. Raise the cell pressure first.`,
-    );
+  if (!marginKept) {
+    const margin = `${(requiredMarginPa / 1000).toFixed(0)} kPa confining margin`;
+    const byKPa = (Math.abs(marginPa) / 1000).toFixed(1);
+    // A cell level with or below the line is no "excess": say where it stands and what it must reach.
+    const where =
+      byKPa === "0.0" ? `The cell pressure is level with the higher line pressure; it must exceed it by the ${margin}`
+      : marginPa > 0 ? `The cell pressure exceeds the higher line pressure by ${byKPa} kPa, less than the ${margin}`
+      : `The cell pressure is ${byKPa} kPa below the higher line pressure; it must exceed it by the ${margin}`;
+    warnings.push(`${where}: the membrane can burst or the specimen can be lifted. Raise the cell pressure first.`);
+  }
   for (const o of overRated)
     warnings.push(`${o.assetTag} is rated to ${(o.ratedMaxPressurePa / 1000).toFixed(0)} kPa; ${(o.pressurePa / 1000).toFixed(0)} kPa would exceed it.`);
   return { marginPa, requiredMarginPa, marginKept, overRated, warnings };

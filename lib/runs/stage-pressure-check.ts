@@ -52,11 +52,15 @@ export function checkStage(input: {
       });
   }
   const aboveInfluent = p.cellPa - p.influentPa;
-  if (aboveInfluent < rules.minCellAboveInfluentPa - 1e-6)
-    departures.push({
-      rule: "cell-above-influent",
-      message: `The cell pressure is ${kPa(aboveInfluent)} above the influent line, less than the ${kPa(rules.minCellAboveInfluentPa)} the method requires in permeation: the membrane can lift off the specimen or burst. Raise the cell pressure first.`,
-    });
+  if (aboveInfluent < rules.minCellAboveInfluentPa - 1e-6) {
+    const required = kPa(rules.minCellAboveInfluentPa);
+    // A cell level with or below the influent line is not "above" it by a negative amount.
+    const where =
+      kPa(aboveInfluent) === "0 kPa" ? `The cell pressure is level with the influent line; the method requires it ${required} above in permeation`
+      : aboveInfluent < 0 ? `The cell pressure is ${kPa(-aboveInfluent)} below the influent line; the method requires it ${required} above in permeation`
+      : `The cell pressure is ${kPa(aboveInfluent)} above the influent line, less than the ${required} the method requires in permeation`;
+    departures.push({ rule: "cell-above-influent", message: `${where}: the membrane can lift off the specimen or burst. Raise the cell pressure first.` });
+  }
   if (input.equilibrationS !== undefined && rules.minEquilibrationS > 0 && (input.equilibrationS === null || input.equilibrationS < rules.minEquilibrationS))
     departures.push({
       rule: "equilibration-time",

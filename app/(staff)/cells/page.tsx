@@ -5,6 +5,7 @@ import { formatAge, formatDateTime } from "@/lib/format/dates";
 import { can } from "@/lib/policy/permissions";
 import { requirePageUser } from "@/lib/server/auth/require-page-user";
 import { getCellBoard } from "@/lib/server/runs/get-cell-board";
+import { cellBoardHeadline, summariseCellBoard } from "@/lib/runs/cell-board-summary";
 import styles from "./cell-board.module.css";
 import { getLabTimeZone } from "@/lib/server/lab/read-lab-time-zone";
 
@@ -15,13 +16,12 @@ export default async function CellBoardPage() {
   const zone = await getLabTimeZone();
   const cells = await getCellBoard({ actor });
   const now = new Date();
-  const free = cells.filter((c) => !c.run).length;
   return (
     <>
       <div className="page-head">
         <div>
           <h1>Cell board</h1>
-          <p className="muted">{cells.length} cells · {free} free. Projected ends come from the readings so far, only where they support one.</p>
+          <p className="muted">{cellBoardHeadline(summariseCellBoard(cells))}. Projected ends come from the readings so far, only where they support one.</p>
         </div>
         {can(actor.role, "run.operate") && <div className="links"><Link className="button" href="/runs/new">Start a run</Link></div>}
       </div>

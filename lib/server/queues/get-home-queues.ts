@@ -95,13 +95,16 @@ async function findIndexTestsWaiting() {
   return out.slice(0, LIMIT);
 }
 
-/** Index tests recorded and awaiting QA review, oldest first. */
+/**
+ * Index tests recorded and awaiting QA review, longest waiting first. They wait from when they were recorded
+ * (a redo after a return is a new record), as runs wait from submission, not from the day of testing.
+ */
 async function findIndexTestsToReview() {
   return getDb().indexTest.findMany({
     where: { state: "SUBMITTED" },
-    orderBy: { testedAt: "asc" },
+    orderBy: { createdAt: "asc" },
     take: LIMIT,
-    select: { id: true, methodCode: true, testedAt: true, performedBy: { select: { name: true } }, roll: { select: { labNumber: true } } },
+    select: { id: true, methodCode: true, testedAt: true, createdAt: true, performedBy: { select: { name: true } }, roll: { select: { labNumber: true } } },
   });
 }
 

@@ -1,6 +1,7 @@
 import "server-only";
 import { AppError } from "@/lib/errors/app-error";
 import { Prisma } from "@/lib/generated/prisma/client";
+import { inSentence } from "@/lib/format/sentence-case";
 import { TEST_PROPERTY_LABELS } from "@/lib/results/property-units";
 import { setSpecificationLimitSchema } from "@/lib/validation/specifications";
 import type { CurrentUser } from "../auth/current-user";
@@ -10,7 +11,7 @@ import { parseOrThrow } from "../validation/parse";
 import { limitSelect } from "./limit-select";
 
 const duplicate = (property: keyof typeof TEST_PROPERTY_LABELS) =>
-  new AppError("CONFLICT", `This specification already has a limit for ${TEST_PROPERTY_LABELS[property].toLowerCase()}.`, {
+  new AppError("CONFLICT", `This specification already has a limit for ${inSentence(TEST_PROPERTY_LABELS[property])}.`, {
     fieldErrors: { property: "Already limited here; change that limit instead." },
   });
 

@@ -25,7 +25,8 @@ function allQueues(): HomeQueues {
     ],
     projects: null,
     indexTestsWaiting: [{ rollLabNumber: "R26-00112", rollNumber: "R-4107", projectName: "Cell 4 landfill expansion", methods: [{ code: "D5890", title: "Swell index" }, { code: "D5891", title: "Fluid loss" }] }],
-    indexTestsToReview: [{ id: "it1", methodCode: "D5993", testedAt: hoursAgo(2), performedBy: name("Signe Pellow"), roll: { labNumber: "R26-00110" } }],
+    // Tested six days before it was recorded: it has waited for review since it was recorded.
+    indexTestsToReview: [{ id: "it1", methodCode: "D5993", testedAt: hoursAgo(146), createdAt: hoursAgo(2), performedBy: name("Signe Pellow"), roll: { labNumber: "R26-00110" } }],
   } as unknown as HomeQueues;
 }
 

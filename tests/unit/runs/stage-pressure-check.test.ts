@@ -22,6 +22,18 @@ describe("pressure checks that know the stage", () => {
     expect(checkStage({ kind: "SATURATION", pressures: kPa(345, 310, 310), rules, instruments: rated }).departures).toEqual([]);
   });
 
+  it("a cell level with or below a line is said to be so, never to exceed it by a negative amount", () => {
+    const below = checkStage({ kind: "SATURATION", pressures: kPa(120, 130, 110), rules, instruments: rated });
+    expect(below.departures[0]!.message).toMatch(/^The cell pressure is 10\.0 kPa below the higher line pressure; it must exceed it by the 35 kPa confining margin: /);
+    const level = checkStage({ kind: "BACK_PRESSURE", pressures: kPa(130, 130, 130), rules, instruments: rated });
+    expect(level.departures[0]!.message).toMatch(/^The cell pressure is level with the higher line pressure; it must exceed it by the 35 kPa confining margin: /);
+    const underInfluent = checkStage({ kind: "PERMEATION", pressures: kPa(525, 530, 515), rules: { ...rules, permeation: null }, instruments: rated, equilibrationS: 48 * 3600 });
+    expect(underInfluent.departures.map((d) => d.message)).toEqual([
+      "The cell pressure is 5 kPa below the influent line; the method requires it 10 kPa above in permeation: the membrane can lift off the specimen or burst. Raise the cell pressure first.",
+    ]);
+    for (const d of [...below.departures, ...level.departures, ...underInfluent.departures]) expect(d.message).not.toMatch(/-\d|by -|exceeds the higher line pressure by 0/);
+  });
+
   it("permeation off the method: each line outside the tolerance is named; the cell too close to the influent; a short hold", () => {
     const off = checkStage({ kind: "PERMEATION", pressures: kPa(575, 530, 500), rules, instruments: rated, equilibrationS: 50 * 3600 });
     expect(off.departures).toEqual([{ rule: "permeation-pressure", message: "The method prescribes permeation at cell 550 kPa, effluent 515 kPa (± 10 kPa); cell 575 kPa, effluent 500 kPa are outside it." }]);
