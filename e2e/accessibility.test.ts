@@ -60,6 +60,7 @@ async function crawl(page: Page, role: string, start: string, expected: readonly
   // Another address of a page already scanned is opened only for its links, and only while some page the
   // role may open is unreached: a roll with index tests links pages that the first roll opened may not.
   const harvested = new Map<string, number>();
+  const sentEmpty = new Set<string>();
   const worthOpening = (pattern: string) => !visited.has(pattern) || ((harvested.get(pattern) ?? 0) < HARVEST_PER_PAGE && expected.some((p) => !visited.has(p)));
   const queue = [start];
   while (queue.length) {
@@ -81,7 +82,15 @@ async function crawl(page: Page, role: string, start: string, expected: readonly
       const target = patternOf(link.split("?")[0]!, matchers);
       if (target && !opened.has(link) && worthOpening(target)) queue.push(link);
     }
-    if (landed.endsWith("/new") && harvested.get(landed) === undefined && (await sendEmptyForm(page))) findings.push(...(await scan(page, "sent empty")));
+    // Sent empty once per form, from its plain address: one reached with choices made in the address (a
+    // specimen to mount, say) is not empty, and sending it would really save.
+    if (landed.endsWith("/new") && !address.includes("?") && !sentEmpty.has(landed)) {
+      sentEmpty.add(landed);
+      if (await sendEmptyForm(page)) {
+        await settle(page);
+        findings.push(...(await scan(page, "sent empty")));
+      }
+    }
   }
   return findings;
 }
