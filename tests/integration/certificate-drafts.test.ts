@@ -2,7 +2,6 @@ import { writeFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import type { CertificateSnapshot } from "@/lib/certificates/certificate-snapshot";
 import { withActor } from "@/lib/server/db/transaction";
-import { approveRun } from "@/lib/server/review/approve-run";
 import { buildCertificateSnapshot } from "@/lib/server/certificates/build-certificate-snapshot";
 import { createCertificateDraft } from "@/lib/server/certificates/create-certificate-draft";
 import { editCertificateDraft } from "@/lib/server/certificates/edit-certificate-draft";
@@ -13,27 +12,13 @@ import { previewCertificateDraft } from "@/lib/server/certificates/preview-certi
 import { reviseCertificate } from "@/lib/server/certificates/revise-certificate";
 import { findBrowser } from "../../e2e/support/find-browser";
 import { db, makeUser, TEST_PASSWORD } from "../support/factories";
-import { makePermeatingRun } from "../support/run-fixtures";
+import { approvedRun } from "../support/approved-run";
 import { failure } from "../support/refusals";
 
 const SYSTEM = { id: "system:test" };
 const browser = findBrowser();
 if (!browser && process.env.SEEPLINE_REQUIRE_BROWSER === "1") throw new Error("these tests issue certificates and need Chromium");
 
-/** An approved D5887 run (index flux and k20, invented steady readings) of a project, with its two result ids. */
-async function approvedRun(technicianId: string, qa: Parameters<typeof approveRun>[0]["actor"], projectId?: string) {
-  const { run, project } = await makePermeatingRun(technicianId, projectId ? { projectId } : {});
-  await withActor(SYSTEM, async (tx) => {
-    await tx.run.update({ where: { id: run.id }, data: { state: "SUBMITTED", terminatedAt: new Date(), terminationKind: "CRITERIA_MET", postTestThicknessMm: 5.9, submittedAt: new Date() } });
-    const stepMl = 2e-9 * ((Math.PI * 0.1 ** 2) / 4) * 21_600 * 1e6;
-    await tx.reading.createMany({
-      data: Array.from({ length: 8 }, (_, i) => ({ runId: run.id, sequence: i + 1, takenAt: new Date(), elapsedS: i * 21_600, inflowCumulativeMl: i * stepMl, outflowCumulativeMl: i * stepMl * 0.98, headPa: 14_000, temperatureC: 20, recordedById: technicianId })),
-    });
-  });
-  await approveRun({ actor: qa, input: { runId: run.id, version: 1 } });
-  const results = await db().result.findMany({ where: { runId: run.id }, select: { id: true, property: true } });
-  return { run, project, flux: results.find((r) => r.property === "INDEX_FLUX")!.id, k: results.find((r) => r.property === "HYDRAULIC_CONDUCTIVITY")!.id };
-}
 
 /** A project specification with the given limits (GRI-GCL3 values as cited in public specifications, DOMAIN.md). */
 function makeSpecification(projectId: string, limits: Array<"INDEX_FLUX" | "HYDRAULIC_CONDUCTIVITY">) {

@@ -1,30 +1,15 @@
 import { describe, expect, it } from "vitest";
 import { withActor } from "@/lib/server/db/transaction";
-import { approveRun } from "@/lib/server/review/approve-run";
 import { createCertificateDraft } from "@/lib/server/certificates/create-certificate-draft";
 import { getDraftEditor } from "@/lib/server/certificates/get-draft-editor";
 import { issueCertificate } from "@/lib/server/certificates/issue-certificate";
 import { listCertifiableResults } from "@/lib/server/certificates/list-certifiable-results";
 import { db, makeUser, TEST_PASSWORD } from "../support/factories";
-import { makePermeatingRun } from "../support/run-fixtures";
+import { approvedRun } from "../support/approved-run";
 import { failure } from "../support/refusals";
 
 const SYSTEM = { id: "system:test" };
 
-/** An approved D5887 run (index flux and k20, invented steady readings) of a new project, with its two result ids. */
-async function approvedRun(technicianId: string, qa: Parameters<typeof approveRun>[0]["actor"]) {
-  const { run, project } = await makePermeatingRun(technicianId);
-  await withActor(SYSTEM, async (tx) => {
-    await tx.run.update({ where: { id: run.id }, data: { state: "SUBMITTED", terminatedAt: new Date(), terminationKind: "CRITERIA_MET", postTestThicknessMm: 5.9, submittedAt: new Date() } });
-    const stepMl = 2e-9 * ((Math.PI * 0.1 ** 2) / 4) * 21_600 * 1e6;
-    await tx.reading.createMany({
-      data: Array.from({ length: 8 }, (_, i) => ({ runId: run.id, sequence: i + 1, takenAt: new Date(), elapsedS: i * 21_600, inflowCumulativeMl: i * stepMl, outflowCumulativeMl: i * stepMl * 0.98, headPa: 14_000, temperatureC: 20, recordedById: technicianId })),
-    });
-  });
-  await approveRun({ actor: qa, input: { runId: run.id, version: 1 } });
-  const results = await db().result.findMany({ where: { runId: run.id }, select: { id: true, property: true } });
-  return { run, project, flux: results.find((r) => r.property === "INDEX_FLUX")!.id, k: results.find((r) => r.property === "HYDRAULIC_CONDUCTIVITY")!.id };
-}
 
 /** A project specification limiting only the properties given (invented values). */
 function makeSpecification(projectId: string, name: string, limits: Array<"INDEX_FLUX" | "HYDRAULIC_CONDUCTIVITY">) {
