@@ -82,6 +82,40 @@ export function bodyProblem(request, limit = BODY_LIMIT_BYTES) {
   return null;
 }
 
+/** Bodies up to this size are read (and thrown away) before a refusal is sent; a larger one is not waited for. */
+const DRAIN_LIMIT_BYTES = 64 * 1024 * 1024;
+
+/**
+ * Sends a refusal once the client has finished sending its body: a connection closed while the client is
+ * still writing makes it see a broken pipe instead of the answer. The body is discarded, never handed on;
+ * one larger than DRAIN_LIMIT_BYTES (declared or counted) is answered at once.
+ */
+function refuseAfterBody(request, answer) {
+  let answered = false;
+  const once = () => {
+    if (!answered) {
+      answered = true;
+      answer();
+    }
+  };
+  const declared = Number(request.headers["content-length"] ?? 0);
+  const hasBody = declared > 0 || request.headers["transfer-encoding"] !== undefined;
+  if (!hasBody || declared > DRAIN_LIMIT_BYTES || request.readableEnded) {
+    once();
+    request.resume();
+    return;
+  }
+  let seen = 0;
+  request.on("data", (chunk) => {
+    seen += chunk.length;
+    if (seen > DRAIN_LIMIT_BYTES) once();
+  });
+  request.on("end", once);
+  request.on("error", once);
+  request.on("close", once);
+  request.resume();
+}
+
 /** The request listener: checks, headers and the client address, then Next.js's handler. */
 export function frontDoor(handle, options) {
   const headers = baselineSecurityHeaders(options.https);
@@ -93,9 +127,7 @@ export function frontDoor(handle, options) {
       response.statusCode = refusal.status;
       response.setHeader("Content-Type", "text/plain; charset=utf-8");
       response.setHeader("Connection", "close");
-      response.end(`${refusal.message}\n`);
-      // An unread body must not be taken for the next request on this connection.
-      request.resume();
+      refuseAfterBody(request, () => response.end(`${refusal.message}\n`));
       return;
     }
     request.headers[CLIENT_ADDRESS_HEADER] = clientAddress(request, options.trustedProxies);
