@@ -61,7 +61,8 @@ describe("index-test results on certificates", () => {
     expect(test.method).toEqual({ code: "D5890", title: "Swell index (ASTM D5890)", edition: "D5890-19" });
     expect(test.rollLabNumber).toBe(a.labNumber);
     expect(test.instruments).toHaveLength(2);
-    // D5890 asks the report to give the hydration time and the water's temperature (fixture: 18 h, 21 °C).
+    // The report of a D5890 test gives the hydration time and the water's temperature (from memory of the
+    // standard's reporting clause; fixture: 18 h, 21 °C).
     expect(test.conditions).toEqual(["Water at 21 °C; read after 18 h."]);
     expect(test.results[0]).toMatchObject({ property: "SWELL_INDEX", specimenCount: 1, conformance: { conforms: true, direction: "MINIMUM", method: "ROUNDING" } });
     expect(snapshot.decisionRule).toContain("Bentonite swell index: ASTM E29 rounding method");
